@@ -1,0 +1,88 @@
+import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import { parseBriefText, type ParsedBrief } from './parse.js';
+import { BRIEF_SCHEMA } from './schema.js';
+import type { DataSource, FieldHint, ResolvedBrief } from './types.js';
+import { validateAgainstSchema } from './validate.js';
+
+/** Frame size when the brief gives none, in CSS pixels. */
+export const DEFAULT_SIZE = { width: 720, height: 440 } as const;
+
+function asList(value: unknown): string[] {
+  if (value === undefined) return [];
+  return Array.isArray(value) ? value.map(String) : [String(value)];
+}
+
+function dataSource(raw: Record<string, unknown>): DataSource {
+  if (Array.isArray(raw.rows)) return { kind: 'rows', rows: raw.rows as Record<string, unknown>[] };
+  if (raw.data === '-') return { kind: 'stdin' };
+  return { kind: 'file', path: String(raw.data) };
+}
+
+/** Applies defaults to a schema-valid brief object. */
+export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
+  const size = (raw.size ?? {}) as { width?: number; height?: number };
+  return {
+    data: dataSource(raw),
+    intent: raw.intent as ResolvedBrief['intent'],
+    keys: asList(raw.keys),
+    values: asList(raw.values),
+    title: raw.title as string | undefined,
+    subtitle: raw.subtitle as string | undefined,
+    source: raw.source as string | undefined,
+    description: raw.description as string | undefined,
+    fields: (raw.fields ?? {}) as Record<string, FieldHint>,
+    form: raw.form as ResolvedBrief['form'],
+    order: (raw.order ?? 'auto') as ResolvedBrief['order'],
+    baseline: (raw.baseline ?? 'zero') as ResolvedBrief['baseline'],
+    aggregate: (raw.aggregate ?? 'sum') as ResolvedBrief['aggregate'],
+    style: (raw.style ?? 'report') as string,
+    size: { width: size.width ?? DEFAULT_SIZE.width, height: size.height ?? DEFAULT_SIZE.height },
+    output: asList(raw.output),
+  };
+}
+
+function withPositions(diagnostics: Diagnostic[], parsed: ParsedBrief | undefined): Diagnostic[] {
+  if (!parsed) return diagnostics;
+  return diagnostics.map((d) => {
+    if (d.path === undefined || d.line !== undefined) return d;
+    const pos = parsed.locate(d.path);
+    return pos ? { ...d, line: pos.line, column: pos.column } : d;
+  });
+}
+
+/** Checks the parts of a brief that one schema keyword cannot: data and rows together or neither. */
+function checkDataSource(raw: Record<string, unknown>): Diagnostic[] {
+  if (raw.data !== undefined && raw.rows !== undefined) {
+    return [diagnostic('brief.data-and-rows', 'the brief gives both `data` and `rows`', { path: '/rows', hint: 'keep one: `data` for a file, `rows` for inline rows' })];
+  }
+  if (raw.data === undefined && raw.rows === undefined) {
+    return [diagnostic('brief.missing-option', 'the brief names no data', { path: '/data', expected: 'a file path, "-" for stdin, or inline `rows`', hint: 'add `data: my-table.csv`' })];
+  }
+  return [];
+}
+
+/**
+ * The brief stage: text of a JSON or YAML brief → a `ResolvedBrief`, or diagnostics with paths
+ * into the document (and line/column where the text has them).
+ */
+export function readBrief(text: string, parsedBrief?: ParsedBrief): Outcome<{ brief: ResolvedBrief; parsed: ParsedBrief }> {
+  const parsedOutcome = parsedBrief ? success(parsedBrief) : parseBriefText(text);
+  if (!parsedOutcome.ok) return failure(parsedOutcome.diagnostics);
+  const parsed = parsedOutcome.value;
+  return checkBriefValue(parsed.value, parsed);
+}
+
+/** The same checks for a brief that is already a JavaScript value (the library API). */
+export function checkBriefValue(value: unknown, parsed?: ParsedBrief): Outcome<{ brief: ResolvedBrief; parsed: ParsedBrief }> {
+  const located: ParsedBrief = parsed ?? { value, locate: () => undefined };
+  if (value === null || typeof value !== 'object' || Array.isArray(value)) {
+    return failure([diagnostic('brief.not-an-object', 'a brief must be a mapping of options', {
+      path: '', found: Array.isArray(value) ? 'a list' : String(value), expected: 'a mapping such as `intent: compare`', hint: 'start the brief with `data:` and `intent:` lines',
+    })]);
+  }
+  const raw = value as Record<string, unknown>;
+  const problems = [...validateAgainstSchema(raw, BRIEF_SCHEMA), ...checkDataSource(raw)];
+  const diagnostics = withPositions(problems, located);
+  if (hasErrors(diagnostics)) return failure(diagnostics);
+  return success({ brief: resolveBrief(raw), parsed: located }, diagnostics);
+}

@@ -1,0 +1,82 @@
+/** What the reader must see; each intent leads to a family of chart forms. */
+export const INTENTS = [
+  'compare', 'part-to-whole', 'composition', 'trend', 'change', 'shift', 'schedule',
+  'correlation', 'distribution', 'matrix', 'profile', 'flow', 'cycle',
+] as const;
+export type Intent = (typeof INTENTS)[number];
+
+/** Chart forms a brief may pin with `form:`. Only some are drawn today; see `src/forms/registry.ts`. */
+export const FORM_NAMES = [
+  'bar', 'grouped-bar', 'stacked-bar', 'normalized-bar', 'line', 'index-line', 'slope', 'gantt',
+  'scatter', 'histogram', 'strip', 'box', 'heatmap', 'scatter-matrix', 'parallel', 'stream', 'radial-bar', 'donut',
+] as const;
+export type FormName = (typeof FORM_NAMES)[number];
+
+/** Measurement types a field can have. */
+export const FIELD_TYPES = ['categorical', 'ordinal', 'quantitative', 'temporal', 'cyclic'] as const;
+export type FieldType = (typeof FIELD_TYPES)[number];
+
+export const ORDERS = ['auto', 'value', 'label', 'data', 'cluster'] as const;
+export type Order = (typeof ORDERS)[number];
+
+export const AGGREGATES = ['sum', 'mean', 'count', 'max', 'min'] as const;
+export type Aggregate = (typeof AGGREGATES)[number];
+
+/** Per-column hints from the brief's `fields:` section. */
+export interface FieldHint {
+  /** Measurement type; wins over inference. Default: inferred from the data. */
+  type?: FieldType;
+  /** Unit shown in the axis title, e.g. "crossings" or "€". Default: none. */
+  unit?: string;
+  /** d3-format specifier for numbers, e.g. ",d" or ".1%". Default: chosen from the tick step. */
+  format?: string;
+  /** Level order for ordinal and cyclic fields. Default: order of first appearance. */
+  order?: (string | number)[];
+  /** Human-readable name used in titles. Default: the column name made readable. */
+  label?: string;
+}
+
+/** Where the table comes from. */
+export type DataSource =
+  | { kind: 'file'; path: string }
+  | { kind: 'stdin' }
+  | { kind: 'rows'; rows: Record<string, unknown>[] };
+
+/**
+ * A brief with every option present and defaults applied. Downstream stages never ask
+ * whether an option was set.
+ */
+export interface ResolvedBrief {
+  /** The data. Required: `data` or `rows`. */
+  data: DataSource;
+  /** What the reader must see. Required. */
+  intent: Intent;
+  /** Key columns. Default: [] (the rules then report what is missing). */
+  keys: string[];
+  /** Value columns. Default: []. */
+  values: string[];
+  /** Chart title. Default: none. */
+  title: string | undefined;
+  /** Line under the title. Default: none. */
+  subtitle: string | undefined;
+  /** Source line at the foot of the chart. Default: none. */
+  source: string | undefined;
+  /** Text for screen readers; replaces the generated summary. Default: generated. */
+  description: string | undefined;
+  /** Column hints. Default: {}. */
+  fields: Record<string, FieldHint>;
+  /** A pinned chart form. Default: undefined (the rules choose). */
+  form: FormName | undefined;
+  /** Bar or row order. Default: 'auto' (by value for categorical keys, key order otherwise). */
+  order: Order;
+  /** Value-axis baseline. Default: 'zero'. 'fit' is refused for length-coded marks. */
+  baseline: 'zero' | 'fit';
+  /** How rows with the same key are combined. Default: 'sum'. */
+  aggregate: Aggregate;
+  /** Style preset name (from templates/styles) or a path to a style file. Default: 'report'. */
+  style: string;
+  /** Frame size in CSS pixels. Default: { width: 720, height: 440 }. */
+  size: { width: number; height: number };
+  /** Output files, relative to the brief (or -o DIR). Default: [] (the brief's name with .svg). */
+  output: string[];
+}

@@ -1,0 +1,112 @@
+import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { suggestionHint } from '../diagnostics/suggest.js';
+import type { SchemaNode } from './schema.js';
+
+/** Appends a key to a JSON-pointer path, escaping `~` and `/` as RFC 6901 asks. */
+export function pointer(path: string, key: string | number): string {
+  return `${path}/${String(key).replace(/~/g, '~0').replace(/\//g, '~1')}`;
+}
+
+function typeName(value: unknown): string {
+  if (value === null) return 'null';
+  if (Array.isArray(value)) return 'array';
+  if (typeof value === 'number' && Number.isInteger(value)) return 'integer';
+  return typeof value;
+}
+
+function matchesType(value: unknown, type: SchemaNode['type']): boolean {
+  const actual = typeName(value);
+  if (type === 'number') return actual === 'number' || actual === 'integer';
+  return actual === type;
+}
+
+function describeFound(value: unknown): string {
+  const text = JSON.stringify(value);
+  const shown = text === undefined ? String(value) : text.length > 40 ? `${text.slice(0, 37)}...` : text;
+  return `${typeName(value)} ${shown}`;
+}
+
+function describeExpected(schema: SchemaNode): string {
+  if (schema.anyOf) return schema.anyOf.map(describeExpected).join(' or ');
+  if (schema.enum) return `one of ${schema.enum.map((e) => JSON.stringify(e)).join(', ')}`;
+  if (schema.type === 'array' && schema.items?.type) return `a list of ${schema.items.type}s`;
+  return schema.type ? `a ${schema.type}` : 'a value';
+}
+
+/**
+ * Checks a value against the brief schema's subset of JSON Schema, collecting one diagnostic
+ * per problem, each with the path of the offending value.
+ */
+export function validateAgainstSchema(value: unknown, schema: SchemaNode, path = ''): Diagnostic[] {
+  if (schema.anyOf) {
+    const branches = schema.anyOf.map((s) => validateAgainstSchema(value, s, path));
+    if (branches.some((b) => b.length === 0)) return [];
+    const typed = schema.anyOf.findIndex((s) => !s.type || matchesType(value, s.type));
+    if (typed >= 0) return branches[typed]!;
+    return [wrongType(value, schema, path)];
+  }
+  if (schema.type && !matchesType(value, schema.type)) return [wrongType(value, schema, path)];
+  if (schema.enum && !schema.enum.includes(value as string | number)) {
+    const options = schema.enum.map(String);
+    return [diagnostic('brief.bad-value', `${path || 'the brief'} is ${JSON.stringify(value)}, which is not an option here`, {
+      path, found: JSON.stringify(value), expected: describeExpected(schema), hint: suggestionHint(String(value), options, 'option'),
+    })];
+  }
+  const problems: Diagnostic[] = [];
+  if (typeof value === 'string' && schema.minLength !== undefined && value.length < schema.minLength) {
+    problems.push(diagnostic('brief.bad-value', `${path} is empty`, { path, found: '""', expected: 'a non-empty string', hint: 'give a value or remove the option' }));
+  }
+  if (typeof value === 'number') problems.push(...checkRange(value, schema, path));
+  if (Array.isArray(value)) problems.push(...checkArray(value, schema, path));
+  if (typeName(value) === 'object') problems.push(...checkObject(value as Record<string, unknown>, schema, path));
+  return problems;
+}
+
+function wrongType(value: unknown, schema: SchemaNode, path: string): Diagnostic {
+  return diagnostic('brief.wrong-type', `${path || 'the brief'} has the wrong type`, {
+    path, found: describeFound(value), expected: describeExpected(schema), hint: `write ${describeExpected(schema)} at ${path || 'the top level'}`,
+  });
+}
+
+function checkRange(value: number, schema: SchemaNode, path: string): Diagnostic[] {
+  const low = schema.minimum !== undefined && value < schema.minimum;
+  const high = schema.maximum !== undefined && value > schema.maximum;
+  if (!low && !high) return [];
+  const expected = `a number from ${schema.minimum ?? '-∞'} to ${schema.maximum ?? '∞'}`;
+  return [diagnostic('brief.out-of-range', `${path} is ${value}, outside the allowed range`, {
+    path, found: String(value), expected, hint: `use ${expected}`,
+  })];
+}
+
+function checkArray(value: unknown[], schema: SchemaNode, path: string): Diagnostic[] {
+  const problems: Diagnostic[] = [];
+  if (schema.minItems !== undefined && value.length < schema.minItems) {
+    problems.push(diagnostic('brief.bad-value', `${path} is an empty list`, { path, found: '[]', expected: `at least ${schema.minItems} item(s)`, hint: 'list at least one item or remove the option' }));
+  }
+  if (schema.items) value.forEach((item, i) => problems.push(...validateAgainstSchema(item, schema.items!, pointer(path, i))));
+  return problems;
+}
+
+function checkObject(value: Record<string, unknown>, schema: SchemaNode, path: string): Diagnostic[] {
+  const problems: Diagnostic[] = [];
+  const known = Object.keys(schema.properties ?? {});
+  for (const name of schema.required ?? []) {
+    if (!(name in value)) {
+      const hint = schema.properties?.[name]?.enum ? `add \`${name}:\` with ${describeExpected(schema.properties[name]!)}` : `add \`${name}:\``;
+      problems.push(diagnostic('brief.missing-option', `${path || 'the brief'} has no \`${name}\``, { path: pointer(path, name), expected: describeExpected(schema.properties?.[name] ?? {}), hint }));
+    }
+  }
+  for (const [key, item] of Object.entries(value)) {
+    const child = schema.properties?.[key];
+    if (child) {
+      problems.push(...validateAgainstSchema(item, child, pointer(path, key)));
+    } else if (schema.additionalProperties === false) {
+      problems.push(diagnostic('brief.unknown-option', `\`${key}\` is not a brief option${path ? ` under ${path}` : ''}`, {
+        path: pointer(path, key), found: key, expected: `one of ${known.join(', ')}`, hint: suggestionHint(key, known, 'option'),
+      }));
+    } else if (typeof schema.additionalProperties === 'object') {
+      problems.push(...validateAgainstSchema(item, schema.additionalProperties, pointer(path, key)));
+    }
+  }
+  return problems;
+}

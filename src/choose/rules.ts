@@ -1,0 +1,39 @@
+import type { FormName, Intent } from '../brief/types.js';
+import type { Fields } from '../fields/types.js';
+import { isOrdered } from '../fields/types.js';
+
+/** One row of the rule table: when it applies, the form it leads to, and why. */
+export interface Rule {
+  id: string;
+  intent: Intent;
+  form: FormName;
+  applies(fields: Fields): boolean;
+  /** The reason, as a reader would accept it. */
+  why: string;
+}
+
+/**
+ * The rule table, as data: the first rule whose intent and data shape match chooses the form.
+ * Adding a form means adding a row here and one file in src/forms/.
+ */
+export const RULES: readonly Rule[] = [
+  {
+    id: 'compare.categorical-key',
+    intent: 'compare',
+    form: 'bar',
+    applies: (f) => f.keys.length === 1 && !isOrdered(f.keys[0]!.type),
+    why: 'one categorical key and one value: bars compare values by length from a common baseline, read more accurately than angles, areas or colour (Cleveland & McGill 1984)',
+  },
+  {
+    id: 'compare.ordered-key',
+    intent: 'compare',
+    form: 'bar',
+    applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type),
+    why: 'one ordered key and one value: bars in key order, because the order of the key carries meaning',
+  },
+];
+
+/** The first rule that matches the intent and the fields. */
+export function matchRule(intent: Intent, fields: Fields): Rule | undefined {
+  return RULES.find((r) => r.intent === intent && r.applies(fields));
+}

@@ -1,0 +1,77 @@
+/**
+ * Every diagnostic code chartwright can emit, with its severity. Codes are a public contract
+ * (tests outside the project and users' CI scripts match on them): add codes, never rename.
+ */
+export const CATALOGUE = {
+  // brief: the document itself
+  'brief.not-found': 'error',
+  'brief.parse-error': 'error',
+  'brief.not-an-object': 'error',
+  'brief.unknown-option': 'error',
+  'brief.wrong-type': 'error',
+  'brief.bad-value': 'error',
+  'brief.missing-option': 'error',
+  'brief.out-of-range': 'error',
+  'brief.data-and-rows': 'error',
+  'brief.unknown-column': 'error',
+  'brief.style-not-found': 'error',
+  'brief.bad-style': 'error',
+  // table: reading and typing the data
+  'table.not-found': 'error',
+  'table.unreadable': 'error',
+  'table.unknown-format': 'error',
+  'table.empty': 'error',
+  'table.header-only': 'error',
+  'table.duplicate-column': 'error',
+  'table.empty-column-name': 'error',
+  'table.ragged-row': 'error',
+  'table.bad-json': 'error',
+  'table.not-an-array': 'error',
+  'table.row-not-an-object': 'error',
+  'table.nested-value': 'error',
+  'table.mixed-column': 'warning',
+  'table.type-mismatch': 'error',
+  // fields: roles and measurement types
+  'fields.order-incomplete': 'error',
+  'fields.order-duplicate': 'error',
+  // choice: the rules
+  'choice.intent-not-supported': 'error',
+  'choice.form-not-supported': 'error',
+  'choice.form-mismatch': 'error',
+  'choice.no-key': 'error',
+  'choice.too-many-keys': 'error',
+  'choice.no-value': 'error',
+  'choice.too-many-values': 'error',
+  'choice.value-not-quantitative': 'error',
+  'choice.baseline-fit-refused': 'error',
+  'choice.order-not-applicable': 'error',
+  'choice.lenient-fallback': 'warning',
+  'choice.zero-baseline': 'info',
+  // derive: the numbers drawn
+  'derive.aggregated': 'info',
+  'derive.missing-values': 'warning',
+  'derive.others-folded': 'warning',
+  'derive.no-rows': 'error',
+  'derive.too-many-ordered-bars': 'error',
+  // layout: text and geometry
+  'layout.labels-thinned': 'info',
+  'layout.label-truncated': 'warning',
+  'layout.missing-glyphs': 'warning',
+  'layout.frame-too-small': 'error',
+  // output
+  'output.write-failed': 'error',
+  'output.raster-failed': 'error',
+  // a defect in chartwright itself, never the user's fault
+  'render.internal': 'error',
+} as const;
+
+/** A stable diagnostic code, namespaced by the stage that raises it. */
+export type DiagnosticCode = keyof typeof CATALOGUE;
+
+/** How bad a diagnostic is. `--strict` raises warnings to errors; errors are never lowered. */
+export type Severity = 'error' | 'warning' | 'info';
+
+/** The catalogued severity of a code. */
+export function severityOf(code: DiagnosticCode): Severity {
+  return CATALOGUE[code];
+}

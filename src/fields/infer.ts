@@ -1,0 +1,80 @@
+import type { FieldHint, FieldType, ResolvedBrief } from '../brief/types.js';
+import { pointer } from '../brief/validate.js';
+import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import { suggestionHint } from '../diagnostics/suggest.js';
+import type { Column, Table } from '../table/types.js';
+import { cycleOrder } from './cyclic.js';
+import type { Field, FieldRole, Fields } from './types.js';
+
+/** "crossings_per_day" → "Crossings per day". */
+export function readableName(name: string): string {
+  const spaced = name.replace(/[_\-]+/g, ' ').replace(/([a-z])([A-Z])/g, '$1 $2').replace(/\s+/g, ' ').trim();
+  return spaced.charAt(0).toUpperCase() + spaced.slice(1).toLowerCase();
+}
+
+function firstAppearance(column: Column): string[] {
+  const seen = new Set<string>();
+  for (const t of column.text) if (t !== null && t !== '' && !seen.has(t)) seen.add(t);
+  return [...seen];
+}
+
+function typeOf(column: Column, hint: FieldHint | undefined): FieldType {
+  if (hint?.type) return hint.type;
+  if (column.type === 'number') return 'quantitative';
+  if (column.type === 'date') return 'temporal';
+  if (column.type === 'text' && cycleOrder(firstAppearance(column))) return 'cyclic';
+  return 'categorical';
+}
+
+function levelsOf(column: Column, type: FieldType, hint: FieldHint | undefined, problems: Diagnostic[]): string[] {
+  if (type === 'quantitative' || type === 'temporal') return [];
+  const present = firstAppearance(column);
+  if (!hint?.order) return type === 'cyclic' ? cycleOrder(present) ?? present : present;
+  const order = hint.order.map(String);
+  const duplicate = order.find((v, i) => order.indexOf(v) !== i);
+  if (duplicate !== undefined) {
+    problems.push(diagnostic('fields.order-duplicate', `\`fields.${column.name}.order\` lists ${JSON.stringify(duplicate)} twice`, {
+      path: `/fields/${column.name}/order`, found: duplicate, hint: 'list each level once',
+    }));
+  }
+  const unlisted = present.filter((v) => !order.includes(v));
+  if (unlisted.length) {
+    problems.push(diagnostic('fields.order-incomplete', `\`fields.${column.name}.order\` does not list ${unlisted.slice(0, 5).map((v) => JSON.stringify(v)).join(', ')}${unlisted.length > 5 ? ` and ${unlisted.length - 5} more` : ''}, found in the data`, {
+      path: `/fields/${column.name}/order`, field: column.name, found: unlisted.slice(0, 5).join(', '), expected: 'every level of the column',
+      hint: `add the missing level${unlisted.length > 1 ? 's' : ''} to the order, or fix the spelling in the data`,
+    }));
+  }
+  return order.filter((v) => present.includes(v));
+}
+
+function checkNames(names: readonly string[], basePath: string, table: Table, listed: boolean): Diagnostic[] {
+  const columns = table.columns.map((c) => c.name);
+  return names.flatMap((name, i) => columns.includes(name) ? [] : [diagnostic('brief.unknown-column', `the data has no column \`${name}\``, {
+    path: listed ? pointer(basePath, i) : basePath, found: name, expected: `a column of ${table.origin.file}`, hint: suggestionHint(name, columns),
+  })]);
+}
+
+/**
+ * The fields stage: a table and the brief → typed fields with key and value roles. Column names
+ * in the brief that the table lacks are errors with a near-miss suggestion.
+ */
+export function inferFields(table: Table, brief: ResolvedBrief): Outcome<Fields> {
+  const problems: Diagnostic[] = [
+    ...checkNames(brief.keys, '/keys', table, brief.keys.length > 1),
+    ...checkNames(brief.values, '/values', table, brief.values.length > 1),
+    ...Object.keys(brief.fields).flatMap((name) => checkNames([name], pointer('/fields', name), table, false)),
+  ];
+  if (hasErrors(problems)) return failure(problems);
+  const all = table.columns.map((column): Field => {
+    const hint = brief.fields[column.name];
+    const type = typeOf(column, hint);
+    const role: FieldRole = brief.keys.includes(column.name) ? 'key' : brief.values.includes(column.name) ? 'value' : 'other';
+    return {
+      name: column.name, label: hint?.label ?? readableName(column.name), type, role,
+      unit: hint?.unit, format: hint?.format, levels: levelsOf(column, type, hint, problems), column,
+    };
+  });
+  if (hasErrors(problems)) return failure(problems);
+  const byName = (n: string) => all.find((f) => f.name === n)!;
+  return success({ keys: brief.keys.map(byName), values: brief.values.map(byName), all }, problems);
+}

@@ -1,0 +1,31 @@
+import type { FieldType } from '../brief/types.js';
+import type { Column } from '../table/types.js';
+
+/** The part a field plays in the chart. */
+export type FieldRole = 'key' | 'value' | 'other';
+
+/** A typed field: a column with its measurement type, role and presentation hints. */
+export interface Field {
+  name: string;
+  /** Readable name for titles: the hint's label or the column name made readable. */
+  label: string;
+  type: FieldType;
+  role: FieldRole;
+  unit: string | undefined;
+  format: string | undefined;
+  /** For categorical, ordinal and cyclic fields: the levels, in their meaningful order (first appearance for categorical). */
+  levels: string[];
+  column: Column;
+}
+
+/** The fields of a brief: its keys and values in brief order, then every other column. */
+export interface Fields {
+  keys: Field[];
+  values: Field[];
+  all: Field[];
+}
+
+/** True for types whose order means something (so bars keep key order and are not re-sorted). */
+export function isOrdered(type: FieldType): boolean {
+  return type === 'ordinal' || type === 'temporal' || type === 'cyclic' || type === 'quantitative';
+}

@@ -1,0 +1,221 @@
+import { scaleBand, scaleLinear } from 'd3-scale';
+import type { BarDatum, DerivedBars } from '../derive/bars.js';
+import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { thinningStep, valueTicks, type ValueTicks } from '../layout/axis.js';
+import { layoutFrame } from '../layout/frame.js';
+import { valueFormatter } from '../layout/number-format.js';
+import { lineHeight, textBoxHeight, textNode, truncateText } from '../layout/text.js';
+import { idMaker } from '../scene/ids.js';
+import type { AxisInfo, Box, Datum, SceneNode, TextNode } from '../scene/types.js';
+import type { Style } from '../style/types.js';
+import { barDescription, barValueTitle, foldNote } from './bar-text.js';
+import type { FormContext, FormResult } from './types.js';
+
+/** Longest share of the body width the key labels of horizontal bars may take before they are shortened. */
+const MAX_LABEL_SHARE = 0.4;
+
+interface Parts {
+  nodes: SceneNode[];
+  axes: AxisInfo[];
+  plot: Box;
+  diagnostics: Diagnostic[];
+}
+
+interface Common {
+  derived: DerivedBars;
+  ctx: FormContext;
+  body: Box;
+  valueTitle: string;
+  keyTitle: string;
+  fmtValue: (n: number) => string;
+  id: (prefix: string, text: string) => string;
+}
+
+function barFill(bar: BarDatum, style: Style): string {
+  if (bar.folds !== undefined) return style.palette.others;
+  return bar.value < 0 ? style.palette.negative : style.palette.primary;
+}
+
+function barDatum(c: Common, bar: BarDatum): Datum {
+  const datum: Datum = { [c.derived.plan.key.name]: bar.label, [c.derived.valueName]: bar.value };
+  if (bar.folds !== undefined) datum.folded = bar.folds;
+  return datum;
+}
+
+function domainOf(bars: BarDatum[]): [number, number] {
+  const values = bars.map((b) => b.value);
+  return [Math.min(0, ...values), Math.max(0, ...values)];
+}
+
+/** A straight line as a path node. */
+function line(id: string, role: string, x1: number, y1: number, x2: number, y2: number, stroke: string, width: number): SceneNode {
+  return { kind: 'path', id, role, d: `M${x1} ${y1}L${x2} ${y2}`, fill: undefined, stroke, strokeWidth: width };
+}
+
+function valueLabelsFit(c: Common, room: number, along: 'width' | 'height'): boolean {
+  const { label } = c.ctx.style.text;
+  if (along === 'height') return room >= textBoxHeight(c.ctx.measure, label);
+  return c.derived.bars.every((b) => c.ctx.measure.width(c.fmtValue(b.value), label.size, label.weight) <= room);
+}
+
+function vertical(c: Common): Parts {
+  const { style, measure } = c.ctx;
+  const { tick, axisTitle: titleStyle, label } = style.text;
+  const { tickGap, labelGap, lineHeight: factor } = style.spacing;
+  const bars = c.derived.bars;
+  const tickBox = textBoxHeight(measure, tick);
+  const labelRoom = textBoxHeight(measure, label) + labelGap;
+  const top = c.body.y + lineHeight(titleStyle, factor) + tickGap + tickBox / 2;
+  const bottom = c.body.y + c.body.height - (tickGap + lineHeight(tick, factor) + tickGap + lineHeight(titleStyle, factor));
+  const [lo, hi] = domainOf(bars);
+  const probe = valueTicks(lo, hi, bottom - top, 'vertical', tick, measure, c.derived.plan.value?.format);
+  const tickWidth = Math.max(...probe.labels.map((l) => measure.width(l, tick.size, tick.weight)));
+  const left = c.body.x + tickWidth + tickGap;
+  const right = c.body.x + c.body.width;
+  const band = scaleBand<string>().domain(bars.map((b) => b.label)).range([left, right]).paddingInner(style.spacing.bandPadding).paddingOuter(style.spacing.bandPadding / 2);
+  const showLabels = valueLabelsFit(c, band.step() - 2, 'width');
+  // Room for the labels of the longest bars is taken from the plot only where they would not fit.
+  const fitted = scaleLinear().domain(probe.domain).range([bottom, top]);
+  const rangeTop = top + (showLabels && hi > 0 && fitted(hi) - labelRoom < top - tickBox / 2 ? labelRoom : 0);
+  const rangeBottom = bottom - (showLabels && lo < 0 && fitted(lo) + labelRoom > bottom ? labelRoom : 0);
+  const vt = valueTicks(lo, hi, rangeBottom - rangeTop, 'vertical', tick, measure, c.derived.plan.value?.format);
+  const y = scaleLinear().domain(vt.domain).range([rangeBottom, rangeTop]);
+  const nodes: SceneNode[] = [];
+  const texts: TextNode[] = [];
+  vt.ticks.forEach((t, i) => {
+    if (t !== 0) nodes.push(line(c.id('gridline', vt.labels[i]!), 'gridline', left, y(t), right, y(t), style.lines.grid, style.lines.gridWidth));
+    texts.push(textNode(measure, { id: c.id('tick-value', vt.labels[i]!), role: 'tick', text: vt.labels[i]!, style: tick, x: left - tickGap, top: y(t) - tickBox / 2, anchor: 'end' }));
+  });
+  for (const bar of bars) {
+    const y0 = y(0);
+    const y1 = y(bar.value);
+    nodes.push({ kind: 'rect', id: c.id('bar', bar.label), role: 'bar', datum: barDatum(c, bar), x: band(bar.label)!, y: Math.min(y0, y1), width: band.bandwidth(), height: Math.abs(y1 - y0), fill: barFill(bar, style) });
+    if (showLabels) {
+      const labelTop = bar.value >= 0 ? y1 - labelGap - textBoxHeight(measure, label) : y1 + labelGap;
+      texts.push(textNode(measure, { id: c.id('label', bar.label), role: 'label', text: c.fmtValue(bar.value), style: label, x: band(bar.label)! + band.bandwidth() / 2, top: labelTop, anchor: 'middle' }));
+    }
+  }
+  nodes.push(line('zero-line', 'zero-line', left, y(0), right, y(0), style.lines.zero, style.lines.zeroWidth));
+  const widest = Math.max(...bars.map((b) => measure.width(b.label, tick.size, tick.weight)));
+  const k = thinningStep(widest, band.step(), tickGap);
+  const keyTop = bottom + tickGap;
+  const shown = bars.filter((_, i) => i % k === 0);
+  for (const bar of shown) {
+    const centre = band(bar.label)! + band.bandwidth() / 2;
+    const w = measure.width(bar.label, tick.size, tick.weight);
+    const x = Math.min(Math.max(centre, w / 2 + 1), c.ctx.brief.size.width - w / 2 - 1);
+    texts.push(textNode(measure, { id: c.id('tick-key', bar.label), role: 'tick', text: bar.label, style: tick, x, top: keyTop, anchor: 'middle' }));
+  }
+  texts.push(textNode(measure, { id: 'axis-title-value', role: 'axis-title', text: c.valueTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
+  texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: (left + right) / 2, top: keyTop + lineHeight(tick, factor) + tickGap, anchor: 'middle' }));
+  const diagnostics = k > 1 ? [thinned(c, k, bars.length, shown.length)] : [];
+  const plot = { x: left, y: top, width: right - left, height: bottom - top };
+  return { nodes: [...nodes, ...texts], plot, diagnostics, axes: axes(c, vt, 'left', 'bottom', y, band, shown.map((b) => b.label), [rangeBottom, rangeTop], [left, right]) };
+}
+
+function thinned(c: Common, k: number, total: number, shown: number): Diagnostic {
+  return diagnostic('layout.labels-thinned', `${total} key labels do not all fit; every ${k === 2 ? 'second' : `${k}th`} is shown (${shown} of ${total})`, {
+    field: c.derived.plan.key.name, hint: 'make the chart larger with `size:`, or use shorter labels',
+  });
+}
+
+function axes(c: Common, vt: ValueTicks, valueOrient: AxisInfo['orient'], keyOrient: AxisInfo['orient'], scale: (v: number) => number, band: ReturnType<typeof scaleBand<string>>, keyTicks: string[], valueRange: [number, number], keyRange: [number, number]): AxisInfo[] {
+  return [
+    { orient: valueOrient, field: c.derived.valueName, title: c.valueTitle, domain: vt.domain, ticks: vt.ticks, tickPositions: vt.ticks.map(scale), range: valueRange },
+    { orient: keyOrient, field: c.derived.plan.key.name, title: c.keyTitle, domain: band.domain(), ticks: keyTicks, tickPositions: keyTicks.map((k) => band(k)! + band.bandwidth() / 2), range: keyRange },
+  ];
+}
+
+function horizontal(c: Common): Parts {
+  const { style, measure } = c.ctx;
+  const { tick, axisTitle: titleStyle, label } = style.text;
+  const { tickGap, labelGap, lineHeight: factor } = style.spacing;
+  const bars = c.derived.bars;
+  const diagnostics: Diagnostic[] = [];
+  const top = c.body.y + lineHeight(titleStyle, factor) + tickGap;
+  const bottom = c.body.y + c.body.height - (tickGap + lineHeight(tick, factor) + tickGap + lineHeight(titleStyle, factor));
+  const maxLabel = c.body.width * MAX_LABEL_SHARE;
+  const keyLabels = bars.map((b) => truncateText(measure, b.label, tick, maxLabel));
+  const truncated = keyLabels.filter((l, i) => l !== bars[i]!.label).length;
+  if (truncated) diagnostics.push(diagnostic('layout.label-truncated', `${truncated} key label${truncated === 1 ? ' is' : 's are'} longer than ${Math.round(maxLabel)} px and shortened with "…"; the full text stays in the SVG title of each bar`, { field: c.derived.plan.key.name, hint: 'use shorter labels, or a wider chart with `size:`' }));
+  const labelWidth = Math.max(...keyLabels.map((l) => measure.width(l, tick.size, tick.weight)));
+  const band = scaleBand<string>().domain(bars.map((b) => b.label)).range([top, bottom]).paddingInner(style.spacing.bandPadding).paddingOuter(style.spacing.bandPadding / 2);
+  const showLabels = valueLabelsFit(c, band.step(), 'height');
+  const [lo, hi] = domainOf(bars);
+  const labelRoom = (sign: number) => (showLabels ? Math.max(0, ...bars.filter((b) => Math.sign(b.value) === sign).map((b) => measure.width(c.fmtValue(b.value), label.size, label.weight) + labelGap)) : 0);
+  const left = c.body.x + labelWidth + tickGap;
+  const right = c.body.x + c.body.width;
+  const probe = valueTicks(lo, hi, right - left, 'horizontal', tick, measure, c.derived.plan.value?.format);
+  const halfTick = measure.width(probe.labels[probe.labels.length - 1]!, tick.size, tick.weight) / 2;
+  const rangeLeft = left + labelRoom(-1);
+  const rangeRight = right - Math.max(labelRoom(1), halfTick);
+  const vt = valueTicks(lo, hi, rangeRight - rangeLeft, 'horizontal', tick, measure, c.derived.plan.value?.format);
+  const x = scaleLinear().domain(vt.domain).range([rangeLeft, rangeRight]);
+  const nodes: SceneNode[] = [];
+  const texts: TextNode[] = [];
+  vt.ticks.forEach((t, i) => {
+    if (t !== 0) nodes.push(line(c.id('gridline', vt.labels[i]!), 'gridline', x(t), top, x(t), bottom, style.lines.grid, style.lines.gridWidth));
+    texts.push(textNode(measure, { id: c.id('tick-value', vt.labels[i]!), role: 'tick', text: vt.labels[i]!, style: tick, x: x(t), top: bottom + tickGap, anchor: 'middle' }));
+  });
+  const tickBox = textBoxHeight(measure, tick);
+  const k = thinningStep(tickBox, band.step(), 1);
+  bars.forEach((bar, i) => {
+    const x0 = x(0);
+    const x1 = x(bar.value);
+    const y0 = band(bar.label)!;
+    nodes.push({ kind: 'rect', id: c.id('bar', bar.label), role: 'bar', datum: barDatum(c, bar), x: Math.min(x0, x1), y: y0, width: Math.abs(x1 - x0), height: band.bandwidth(), fill: barFill(bar, style) });
+    const middle = y0 + band.bandwidth() / 2;
+    if (i % k === 0) texts.push(textNode(measure, { id: c.id('tick-key', bar.label), role: 'tick', text: keyLabels[i]!, style: tick, x: left - tickGap, top: middle - tickBox / 2, anchor: 'end' }));
+    if (showLabels) {
+      const lx = bar.value >= 0 ? x1 + labelGap : x1 - labelGap;
+      texts.push(textNode(measure, { id: c.id('label', bar.label), role: 'label', text: c.fmtValue(bar.value), style: label, x: lx, top: middle - textBoxHeight(measure, label) / 2, anchor: bar.value >= 0 ? 'start' : 'end' }));
+    }
+  });
+  nodes.push(line('zero-line', 'zero-line', x(0), top, x(0), bottom, style.lines.zero, style.lines.zeroWidth));
+  texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
+  texts.push(textNode(measure, { id: 'axis-title-value', role: 'axis-title', text: c.valueTitle, style: titleStyle, x: (left + right) / 2, top: bottom + tickGap + lineHeight(tick, factor) + tickGap, anchor: 'middle' }));
+  const shown = bars.filter((_, i) => i % k === 0).map((b) => b.label);
+  if (k > 1) diagnostics.push(thinned(c, k, bars.length, shown.length));
+  const plot = { x: left, y: top, width: right - left, height: bottom - top };
+  return { nodes: [...nodes, ...texts], plot, diagnostics, axes: axes(c, vt, 'bottom', 'left', x, band, shown, [rangeLeft, rangeRight], [top, bottom]) };
+}
+
+function missingGlyphs(nodes: SceneNode[], ctx: FormContext): Diagnostic[] {
+  const missing = new Set<string>();
+  for (const n of nodes) if (n.kind === 'text') for (const ch of ctx.measure.missing(n.text, n.weight)) missing.add(ch);
+  if (missing.size === 0) return [];
+  const list = [...missing].slice(0, 8).map((ch) => `U+${ch.codePointAt(0)!.toString(16).toUpperCase().padStart(4, '0')}`).join(', ');
+  return [diagnostic('layout.missing-glyphs', `the bundled font cannot draw ${missing.size} character${missing.size === 1 ? '' : 's'} in the chart's text (${list}); ${missing.size === 1 ? 'it is' : 'they are'} drawn as empty boxes`, {
+    hint: 'use Latin, Greek or Cyrillic text, or transliterate those labels',
+  })];
+}
+
+/**
+ * The bar chart form: derived bars → a scene in pixels. Vertical or horizontal as the rules
+ * chose; every bar starts at the zero of one shared value scale.
+ */
+export function layoutBar(derived: DerivedBars, ctx: FormContext): FormResult {
+  const { brief, style, measure } = ctx;
+  const valueTitle = barValueTitle(derived);
+  const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: foldNote(derived, valueTitle) }, style, brief.size, measure);
+  const fmtValue = valueFormatter(derived.bars.map((b) => b.value), derived.plan.value?.format);
+  const common: Common = { derived, ctx, body: frame.body, valueTitle, keyTitle: derived.plan.key.label, fmtValue, id: idMaker() };
+  const parts = derived.plan.orientation === 'vertical' ? vertical(common) : horizontal(common);
+  const diagnostics = [...parts.diagnostics];
+  if (parts.plot.width < 40 || parts.plot.height < 40) {
+    diagnostics.push(diagnostic('layout.frame-too-small', `the plot area is only ${Math.round(parts.plot.width)} × ${Math.round(parts.plot.height)} px after titles, labels and axes`, {
+      path: '/size', found: `${brief.size.width} × ${brief.size.height}`, expected: 'a plot area of at least 40 × 40 px', hint: 'make `size:` larger, or shorten the title and labels',
+    }));
+  }
+  const children: SceneNode[] = [...parts.nodes, ...frame.texts];
+  diagnostics.push(...missingGlyphs(children, ctx));
+  return {
+    scene: {
+      form: 'bar', width: brief.size.width, height: brief.size.height, background: style.background,
+      title: brief.title ?? `${valueTitle} by ${derived.plan.key.label.toLowerCase()}`,
+      description: brief.description ?? barDescription(derived, valueTitle, fmtValue),
+      root: { kind: 'group', id: 'chart', role: 'chart', children }, axes: parts.axes, plot: parts.plot,
+    },
+    diagnostics,
+  };
+}

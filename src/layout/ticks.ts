@@ -1,0 +1,124 @@
+/**
+ * Nice tick values by the extended Wilkinson algorithm: J. Talbot, S. Lin, P. Hanrahan, "An
+ * Extension of Wilkinson's Algorithm for Positioning Tick Labels on Axes", IEEE TVCG 16(6), 2010.
+ * The search, its pruning bounds and the scoring terms follow the first author's reference code
+ * (R package `labeling`, function `extended`); legibility is scored 1 there, and here, because
+ * label overlap is checked separately by the axis layout.
+ */
+
+/** Nice step mantissas, in order of preference. */
+const Q = [1, 5, 2, 2.5, 4, 3];
+/** Weights of simplicity, coverage, density and legibility. */
+const W = [0.25, 0.2, 0.5, 0.05] as const;
+const EPS = 2.220446049250313e-16 * 100;
+
+/** Floored modulo, as R's `%%` (the sign follows the divisor). */
+function mod(a: number, b: number): number {
+  return ((a % b) + b) % b;
+}
+
+function simplicity(i: number, j: number, lmin: number, lmax: number, lstep: number): number {
+  const r = mod(lmin, lstep);
+  const v = (r < EPS || lstep - r < EPS) && lmin <= 0 && lmax >= 0 ? 1 : 0;
+  return 1 - i / (Q.length - 1) - j + v;
+}
+
+function simplicityMax(i: number, j: number): number {
+  return 1 - i / (Q.length - 1) - j + 1;
+}
+
+function coverage(dmin: number, dmax: number, lmin: number, lmax: number): number {
+  const range = dmax - dmin;
+  return 1 - (0.5 * ((dmax - lmax) ** 2 + (dmin - lmin) ** 2)) / (0.1 * range) ** 2;
+}
+
+function coverageMax(dmin: number, dmax: number, span: number): number {
+  const range = dmax - dmin;
+  if (span <= range) return 1;
+  const half = (span - range) / 2;
+  return 1 - (0.5 * (2 * half ** 2)) / (0.1 * range) ** 2;
+}
+
+function density(k: number, m: number, dmin: number, dmax: number, lmin: number, lmax: number): number {
+  const r = (k - 1) / (lmax - lmin);
+  const rt = (m - 1) / (Math.max(lmax, dmax) - Math.min(dmin, lmin));
+  return 2 - Math.max(r / rt, rt / r);
+}
+
+function densityMax(k: number, m: number): number {
+  return k >= m ? 2 - (k - 1) / (m - 1) : 1;
+}
+
+/** A labelling: first and last tick, step, and its score. */
+export interface Labelling {
+  lmin: number;
+  lmax: number;
+  lstep: number;
+  score: number;
+}
+
+/**
+ * The best labelling of the data range [dmin, dmax] with about m ticks. With `onlyLoose` the
+ * ticks cover the whole range (lmin ≤ dmin and lmax ≥ dmax), which a plot extent fitted to its
+ * outer ticks needs.
+ */
+export function extendedLabelling(dmin: number, dmax: number, m: number, onlyLoose = false): Labelling | undefined {
+  if (!(dmax - dmin > EPS) || !Number.isFinite(dmin) || !Number.isFinite(dmax) || m < 2) return undefined;
+  let best: Labelling | undefined;
+  const bestScore = () => best?.score ?? -2;
+  for (let j = 1; j < 1000; j++) {
+    for (let i = 0; i < Q.length; i++) {
+      const q = Q[i]!;
+      const sm = simplicityMax(i, j);
+      if (W[0] * sm + W[1] + W[2] + W[3] < bestScore()) return best;
+      for (let k = 2; k < 1000; k++) {
+        const dm = densityMax(k, m);
+        if (W[0] * sm + W[1] + W[2] * dm + W[3] < bestScore()) break;
+        const delta = (dmax - dmin) / (k + 1) / j / q;
+        for (let z = Math.ceil(Math.log10(delta)); z < 400; z++) {
+          const step = j * q * 10 ** z;
+          const cm = coverageMax(dmin, dmax, step * (k - 1));
+          if (W[0] * sm + W[1] * cm + W[2] * dm + W[3] < bestScore()) break;
+          const minStart = Math.floor(dmax / step) * j - (k - 1) * j;
+          const maxStart = Math.ceil(dmin / step) * j;
+          for (let start = minStart; start <= maxStart; start++) {
+            const lmin = start * (step / j);
+            const lmax = lmin + step * (k - 1);
+            const score = W[0] * simplicity(i, j, lmin, lmax, step) + W[1] * coverage(dmin, dmax, lmin, lmax)
+              + W[2] * density(k, m, dmin, dmax, lmin, lmax) + W[3];
+            if (score > bestScore() && (!onlyLoose || (lmin <= dmin && lmax >= dmax))) best = { lmin, lmax, lstep: step, score };
+          }
+        }
+      }
+    }
+  }
+  return best;
+}
+
+/** Removes binary float noise from a tick value: 0.30000000000000004 → 0.3. */
+function clean(n: number): number {
+  const v = Number(n.toPrecision(12));
+  return Object.is(v, -0) ? 0 : v;
+}
+
+/** The tick values of a labelling, as exact-looking numbers. */
+export function ticksOf(l: Labelling): number[] {
+  const count = Math.round((l.lmax - l.lmin) / l.lstep) + 1;
+  return Array.from({ length: count }, (_, i) => clean(l.lmin + i * l.lstep));
+}
+
+/**
+ * Ticks for [dmin, dmax] with about m of them. A degenerate range (one value) is widened to a
+ * unit around it first, so a single bar still gets an axis.
+ */
+export function niceTicks(dmin: number, dmax: number, m: number, onlyLoose = false): number[] {
+  let lo = dmin;
+  let hi = dmax;
+  if (!(hi - lo > EPS)) {
+    const pad = lo === 0 ? 1 : Math.abs(lo) * 0.1;
+    lo = lo > 0 ? 0 : lo - pad;
+    hi = hi < 0 ? 0 : hi + pad;
+  }
+  const l = extendedLabelling(lo, hi, Math.max(2, m), onlyLoose);
+  return l ? ticksOf(l) : [clean(lo), clean(hi)];
+}

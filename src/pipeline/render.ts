@@ -1,0 +1,100 @@
+import { checkBriefValue, readBrief } from '../brief/resolve.js';
+import type { ResolvedBrief } from '../brief/types.js';
+import { choose } from '../choose/choose.js';
+import type { Choice, Decision } from '../choose/types.js';
+import { deriveBars } from '../derive/bars.js';
+import { diagnostic, hasErrors, inFile, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { inferFields } from '../fields/infer.js';
+import { FORMS } from '../forms/registry.js';
+import { nonFiniteNodes } from '../scene/check.js';
+import type { Scene } from '../scene/types.js';
+import { writeSvg } from '../svg/write.js';
+import { readTable } from '../table/load.js';
+import type { RenderEnv } from './env.js';
+
+/** One render: a brief as text or value, where it lives, and how strict to be. */
+export interface RenderRequest {
+  /** Brief text (JSON or YAML), or a brief object. */
+  brief: string | Record<string, unknown>;
+  /** Path of the brief file: data and style paths in it are relative to this. Default: none. */
+  file?: string;
+  /** Rows to chart when the brief names no data (library use). Default: none. */
+  rows?: Record<string, unknown>[];
+  /** Draw the nearest honest form, with a warning, instead of failing on a broken hard rule. Default: false. */
+  lenient?: boolean;
+  /** Treat warnings as errors. Default: false. */
+  strict?: boolean;
+}
+
+/** What a render produced: the SVG and scene when it succeeded, and always the reasons and diagnostics. */
+export interface RenderResult {
+  ok: boolean;
+  brief?: ResolvedBrief;
+  choice?: Choice;
+  scene?: Scene;
+  /** SVG with live text: selectable, searchable, accessible. */
+  svg?: string;
+  rationale: Decision[];
+  diagnostics: Diagnostic[];
+}
+
+function strictly(diagnostics: Diagnostic[], strict: boolean | undefined): Diagnostic[] {
+  if (!strict) return diagnostics;
+  return diagnostics.map((d) => (d.severity === 'warning' ? { ...d, severity: 'error', message: `${d.message} (a warning, raised to an error by --strict)` } : d));
+}
+
+function briefStage(req: RenderRequest) {
+  if (typeof req.brief === 'string') return readBrief(req.brief);
+  const value = req.rows && req.brief.data === undefined && req.brief.rows === undefined ? { ...req.brief, rows: req.rows } : req.brief;
+  return checkBriefValue(value);
+}
+
+/**
+ * Runs the stages from brief to SVG: brief → table → fields → choice → derived → scene → svg.
+ * Never throws for bad input: every problem is a diagnostic on the result.
+ */
+export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<RenderResult> {
+  const all: Diagnostic[] = [];
+  const done = (extra: Partial<RenderResult> = {}): RenderResult => {
+    const diagnostics = strictly(all, req.strict);
+    return { ok: !hasErrors(diagnostics) && extra.svg !== undefined, rationale: [], ...extra, diagnostics };
+  };
+  const briefOutcome = briefStage(req);
+  all.push(...inFile(briefOutcome.diagnostics, req.file));
+  if (!briefOutcome.ok) return done();
+  const { brief, parsed } = briefOutcome.value;
+  const locate = (ds: Diagnostic[]) => inFile(ds.map((d) => {
+    if (d.path === undefined || d.line !== undefined || d.file) return d;
+    const pos = parsed.locate(d.path);
+    return pos ? { ...d, line: pos.line, column: pos.column } : d;
+  }), req.file);
+  const style = env.style(brief.style, req.file);
+  all.push(...locate(style.diagnostics));
+  const table = await readTable(brief.data, brief.fields, req.file, env.table);
+  all.push(...locate(table.diagnostics));
+  if (!style.ok || !table.ok) return done({ brief });
+  const fields = inferFields(table.value, brief);
+  all.push(...locate(fields.diagnostics));
+  if (!fields.ok) return done({ brief });
+  const choice = choose(fields.value, brief, { style: style.value, measure: env.measure, lenient: req.lenient ?? false });
+  all.push(...locate(choice.diagnostics));
+  if (!choice.ok) return done({ brief });
+  const rationale = choice.value.rationale;
+  const derived = deriveBars(table.value, choice.value.bar);
+  all.push(...locate(derived.diagnostics));
+  if (!derived.ok) return done({ brief, choice: choice.value, rationale });
+  const laid = FORMS.bar.layout(derived.value, { brief, style: style.value, measure: env.measure });
+  all.push(...locate(laid.diagnostics));
+  const broken = nonFiniteNodes(laid.scene);
+  if (broken.length) {
+    all.push(diagnostic('render.internal', `the layout produced non-finite coordinates (${broken.slice(0, 3).join(', ')}); this is a defect in chartwright`, { file: req.file, hint: 'please report it with the brief and data' }));
+  }
+  if (hasErrors(strictly(all, req.strict))) return done({ brief, choice: choice.value, rationale, scene: laid.scene });
+  const svg = writeSvg(laid.scene, { kind: 'live', family: style.value.font.family });
+  return done({ brief, choice: choice.value, rationale, scene: laid.scene, svg });
+}
+
+/** The SVG of a scene with text as glyph outlines, as the raster stage draws it. */
+export function outlineSvg(scene: Scene, env: RenderEnv): string {
+  return writeSvg(scene, { kind: 'outlines', set: env.outlines(), measure: env.measure });
+}

@@ -1,0 +1,35 @@
+import { crc32 as zlibCrc32, deflateSync } from 'node:zlib';
+
+const SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+
+function chunk(type: string, data: Buffer): Buffer {
+  const head = Buffer.alloc(8);
+  head.writeUInt32BE(data.length, 0);
+  head.write(type, 4, 'ascii');
+  const crc = Buffer.alloc(4);
+  crc.writeUInt32BE(zlibCrc32(Buffer.concat([head.subarray(4), data])) >>> 0, 0);
+  return Buffer.concat([head, data, crc]);
+}
+
+/**
+ * Encodes 8-bit RGBA pixels as a PNG (ISO/IEC 15948): one IHDR, one IDAT, IEND. Each row uses
+ * the Sub filter, which suits chart images (long runs of one colour), deflated at level 6.
+ * Deterministic for the same pixels and zlib.
+ */
+export function encodePng(rgba: Uint8Array, width: number, height: number): Buffer {
+  const stride = width * 4;
+  const filtered = Buffer.alloc((stride + 1) * height);
+  for (let y = 0; y < height; y++) {
+    const row = y * stride;
+    const out = y * (stride + 1);
+    filtered[out] = 1;
+    for (let i = 0; i < 4 && i < stride; i++) filtered[out + 1 + i] = rgba[row + i]!;
+    for (let i = 4; i < stride; i++) filtered[out + 1 + i] = (rgba[row + i]! - rgba[row + i - 4]!) & 0xff;
+  }
+  const ihdr = Buffer.alloc(13);
+  ihdr.writeUInt32BE(width, 0);
+  ihdr.writeUInt32BE(height, 4);
+  ihdr[8] = 8;
+  ihdr[9] = 6;
+  return Buffer.concat([SIGNATURE, chunk('IHDR', ihdr), chunk('IDAT', deflateSync(filtered, { level: 6 })), chunk('IEND', Buffer.alloc(0))]);
+}

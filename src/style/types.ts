@@ -1,0 +1,36 @@
+/** Font weights chartwright draws with; each has its own metrics file. */
+export type Weight = 'regular' | 'semibold';
+
+/** How one kind of text is set. */
+export interface TextStyle {
+  size: number;
+  weight: Weight;
+  color: string;
+}
+
+/** A style preset: everything about the look that is not data. Loaded from templates/styles. */
+export interface Style {
+  name: string;
+  description: string;
+  background: string;
+  font: { family: string; regular: string; semibold: string };
+  text: Record<'title' | 'subtitle' | 'source' | 'tick' | 'axisTitle' | 'label' | 'note', TextStyle>;
+  palette: { name: string; primary: string; negative: string; others: string };
+  lines: { axis: string; grid: string; zero: string; axisWidth: number; gridWidth: number; zeroWidth: number };
+  spacing: {
+    /** Space between the frame edge and any content. */
+    padding: number;
+    /** Space between title and subtitle. */
+    titleGap: number;
+    /** Space between blocks: header, plot, footer. */
+    blockGap: number;
+    /** Space between a tick label and the plot. */
+    tickGap: number;
+    /** Space between a bar and its value label. */
+    labelGap: number;
+    /** Share of a band left empty between bars, 0–1. */
+    bandPadding: number;
+    /** Line height as a multiple of the font size. */
+    lineHeight: number;
+  };
+}

@@ -1,0 +1,20 @@
+/** Decimal places of every coordinate written into SVG: 1/100 px is below what any raster shows. */
+export const PRECISION = 2;
+
+/**
+ * Writes a number into SVG: fixed precision, trailing zeros dropped, never `-0`, never an
+ * exponent. A non-finite number is a defect upstream and throws.
+ */
+export function fmt(n: number): string {
+  if (!Number.isFinite(n)) throw new RangeError(`non-finite number in scene: ${n}`);
+  const f = 10 ** PRECISION;
+  const r = Math.round(n * f) / f;
+  if (r === 0) return '0';
+  const s = r.toFixed(PRECISION);
+  return s.replace(/\.?0+$/, '');
+}
+
+/** Rewrites every number in path data through `fmt`. */
+export function fmtPath(d: string): string {
+  return d.replace(/-?\d*\.?\d+(?:e[-+]?\d+)?/gi, (m) => fmt(Number(m)));
+}

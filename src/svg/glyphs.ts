@@ -1,0 +1,46 @@
+import type { TextMeasurer } from '../font/measurer.js';
+import type { GlyphOutlines } from '../font/metrics.js';
+import type { TextNode } from '../scene/types.js';
+import type { Weight } from '../style/types.js';
+import { fmt, fmtPath } from './fmt.js';
+
+/** Glyph outlines for each weight, and the .notdef outline drawn for characters the font lacks. */
+export interface OutlineSet {
+  outlines: Record<Weight, GlyphOutlines>;
+  notdef: Record<Weight, string>;
+}
+
+/** Collects glyph definitions as text is drawn, so each glyph is defined once per SVG. */
+export class GlyphDefs {
+  private readonly used = new Map<string, string>();
+  constructor(private readonly prefix: string, private readonly set: OutlineSet) {}
+
+  /** The id of a glyph's definition, defining it on first use; undefined for blank glyphs (spaces). */
+  ref(codePoint: number, weight: Weight): string | undefined {
+    const id = `${this.prefix}-g${weight === 'regular' ? 'r' : 's'}${codePoint < 0 ? 'x' : codePoint.toString(16)}`;
+    if (this.used.has(id)) return id;
+    const d = codePoint < 0 ? this.set.notdef[weight] : this.set.outlines[weight][codePoint];
+    if (!d) return undefined;
+    this.used.set(id, d);
+    return id;
+  }
+
+  /** The <defs> block, glyphs in first-use order (which the scene's node order fixes). */
+  toSvg(): string {
+    if (this.used.size === 0) return '';
+    const paths = [...this.used].map(([id, d]) => `<path id="${id}" d="${fmtPath(d)}"/>`);
+    return `<defs>${paths.join('')}</defs>`;
+  }
+}
+
+/** A text node drawn as glyph outlines: one group scaled from font units, a <use> per glyph. */
+export function outlineText(node: TextNode, measure: TextMeasurer, defs: GlyphDefs, aria: string): string {
+  const { glyphs, unitsPerEm } = measure.run(node.text, node.weight);
+  const scale = node.size / unitsPerEm;
+  const uses = glyphs.flatMap((g) => {
+    const id = defs.ref(g.codePoint, node.weight);
+    return id ? [`<use href="#${id}"${g.x ? ` x="${fmt(g.x)}"` : ''}/>`] : [];
+  });
+  const transform = `translate(${fmt(node.box.x)} ${fmt(node.y)}) scale(${Number(scale.toPrecision(6))} ${-Number(scale.toPrecision(6))})`;
+  return `<g${aria} fill="${node.fill}" transform="${transform}">${uses.join('')}</g>`;
+}

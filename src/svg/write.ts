@@ -1,0 +1,69 @@
+import type { TextMeasurer } from '../font/measurer.js';
+import { contentHash } from '../scene/ids.js';
+import type { Datum, Scene, SceneNode, TextNode } from '../scene/types.js';
+import { escapeXml } from './escape.js';
+import { fmt, fmtPath } from './fmt.js';
+import { GlyphDefs, outlineText, type OutlineSet } from './glyphs.js';
+
+/** How text is written: live `<text>` (selectable, accessible) or glyph outlines (no font needed to draw). */
+export type TextMode = { kind: 'live'; family: string } | { kind: 'outlines'; set: OutlineSet; measure: TextMeasurer };
+
+const WEIGHT_NUMBER = { regular: 400, semibold: 600 } as const;
+
+function datumTitle(datum: Datum | undefined): string {
+  if (!datum) return '';
+  const text = Object.entries(datum).map(([k, v]) => `${k}: ${v}`).join(', ');
+  return `<title>${escapeXml(text)}</title>`;
+}
+
+function liveText(node: TextNode, cls: string): string {
+  const anchor = node.anchor === 'start' ? '' : ` text-anchor="${node.anchor}"`;
+  const weight = node.weight === 'regular' ? '' : ` font-weight="${WEIGHT_NUMBER[node.weight]}"`;
+  return `<text${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" font-size="${fmt(node.size)}"${weight}${anchor} fill="${node.fill}">${escapeXml(node.text)}</text>`;
+}
+
+function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined): string {
+  const cls = ` class="${escapeXml(node.role)}"`;
+  switch (node.kind) {
+    case 'group':
+      return `<g${cls}>${node.children.map((c) => writeNode(c, mode, defs)).join('')}</g>`;
+    case 'rect': {
+      const body = `<rect${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" fill="${node.fill}"`;
+      return node.datum ? `${body}>${datumTitle(node.datum)}</rect>` : `${body}/>`;
+    }
+    case 'path': {
+      const stroke = node.stroke ? ` stroke="${node.stroke}" stroke-width="${fmt(node.strokeWidth)}"` : '';
+      return `<path${cls} d="${fmtPath(node.d)}" fill="${node.fill ?? 'none'}"${stroke}/>`;
+    }
+    case 'circle': {
+      const body = `<circle${cls} cx="${fmt(node.cx)}" cy="${fmt(node.cy)}" r="${fmt(node.r)}" fill="${node.fill}"`;
+      return node.datum ? `${body}>${datumTitle(node.datum)}</circle>` : `${body}/>`;
+    }
+    case 'text':
+      return mode.kind === 'live' ? liveText(node, cls) : outlineText(node, mode.measure, defs!, cls);
+    case 'image':
+      return `<image${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" href="${escapeXml(node.href)}"/>`;
+  }
+}
+
+/**
+ * The svg stage: scene → SVG text. Deterministic: numbers through `fmt`, nodes in scene order,
+ * ids prefixed with a hash of the scene itself, so two charts inlined in one page never clash.
+ */
+export function writeSvg(scene: Scene, mode: TextMode): string {
+  const prefix = `cw${contentHash(JSON.stringify(scene))}`;
+  const defs = mode.kind === 'outlines' ? new GlyphDefs(prefix, mode.set) : undefined;
+  const body = writeNode(scene.root, mode, defs);
+  const w = fmt(scene.width);
+  const h = fmt(scene.height);
+  const font = mode.kind === 'live' ? ` font-family="${escapeXml(mode.family)}, sans-serif"` : '';
+  return [
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}" viewBox="0 0 ${w} ${h}" role="img" aria-labelledby="${prefix}-title ${prefix}-desc"${font}>`,
+    `<title id="${prefix}-title">${escapeXml(scene.title)}</title>`,
+    `<desc id="${prefix}-desc">${escapeXml(scene.description)}</desc>`,
+    defs ? defs.toSvg() : '',
+    `<rect class="background" width="${w}" height="${h}" fill="${scene.background}"/>`,
+    body,
+    '</svg>',
+  ].filter((part) => part !== '').join('\n') + '\n';
+}

@@ -1,0 +1,64 @@
+import type { DateGrain } from './types.js';
+
+/** Cell texts read as "no value" in any column (common practice in CSV exports from R, spreadsheets and databases). */
+const MISSING_TOKENS = new Set(['', 'na', 'n/a', 'null', 'nan', 'none', '#n/a', '-']);
+
+/** True for a cell that means "no value". */
+export function isMissingText(text: string): boolean {
+  return MISSING_TOKENS.has(text.trim().toLowerCase());
+}
+
+const PLAIN_NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
+const GROUPED_NUMBER = /^[+-]?\d{1,3}(,\d{3})+(\.\d+)?$/;
+const INFINITE = /^[+-]?(inf|infinity)$/i;
+
+/** Reads a number cell: a finite number, `Infinity` for non-finite spellings, or undefined if not a number. */
+export function parseNumberText(text: string): number | undefined {
+  const t = text.trim();
+  if (PLAIN_NUMBER.test(t)) return Number(t);
+  if (GROUPED_NUMBER.test(t)) return Number(t.replace(/,/g, ''));
+  if (INFINITE.test(t)) return t.startsWith('-') ? -Infinity : Infinity;
+  return undefined;
+}
+
+const ISO_DATE = /^(\d{4})-(\d{2})(?:-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.(\d{1,9}))?)?(Z|[+-]\d{2}:?\d{2})?)?)?$/;
+
+function daysIn(year: number, month: number): number {
+  return new Date(Date.UTC(year, month, 0)).getUTCDate();
+}
+
+/**
+ * Reads an ISO 8601 calendar date or date-time (`2026-10`, `2026-10-04`, `2026-10-04T06:30Z`).
+ * A time without an offset is read as UTC, never as the machine's local time, so output does
+ * not depend on where it is rendered.
+ */
+export function parseIsoDate(text: string): { time: number; grain: DateGrain } | undefined {
+  const m = ISO_DATE.exec(text.trim());
+  if (!m) return undefined;
+  const [, y, mo, d, h, mi, s, frac, zone] = m;
+  const year = Number(y);
+  const month = Number(mo);
+  const day = d === undefined ? 1 : Number(d);
+  if (month < 1 || month > 12 || day < 1 || day > daysIn(year, month)) return undefined;
+  const hour = h === undefined ? 0 : Number(h);
+  const minute = mi === undefined ? 0 : Number(mi);
+  const second = s === undefined ? 0 : Number(s);
+  if (hour > 23 || minute > 59 || second > 59) return undefined;
+  const ms = frac === undefined ? 0 : Math.round(Number(`0.${frac}`) * 1000);
+  let time = Date.UTC(year, month - 1, day, hour, minute, second, ms);
+  if (zone && zone !== 'Z') {
+    const sign = zone.startsWith('-') ? -1 : 1;
+    const digits = zone.slice(1).replace(':', '');
+    time -= sign * (Number(digits.slice(0, 2)) * 60 + Number(digits.slice(2))) * 60_000;
+  }
+  const grain: DateGrain = d === undefined ? 'month' : h === undefined ? 'day' : s === undefined ? 'minute' : 'second';
+  return { time, grain };
+}
+
+/** Reads `true`/`false` in any case. */
+export function parseBooleanText(text: string): boolean | undefined {
+  const t = text.trim().toLowerCase();
+  if (t === 'true') return true;
+  if (t === 'false') return false;
+  return undefined;
+}

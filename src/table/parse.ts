@@ -1,0 +1,151 @@
+import { csvParseRows, tsvParseRows } from 'd3-dsv';
+import { describeRows, diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import type { TableOrigin } from './types.js';
+
+/** A raw cell before typing: text from delimited files, or a JSON scalar. */
+export type RawCell = string | number | boolean | null;
+
+/** Rows of raw cells under named columns, with each row's source position. */
+export interface RawTable {
+  names: string[];
+  rows: RawCell[][];
+  positions: number[];
+  positionNoun: 'line' | 'row';
+}
+
+/**
+ * 1-based line on which each record of delimited text starts. A quoted field may span lines,
+ * so this tracks quotes the way RFC 4180 does.
+ */
+export function recordStartLines(text: string): number[] {
+  const starts = [1];
+  let line = 1;
+  let quoted = false;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i];
+    if (ch === '"') quoted = !quoted;
+    else if (ch === '\n') {
+      line++;
+      if (!quoted && i < text.length - 1) starts.push(line);
+    }
+  }
+  return starts;
+}
+
+function checkHeader(names: string[], origin: TableOrigin, headerLine: number): Diagnostic[] {
+  const problems: Diagnostic[] = [];
+  const seen = new Map<string, number>();
+  names.forEach((name, i) => {
+    if (name.trim() === '') {
+      problems.push(diagnostic('table.empty-column-name', `column ${i + 1} of the header has no name`, {
+        file: origin.file, line: headerLine, hint: 'give every column a name in the header row',
+      }));
+    } else if (seen.has(name)) {
+      problems.push(diagnostic('table.duplicate-column', `the column name \`${name}\` appears twice in the header (columns ${seen.get(name)! + 1} and ${i + 1})`, {
+        file: origin.file, line: headerLine, found: name, hint: 'rename one of the columns so each name is unique',
+      }));
+    } else seen.set(name, i);
+  });
+  return problems;
+}
+
+/** Parses CSV or TSV text with d3-dsv into a raw table; the first record is the header. */
+export function parseDelimited(text: string, origin: TableOrigin): Outcome<RawTable> {
+  const body = text.replace(/^\uFEFF/, '');
+  if (body.trim() === '') {
+    return failure([diagnostic('table.empty', 'the data file is empty', { file: origin.file, hint: 'add a header row and at least one data row' })]);
+  }
+  const records = origin.format === 'tsv' ? tsvParseRows(body) : csvParseRows(body);
+  const lines = recordStartLines(body);
+  const kept = records.map((r, i) => ({ r, line: lines[i] ?? i + 1 })).filter(({ r }) => !(r.length === 1 && r[0]!.trim() === ''));
+  const [header, ...data] = kept;
+  if (!header) return failure([diagnostic('table.empty', 'the data file is empty', { file: origin.file, hint: 'add a header row and at least one data row' })]);
+  const names = header.r.map((n) => n.trim());
+  const headerProblems = checkHeader(names, origin, header.line);
+  if (headerProblems.length) return failure(headerProblems);
+  if (data.length === 0) {
+    return failure([diagnostic('table.header-only', 'the data file has a header but no data rows', { file: origin.file, line: header.line, hint: 'add at least one row of data under the header' })]);
+  }
+  const ragged = data.filter(({ r }) => r.length !== names.length);
+  if (ragged.length) {
+    const first = ragged[0]!;
+    return failure([diagnostic('table.ragged-row', `${describeRows(ragged.map((x) => x.line))} ha${ragged.length === 1 ? 's' : 've'} a different number of cells from the header`, {
+      file: origin.file, line: first.line, rows: ragged.map((x) => x.line), found: `${first.r.length} cells`, expected: `${names.length} cells, as in the header`,
+      hint: origin.format === 'csv' ? 'quote cells that contain commas, e.g. "Smith, J."' : 'check for missing or extra tabs on these lines',
+    })]);
+  }
+  return success({ names, rows: data.map(({ r }) => r), positions: data.map(({ line }) => line), positionNoun: 'line' });
+}
+
+function scalarOrProblem(value: unknown, name: string, origin: TableOrigin, position: number, noun: 'line' | 'row'): RawCell | Diagnostic {
+  if (value === null || value === undefined) return null;
+  if (typeof value === 'string' || typeof value === 'boolean') return value;
+  if (typeof value === 'number') return value;
+  return diagnostic('table.nested-value', `${noun} ${position}, column \`${name}\` holds ${Array.isArray(value) ? 'a list' : 'an object'}`, {
+    file: origin.file, ...(noun === 'line' ? { line: position } : {}), rows: [position], field: name, found: JSON.stringify(value).slice(0, 40), expected: 'a number, string, boolean or null',
+    hint: 'flatten nested values into their own columns before charting',
+  });
+}
+
+/** Turns row objects (from JSON, NDJSON or inline rows) into a raw table with the union of their keys. */
+export function rowsFromObjects(items: unknown[], positions: number[], noun: 'line' | 'row', origin: TableOrigin): Outcome<RawTable> {
+  if (items.length === 0) {
+    return failure([diagnostic('table.empty', 'the data has no rows', { file: origin.file, hint: 'give at least one row object' })]);
+  }
+  const names: string[] = [];
+  const seen = new Set<string>();
+  const problems: Diagnostic[] = [];
+  items.forEach((item, i) => {
+    if (item === null || typeof item !== 'object' || Array.isArray(item)) {
+      problems.push(diagnostic('table.row-not-an-object', `${noun} ${positions[i]} is not an object`, {
+        file: origin.file, ...(noun === 'line' ? { line: positions[i] } : {}), rows: [positions[i]!], found: Array.isArray(item) ? 'a list' : JSON.stringify(item),
+        expected: 'an object such as {"pier": "North", "crossings": 212}', hint: 'write each row as an object keyed by column name',
+      }));
+      return;
+    }
+    for (const key of Object.keys(item)) if (!seen.has(key)) { seen.add(key); names.push(key); }
+  });
+  if (problems.length) return failure(problems);
+  const rows = items.map((item, i) => names.map((name) => {
+    const cell = scalarOrProblem((item as Record<string, unknown>)[name], name, origin, positions[i]!, noun);
+    if (cell !== null && typeof cell === 'object') { problems.push(cell); return null; }
+    return cell;
+  }));
+  if (problems.length) return failure(problems);
+  return success({ names, rows, positions, positionNoun: noun });
+}
+
+/** Parses a JSON array of row objects. */
+export function parseJsonRows(text: string, origin: TableOrigin): Outcome<RawTable> {
+  if (text.trim() === '') return failure([diagnostic('table.empty', 'the data file is empty', { file: origin.file, hint: 'write a JSON array of row objects' })]);
+  let value: unknown;
+  try {
+    value = JSON.parse(text.replace(/^\uFEFF/, ''));
+  } catch (e) {
+    return failure([diagnostic('table.bad-json', `the data file is not valid JSON: ${(e as Error).message}`, { file: origin.file, hint: 'check for trailing commas and unquoted names' })]);
+  }
+  if (!Array.isArray(value)) {
+    return failure([diagnostic('table.not-an-array', 'the JSON data is not an array of rows', {
+      file: origin.file, found: value === null ? 'null' : typeof value, expected: 'an array such as [{"pier": "North", "crossings": 212}]', hint: 'wrap the rows in [ ]; for one object per line use an .ndjson file',
+    })]);
+  }
+  return rowsFromObjects(value, value.map((_, i) => i + 1), 'row', origin);
+}
+
+/** Parses newline-delimited JSON: one row object per line; blank lines are skipped. */
+export function parseNdjsonRows(text: string, origin: TableOrigin): Outcome<RawTable> {
+  const items: unknown[] = [];
+  const positions: number[] = [];
+  const lines = text.replace(/^\uFEFF/, '').split(/\r?\n/);
+  for (let i = 0; i < lines.length; i++) {
+    const line = lines[i]!;
+    if (line.trim() === '') continue;
+    try {
+      items.push(JSON.parse(line));
+      positions.push(i + 1);
+    } catch (e) {
+      return failure([diagnostic('table.bad-json', `line ${i + 1} is not valid JSON: ${(e as Error).message}`, { file: origin.file, line: i + 1, hint: 'write one complete JSON object per line' })]);
+    }
+  }
+  return rowsFromObjects(items, positions, 'line', origin);
+}
