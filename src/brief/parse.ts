@@ -19,7 +19,7 @@ function splitPointer(path: string): string[] {
  */
 export function parseBriefText(text: string): Outcome<ParsedBrief> {
   const lineCounter = new LineCounter();
-  const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: false, strict: true });
+  const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: true, strict: true });
   if (doc.errors.length > 0) {
     const problems: Diagnostic[] = doc.errors.map((e) => {
       const pos = e.linePos?.[0];

@@ -16,6 +16,7 @@ export const CATALOGUE = {
   'brief.unknown-column': 'error',
   'brief.style-not-found': 'error',
   'brief.bad-style': 'error',
+  'brief.low-contrast': 'warning',
   // table: reading and typing the data
   'table.not-found': 'error',
   'table.unreadable': 'error',

@@ -1,4 +1,5 @@
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { contrastRatio, MARK_CONTRAST, TEXT_CONTRAST } from './contrast.js';
 import type { Style } from './types.js';
 
 const HEX = /^#[0-9a-f]{6}$/;
@@ -20,5 +21,22 @@ export function checkStyle(value: unknown, file: string): Diagnostic[] {
   for (const key of ['primary', 'negative', 'others'] as const) need(HEX.test(String(s.palette?.[key])), `palette.${key} colour`, `/palette/${key}`);
   for (const key of ['axis', 'grid', 'zero'] as const) need(HEX.test(String(s.lines?.[key])), `lines.${key} colour`, `/lines/${key}`);
   need(!!s.spacing && Object.values(s.spacing).every((v) => typeof v === 'number' && Number.isFinite(v) && v >= 0), 'spacing (non-negative numbers)', '/spacing');
+  return problems;
+}
+
+/**
+ * Warns where a complete style's colours fall short of WCAG 2.x against its background: text
+ * below 4.5:1 (SC 1.4.3) and bar fills below 3:1 (SC 1.4.11).
+ */
+export function contrastWarnings(style: Style, file: string): Diagnostic[] {
+  const problems: Diagnostic[] = [];
+  for (const [key, t] of Object.entries(style.text)) {
+    const ratio = contrastRatio(t.color, style.background);
+    if (ratio < TEXT_CONTRAST) problems.push(diagnostic('brief.low-contrast', `text.${key} colour ${t.color} has contrast ${ratio.toFixed(2)}:1 on ${style.background}, below the 4.5:1 WCAG 2.x asks of text (SC 1.4.3)`, { file, path: `/text/${key}/color`, found: `${ratio.toFixed(2)}:1`, expected: 'at least 4.5:1', hint: 'darken the text colour or lighten the background' }));
+  }
+  for (const key of ['primary', 'negative', 'others'] as const) {
+    const ratio = contrastRatio(style.palette[key], style.background);
+    if (ratio < MARK_CONTRAST) problems.push(diagnostic('brief.low-contrast', `palette.${key} ${style.palette[key]} has contrast ${ratio.toFixed(2)}:1 on ${style.background}, below the 3:1 WCAG 2.1 asks of data marks (SC 1.4.11)`, { file, path: `/palette/${key}`, found: `${ratio.toFixed(2)}:1`, expected: 'at least 3:1', hint: 'use a darker fill, or outline the bars' }));
+  }
   return problems;
 }

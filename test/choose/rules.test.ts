@@ -1,0 +1,109 @@
+import { describe, expect, it } from 'vitest';
+import { codes, renderRows } from '../helpers.js';
+
+const piers = [{ pier: 'North', n: 5 }, { pier: 'South', n: 9 }, { pier: 'East', n: 2 }];
+
+describe('rules for the compare intent', () => {
+  it('a categorical key gets bars sorted by value, and the rationale says why', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'pier', values: 'n' }, piers);
+    expect(r.choice).toMatchObject({ form: 'bar', bar: { order: 'value' } });
+    expect(r.rationale.map((d) => d.decision)).toContain('bar chart');
+    expect(r.rationale.find((d) => d.decision === 'bar chart')!.rule).toMatch(/^compare\.categorical-key/);
+    expect(r.rationale.some((d) => d.decision.startsWith('bars sorted by value'))).toBe(true);
+    expect(r.rationale.some((d) => d.decision === 'the value axis starts at zero')).toBe(true);
+  });
+
+  it('a date key keeps its order and stands upright', async () => {
+    const rows = [{ d: '2026-03-01', n: 1 }, { d: '2026-01-01', n: 9 }, { d: '2026-02-01', n: 4 }];
+    const r = await renderRows({ intent: 'compare', keys: 'd', values: 'n' }, rows);
+    expect(r.choice!.bar).toMatchObject({ order: 'key', orientation: 'vertical' });
+    expect(r.choice!.rationale.find((d) => d.decision === 'bar chart')!.rule).toMatch(/^compare\.ordered-key/);
+  });
+
+  it('an ordinal key with a given order keeps that order', async () => {
+    const rows = [{ s: 'high', n: 1 }, { s: 'low', n: 9 }, { s: 'mid', n: 4 }];
+    const r = await renderRows({ intent: 'compare', keys: 's', values: 'n', fields: { s: { type: 'ordinal', order: ['low', 'mid', 'high'] } } }, rows);
+    expect(r.choice!.bar.order).toBe('key');
+  });
+
+  it('long labels turn the bars horizontal, and the rationale gives the measured widths', async () => {
+    const rows = ['Central Library and Reading Rooms', 'Old Town Children\'s Library', 'Westfield Library and Archive', 'University Quarter Branch', 'Hillcrest Community Library', 'Mobile Library (north routes)', 'Mobile Library (south routes)'].map((b, i) => ({ b, n: i + 1 }));
+    const r = await renderRows({ intent: 'compare', keys: 'b', values: 'n' }, rows);
+    expect(r.choice!.bar.orientation).toBe('horizontal');
+    expect(r.rationale.find((d) => d.decision === 'horizontal bars')!.rule).toMatch(/\d+ px/);
+  });
+
+  it('short labels in few bars stand upright', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'pier', values: 'n' }, piers);
+    expect(r.choice!.bar.orientation).toBe('vertical');
+  });
+
+  it('more bars than fit upright turn horizontal even with short labels', async () => {
+    const rows = Array.from({ length: 60 }, (_, i) => ({ k: `K${i}`, n: i }));
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'n' }, rows);
+    expect(r.choice!.bar.orientation).toBe('horizontal');
+  });
+
+  it('many bars beyond the 3 px capacity are folded into top N and "Others", with a warning', async () => {
+    const rows = Array.from({ length: 300 }, (_, i) => ({ k: `Key ${i}`, n: i + 1 }));
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'n' }, rows);
+    expect(r.ok).toBe(true);
+    expect(codes(r)).toContain('derive.others-folded');
+    expect(r.choice!.bar.capacity).toBeLessThan(300);
+  });
+
+  it('refuses a fitted baseline for bars, and explains why', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'pier', values: 'n', baseline: 'fit' }, piers);
+    expect(r.ok).toBe(false);
+    expect(r.diagnostics).toMatchObject([{ code: 'choice.baseline-fit-refused', path: '/baseline' }]);
+    expect(r.diagnostics[0]!.message).toMatch(/length/);
+  });
+
+  it('with lenient, draws from zero anyway and warns', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'pier', values: 'n', baseline: 'fit' }, piers, { lenient: true });
+    expect(r.ok).toBe(true);
+    expect(codes(r)).toContain('choice.lenient-fallback');
+  });
+
+  it('every other intent answers that it is not supported yet', async () => {
+    for (const intent of ['trend', 'part-to-whole', 'matrix', 'cycle']) {
+      const r = await renderRows({ intent, keys: 'pier', values: 'n' }, piers);
+      expect(r.diagnostics).toMatchObject([{ code: 'choice.intent-not-supported', path: '/intent' }]);
+    }
+  });
+
+  it('refuses two values on one axis and offers the alternatives', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'pier', values: ['n', 'm'] }, piers.map((p) => ({ ...p, m: 1 })));
+    expect(r.diagnostics[0]).toMatchObject({ code: 'choice.too-many-values' });
+    expect(r.diagnostics[0]!.hint).toMatch(/panels/);
+  });
+
+  it('refuses a text value for bar lengths', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'pier', values: 'name' }, piers.map((p) => ({ ...p, name: 'x' })));
+    expect(r.diagnostics[0]).toMatchObject({ code: 'choice.value-not-quantitative' });
+  });
+
+  it('asks for a key, or for a value, when one is missing', async () => {
+    expect(codes(await renderRows({ intent: 'compare', values: 'n' }, piers))).toEqual(['choice.no-key']);
+    expect(codes(await renderRows({ intent: 'compare', keys: 'pier' }, piers))).toEqual(['choice.no-value']);
+  });
+
+  it('refuses two keys until grouped bars exist', async () => {
+    expect(codes(await renderRows({ intent: 'compare', keys: ['pier', 'n'], values: 'n' }, piers))).toContain('choice.too-many-keys');
+  });
+
+  it('honours a pinned bar form and refuses forms not drawn yet', async () => {
+    expect((await renderRows({ intent: 'compare', keys: 'pier', values: 'n', form: 'bar' }, piers)).ok).toBe(true);
+    expect(codes(await renderRows({ intent: 'compare', keys: 'pier', values: 'n', form: 'donut' }, piers))).toEqual(['choice.form-not-supported']);
+  });
+
+  it('refuses cluster order for bars', async () => {
+    expect(codes(await renderRows({ intent: 'compare', keys: 'pier', values: 'n', order: 'cluster' }, piers))).toEqual(['choice.order-not-applicable']);
+  });
+
+  it('counts rows when asked to, without a value column', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'pier', aggregate: 'count' }, [...piers, { pier: 'North', n: 1 }]);
+    expect(r.ok).toBe(true);
+    expect(r.scene!.axes[0]!.title).toBe('Number of rows');
+  });
+});

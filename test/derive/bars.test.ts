@@ -1,0 +1,88 @@
+import { describe, expect, it } from 'vitest';
+import { resolveBrief } from '../../src/brief/resolve.js';
+import type { BarPlan } from '../../src/choose/types.js';
+import { deriveBars } from '../../src/derive/bars.js';
+import { compareNatural } from '../../src/derive/order.js';
+import { inferFields } from '../../src/fields/infer.js';
+import { readTable } from '../../src/table/load.js';
+import { memoryFiles } from '../helpers.js';
+
+async function derive(rows: Record<string, unknown>[], plan: Partial<BarPlan>, brief: Record<string, unknown> = {}) {
+  const resolved = resolveBrief({ intent: 'compare', rows, keys: 'k', values: 'v', ...brief });
+  const t = await readTable(resolved.data, resolved.fields, undefined, memoryFiles({}));
+  if (!t.ok) throw new Error('table');
+  const f = inferFields(t.value, resolved);
+  if (!f.ok) throw new Error('fields');
+  const full: BarPlan = { key: f.value.keys[0]!, value: f.value.values[0], orientation: 'vertical', order: 'value', aggregate: 'sum', capacity: 100, ...plan };
+  return deriveBars(t.value, full);
+}
+const bars = (r: Awaited<ReturnType<typeof derive>>) => (r.ok ? r.value.bars.map((b) => [b.label, b.value]) : r.diagnostics);
+
+describe('derive stage for bars', () => {
+  it('sorts by value, largest first, ties broken by label', async () => {
+    const r = await derive([{ k: 'b', v: 2 }, { k: 'c', v: 5 }, { k: 'a', v: 2 }], {});
+    expect(bars(r)).toEqual([['c', 5], ['a', 2], ['b', 2]]);
+  });
+
+  it('sums rows sharing a key by default, and notes it', async () => {
+    const r = await derive([{ k: 'a', v: 2 }, { k: 'a', v: 3 }, { k: 'b', v: 1 }], {});
+    expect(bars(r)).toEqual([['a', 5], ['b', 1]]);
+    expect(r.diagnostics).toMatchObject([{ code: 'derive.aggregated', severity: 'info' }]);
+  });
+
+  it('applies mean, count, max and min', async () => {
+    const rows = [{ k: 'a', v: 2 }, { k: 'a', v: 6 }, { k: 'a', v: 4 }];
+    expect(bars(await derive(rows, { aggregate: 'mean' }))).toEqual([['a', 4]]);
+    expect(bars(await derive(rows, { aggregate: 'count' }))).toEqual([['a', 3]]);
+    expect(bars(await derive(rows, { aggregate: 'max' }))).toEqual([['a', 6]]);
+    expect(bars(await derive(rows, { aggregate: 'min' }))).toEqual([['a', 2]]);
+  });
+
+  it('leaves out rows with missing values and names them, never drawing them as zero', async () => {
+    const r = await derive([{ k: 'a', v: 2 }, { k: 'b', v: null }, { k: 'c', v: 'NA' }], {});
+    expect(bars(r)).toEqual([['a', 2]]);
+    expect(r.diagnostics).toMatchObject([{ code: 'derive.missing-values', severity: 'warning', rows: [2, 3] }]);
+  });
+
+  it('fails when no row is complete', async () => {
+    const r = await derive([{ k: 'a', v: null }], {});
+    expect(r.ok).toBe(false);
+    expect(r.diagnostics.map((d) => d.code)).toContain('derive.no-rows');
+  });
+
+  it('orders by label naturally, and keeps data order when asked', async () => {
+    const rows = [{ k: 'Pier 10', v: 1 }, { k: 'Pier 2', v: 3 }, { k: 'Pier 1', v: 2 }];
+    expect(bars(await derive(rows, { order: 'label' })).map((b) => (b as string[])[0])).toEqual(['Pier 1', 'Pier 2', 'Pier 10']);
+    expect(bars(await derive(rows, { order: 'data' })).map((b) => (b as string[])[0])).toEqual(['Pier 10', 'Pier 2', 'Pier 1']);
+  });
+
+  it('keeps the key order of an ordered key', async () => {
+    const rows = [{ k: 'Mar', v: 1 }, { k: 'Jan', v: 3 }, { k: 'Feb', v: 2 }];
+    expect(bars(await derive(rows, { order: 'key' }))).toEqual([['Jan', 3], ['Feb', 2], ['Mar', 1]]);
+  });
+
+  it('folds the smallest bars into "Others" carrying their total', async () => {
+    const rows = Array.from({ length: 10 }, (_, i) => ({ k: `k${i}`, v: i + 1 }));
+    const r = await derive(rows, { capacity: 4 });
+    expect(bars(r)).toEqual([['k9', 10], ['k8', 9], ['k7', 8], ['Others (7)', 28]]);
+    expect(r.diagnostics).toMatchObject([{ code: 'derive.others-folded', severity: 'warning' }]);
+    expect(r.ok && r.value.bars[3]!.folds).toBe(7);
+  });
+
+  it('leaves folded bars out, rather than adding means into "Others"', async () => {
+    const rows = Array.from({ length: 6 }, (_, i) => ({ k: `k${i}`, v: i }));
+    const r = await derive(rows, { capacity: 3, aggregate: 'mean' });
+    expect(bars(r)).toEqual([['k5', 5], ['k4', 4], ['k3', 3]]);
+    expect(r.ok && r.value.foldMode).toBe('dropped');
+  });
+
+  it('refuses to fold an ordered key, which would break its order', async () => {
+    const rows = Array.from({ length: 6 }, (_, i) => ({ k: `2026-01-0${i + 1}`, v: i }));
+    const r = await derive(rows, { capacity: 3, order: 'key' });
+    expect(r.diagnostics.map((d) => d.code)).toEqual(['derive.too-many-ordered-bars']);
+  });
+
+  it('compares digits as numbers in natural order', () => {
+    expect(['b2', 'b10', 'a', 'B1'].sort(compareNatural)).toEqual(['a', 'B1', 'b2', 'b10']);
+  });
+});

@@ -1,0 +1,58 @@
+import { mkdtempSync, readdirSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { parse as parseYaml } from 'yaml';
+import { createNodeEnv } from '../src/io/node-env.js';
+import { packageRoot } from '../src/io/package-root.js';
+import type { RenderEnv } from '../src/pipeline/env.js';
+import { renderBrief, type RenderResult } from '../src/pipeline/render.js';
+import { dumpScene, type SceneDump } from '../src/scene/dump.js';
+import type { TableEnv } from '../src/table/load.js';
+
+/** One environment for the whole test file: fonts and styles read once. */
+export const env: RenderEnv = createNodeEnv();
+export const root = packageRoot();
+
+/** A table env over in-memory files, for table-stage tests. */
+export function memoryFiles(files: Record<string, string>, stdin = ''): TableEnv {
+  return {
+    readText: async (p) => {
+      const key = Object.keys(files).find((k) => p === k || p.endsWith(`/${k}`));
+      if (key === undefined) throw Object.assign(new Error(`ENOENT: ${p}`), { code: 'ENOENT' });
+      return files[key]!;
+    },
+    readStdin: async () => stdin,
+  };
+}
+
+/** Renders a brief object (YAML text or object) with inline rows through the whole pipeline. */
+export async function renderRows(brief: Record<string, unknown>, rows: Record<string, unknown>[], opts: { lenient?: boolean; strict?: boolean } = {}): Promise<RenderResult> {
+  return renderBrief({ brief: { ...brief, rows }, ...opts }, env);
+}
+
+/** The codes of a result's diagnostics, in order. */
+export function codes(result: { diagnostics: { code: string }[] }): string[] {
+  return result.diagnostics.map((d) => d.code);
+}
+
+/** The demo briefs shipped in demo-data/. */
+export function demoBriefs(): string[] {
+  const dir = join(root, 'demo-data');
+  return readdirSync(dir).filter((f) => f.endsWith('.brief.yaml')).sort().map((f) => join(dir, f));
+}
+
+/** Renders a demo brief file and dumps its scene. */
+export async function renderDemo(file: string): Promise<{ result: RenderResult; dump: SceneDump }> {
+  const { readFileSync } = await import('node:fs');
+  const result = await renderBrief({ brief: readFileSync(file, 'utf8'), file }, env);
+  if (!result.ok || !result.scene) throw new Error(`demo ${file} failed: ${JSON.stringify(result.diagnostics)}`);
+  return { result, dump: dumpScene(result.scene) };
+}
+
+/** A fresh temporary folder. */
+export function tempDir(): string {
+  return mkdtempSync(join(tmpdir(), 'chartwright-test-'));
+}
+
+/** Parses YAML (for building briefs in tests). */
+export const yaml = (text: string) => parseYaml(text) as Record<string, unknown>;
