@@ -96,21 +96,36 @@ function vertical(c: Common): Parts {
     }
   }
   nodes.push(line('zero-line', 'zero-line', left, y(0), right, y(0), style.lines.zero, style.lines.zeroWidth));
-  const widest = Math.max(...bars.map((b) => measure.width(b.label, tick.size, tick.weight)));
-  const k = thinningStep(widest, band.step(), tickGap);
   const keyTop = bottom + tickGap;
-  const shown = bars.filter((_, i) => i % k === 0);
-  for (const bar of shown) {
-    const centre = band(bar.label)! + band.bandwidth() / 2;
-    const w = measure.width(bar.label, tick.size, tick.weight);
-    const x = Math.min(Math.max(centre, w / 2 + 1), c.ctx.brief.size.width - w / 2 - 1);
-    texts.push(textNode(measure, { id: c.id('tick-key', bar.label), role: 'tick', text: bar.label, style: tick, x, top: keyTop, anchor: 'middle' }));
+  const { k, placed } = placeUprightLabels(bars.map((b) => b.label), band, left, right, (l) => measure.width(l, tick.size, tick.weight), tickGap);
+  const shown = placed.map((p) => bars[p.index]!);
+  for (const p of placed) {
+    texts.push(textNode(measure, { id: c.id('tick-key', p.label), role: 'tick', text: p.label, style: tick, x: p.x, top: keyTop, anchor: 'middle' }));
   }
   texts.push(textNode(measure, { id: 'axis-title-value', role: 'axis-title', text: c.valueTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
   texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: (left + right) / 2, top: keyTop + lineHeight(tick, factor) + tickGap, anchor: 'middle' }));
   const diagnostics = k > 1 ? [thinned(c, k, bars.length, shown.length)] : [];
   const plot = { x: left, y: top, width: right - left, height: bottom - top };
   return { nodes: [...nodes, ...texts], plot, diagnostics, axes: axes(c, vt, 'left', 'bottom', y, band, shown.map((b) => b.label), [rangeBottom, rangeTop], [left, right]) };
+}
+
+/**
+ * Centres of the key labels under upright bars, every k-th shown: the smallest k at which no
+ * two labels come closer than `gap`, after each is kept within the plot's width (so a wide
+ * first or last label never runs under the value ticks).
+ */
+function placeUprightLabels(labels: string[], band: ReturnType<typeof scaleBand<string>>, left: number, right: number, width: (l: string) => number, gap: number) {
+  const widest = Math.max(...labels.map(width));
+  for (let k = thinningStep(widest, band.step(), gap); ; k++) {
+    const placed = labels.flatMap((label, index) => {
+      if (index % k !== 0) return [];
+      const w = width(label);
+      const centre = band(label)! + band.bandwidth() / 2;
+      return [{ label, index, w, x: Math.min(Math.max(centre, left + w / 2), Math.max(left + w / 2, right - w / 2)) }];
+    });
+    const clear = placed.every((p, i) => i === 0 || p.x - p.w / 2 >= placed[i - 1]!.x + placed[i - 1]!.w / 2 + gap);
+    if (clear || placed.length <= 1) return { k, placed };
+  }
 }
 
 function thinned(c: Common, k: number, total: number, shown: number): Diagnostic {
@@ -147,7 +162,8 @@ function horizontal(c: Common): Parts {
   const right = c.body.x + c.body.width;
   const probe = valueTicks(lo, hi, right - left, 'horizontal', tick, measure, c.derived.plan.value?.format);
   const halfTick = measure.width(probe.labels[probe.labels.length - 1]!, tick.size, tick.weight) / 2;
-  const rangeLeft = left + labelRoom(-1);
+  const halfFirstTick = measure.width(probe.labels[0]!, tick.size, tick.weight) / 2;
+  const rangeLeft = left + Math.max(labelRoom(-1), halfFirstTick - tickGap);
   const rangeRight = right - Math.max(labelRoom(1), halfTick);
   const vt = valueTicks(lo, hi, rangeRight - rangeLeft, 'horizontal', tick, measure, c.derived.plan.value?.format);
   const x = scaleLinear().domain(vt.domain).range([rangeLeft, rangeRight]);

@@ -108,17 +108,22 @@ export function ticksOf(l: Labelling): number[] {
 }
 
 /**
- * Ticks for [dmin, dmax] with about m of them. A degenerate range (one value) is widened to a
- * unit around it first, so a single bar still gets an axis.
+ * Ticks for [dmin, dmax] with about m of them. A degenerate range (one value) is widened to
+ * reach zero first, so a single bar still gets an axis. The search runs on the range scaled
+ * by its power of ten, so micro- and mega-scale data get the same nice steps as unit data.
  */
 export function niceTicks(dmin: number, dmax: number, m: number, onlyLoose = false): number[] {
-  let lo = dmin;
-  let hi = dmax;
-  if (!(hi - lo > EPS)) {
-    const pad = lo === 0 ? 1 : Math.abs(lo) * 0.1;
-    lo = lo > 0 ? 0 : lo - pad;
-    hi = hi < 0 ? 0 : hi + pad;
+  // Values this small are zero for any chart (they are below what a float can scale).
+  const tiny = (v: number) => (Math.abs(v) < 1e-300 ? 0 : v);
+  let lo = tiny(dmin);
+  let hi = tiny(dmax);
+  if (!(hi > lo)) {
+    if (lo === 0) hi = 1;
+    else if (lo > 0) lo = 0;
+    else hi = 0;
   }
-  const l = extendedLabelling(lo, hi, Math.max(2, m), onlyLoose);
-  return l ? ticksOf(l) : [clean(lo), clean(hi)];
+  const scale = 10 ** Math.floor(Math.log10(hi - lo));
+  const l = extendedLabelling(lo / scale, hi / scale, Math.max(2, m), onlyLoose);
+  if (!l) return [clean(lo), clean(hi)];
+  return ticksOf(l).map((t) => clean(t * scale));
 }

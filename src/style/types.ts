@@ -30,7 +30,7 @@ export interface Style {
     labelGap: number;
     /** Share of a band left empty between bars, 0–1. */
     bandPadding: number;
-    /** Line height as a multiple of the font size. */
+    /** Line height as a multiple of the font size; at least the font's ascent + descent (1.326 em for Source Sans 3), so text boxes never overlap. */
     lineHeight: number;
   };
 }
