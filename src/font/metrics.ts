@@ -24,23 +24,46 @@ export interface PlacedGlyph {
   x: number;
 }
 
+/** A face's metrics in lookup form: numeric keys, built once per face. */
+export interface CompiledFace {
+  metrics: FontMetrics;
+  advances: Map<number, number>;
+  /** Kerning by pair key `a * PAIR + b`. */
+  kerning: Map<number, number>;
+}
+
+/** Multiplier making a unique number of a code point pair (above the largest code point). */
+const PAIR = 0x110000;
+
+/** Builds the lookup form of a face's metrics. */
+export function compileFace(metrics: FontMetrics): CompiledFace {
+  const advances = new Map<number, number>();
+  for (const [cp, adv] of Object.entries(metrics.advances)) advances.set(Number(cp), adv);
+  const kerning = new Map<number, number>();
+  for (const [pair, adj] of Object.entries(metrics.kerning)) {
+    const [a, b] = pair.split(',').map(Number) as [number, number];
+    kerning.set(a * PAIR + b, adj);
+  }
+  return { metrics, advances, kerning };
+}
+
 /**
  * Lays out a single line of text from cached advances and kerning pairs: the glyphs with their
  * x offsets, and the total advance. No shaping beyond pair kerning: chart labels do not need it.
  */
-export function layoutRun(metrics: FontMetrics, text: string): { glyphs: PlacedGlyph[]; advance: number; missing: string[] } {
+export function layoutRun(face: CompiledFace, text: string): { glyphs: PlacedGlyph[]; advance: number; missing: string[] } {
   const glyphs: PlacedGlyph[] = [];
   const missing: string[] = [];
   let x = 0;
   let previous = -1;
   for (const ch of text) {
     const cp = ch.codePointAt(0)!;
-    const advance = metrics.advances[cp];
-    if (previous >= 0) x += metrics.kerning[`${previous},${cp}`] ?? 0;
+    const advance = face.advances.get(cp);
+    if (previous >= 0) x += face.kerning.get(previous * PAIR + cp) ?? 0;
     if (advance === undefined) {
       missing.push(ch);
       glyphs.push({ codePoint: -1, x });
-      x += metrics.notdefAdvance;
+      x += face.metrics.notdefAdvance;
       previous = -1;
     } else {
       glyphs.push({ codePoint: cp, x });
@@ -49,4 +72,26 @@ export function layoutRun(metrics: FontMetrics, text: string): { glyphs: PlacedG
     }
   }
   return { glyphs, advance: x, missing };
+}
+
+/** The advance of a line of text in font units, without building the glyph list. */
+export function runAdvance(face: CompiledFace, text: string): number {
+  let x = 0;
+  let previous = -1;
+  for (let i = 0; i < text.length; i++) {
+    const cp = text.codePointAt(i)!;
+    if (cp > 0xffff) i++;
+    const advance = face.advances.get(cp);
+    if (previous >= 0) x += face.kerning.get(previous * PAIR + cp) ?? 0;
+    x += advance ?? face.metrics.notdefAdvance;
+    previous = advance === undefined ? -1 : cp;
+  }
+  return x;
+}
+
+/** Characters of the text the face has no glyph for. */
+export function missingCharacters(face: CompiledFace, text: string): string[] {
+  const missing: string[] = [];
+  for (const ch of text) if (!face.advances.has(ch.codePointAt(0)!)) missing.push(ch);
+  return missing;
 }

@@ -12,8 +12,8 @@ export function fmt(n: number): string {
   const f = 10 ** PRECISION;
   const r = Math.round(n * f) / f;
   if (r === 0) return '0';
-  const s = r.toFixed(PRECISION);
-  return s.replace(/\.?0+$/, '');
+  // k/100 as a double prints as its shortest round-trip form, which is the ≤ 2-decimal one.
+  return String(r);
 }
 
 /** Rewrites every number in path data through `fmt`. */

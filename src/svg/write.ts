@@ -46,24 +46,31 @@ function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined)
   }
 }
 
+/** Stands for the id prefix while the body is written; replaced once the body's hash is known. */
+const PREFIX_SLOT = '\u0000';
+
 /**
  * The svg stage: scene → SVG text. Deterministic: numbers through `fmt`, nodes in scene order,
- * ids prefixed with a hash of the scene itself, so two charts inlined in one page never clash.
+ * ids prefixed with a hash of the chart's own content, so two charts inlined in one page never
+ * clash and the same chart always gets the same ids.
  */
 export function writeSvg(scene: Scene, mode: TextMode): string {
-  const prefix = `cw${contentHash(JSON.stringify(scene))}`;
-  const defs = mode.kind === 'outlines' ? new GlyphDefs(prefix, mode.set) : undefined;
+  const defs = mode.kind === 'outlines' ? new GlyphDefs(PREFIX_SLOT, mode.set) : undefined;
   const body = writeNode(scene.root, mode, defs);
   const w = fmt(scene.width);
   const h = fmt(scene.height);
+  const title = escapeXml(scene.title);
+  const desc = escapeXml(scene.description);
+  const prefix = `cw${contentHash(`${w} ${h} ${scene.background}\n${title}\n${desc}\n${body}`)}`;
   const font = mode.kind === 'live' ? ` font-family="${escapeXml(mode.family)}, sans-serif"` : '';
-  return [
+  const parts = [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}" viewBox="0 0 ${w} ${h}" role="img" aria-labelledby="${prefix}-title ${prefix}-desc"${font}>`,
-    `<title id="${prefix}-title">${escapeXml(scene.title)}</title>`,
-    `<desc id="${prefix}-desc">${escapeXml(scene.description)}</desc>`,
+    `<title id="${prefix}-title">${title}</title>`,
+    `<desc id="${prefix}-desc">${desc}</desc>`,
     defs ? defs.toSvg() : '',
     `<rect class="background" width="${w}" height="${h}" fill="${scene.background}"/>`,
     body,
     '</svg>',
-  ].filter((part) => part !== '').join('\n') + '\n';
+  ].filter((part) => part !== '').join('\n');
+  return `${defs ? parts.replaceAll(PREFIX_SLOT, prefix) : parts}\n`;
 }
