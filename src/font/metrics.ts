@@ -10,9 +10,10 @@ export interface FontMetrics {
   xHeight: number;
   notdefAdvance: number;
   notdefOutline: string;
-  advances: Record<string, number>;
-  /** Kerning adjustments for code point pairs, keyed "a,b". */
-  kerning: Record<string, number>;
+  /** Advance widths as a flat list: code point, advance, code point, advance, … */
+  advances: number[];
+  /** Kerning adjustments as a flat list: first code point, second code point, adjustment, … */
+  kerning: number[];
 }
 
 /** Glyph outlines as SVG path data in font units (y up), keyed by code point. */
@@ -38,12 +39,11 @@ const PAIR = 0x110000;
 /** Builds the lookup form of a face's metrics. */
 export function compileFace(metrics: FontMetrics): CompiledFace {
   const advances = new Map<number, number>();
-  for (const [cp, adv] of Object.entries(metrics.advances)) advances.set(Number(cp), adv);
+  const a = metrics.advances;
+  for (let i = 0; i < a.length; i += 2) advances.set(a[i]!, a[i + 1]!);
   const kerning = new Map<number, number>();
-  for (const [pair, adj] of Object.entries(metrics.kerning)) {
-    const [a, b] = pair.split(',').map(Number) as [number, number];
-    kerning.set(a * PAIR + b, adj);
-  }
+  const k = metrics.kerning;
+  for (let i = 0; i < k.length; i += 3) kerning.set(k[i]! * PAIR + k[i + 1]!, k[i + 2]!);
   return { metrics, advances, kerning };
 }
 

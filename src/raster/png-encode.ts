@@ -12,24 +12,20 @@ function chunk(type: string, data: Buffer): Buffer {
 }
 
 /**
- * Encodes 8-bit RGBA pixels as a PNG (ISO/IEC 15948): one IHDR, one IDAT, IEND. Each row uses
- * the Sub filter, which suits chart images (long runs of one colour), deflated at level 6.
+ * Encodes 8-bit RGBA pixels as a PNG (ISO/IEC 15948): one IHDR, one IDAT, IEND. Rows use
+ * filter type 0 (none), deflated at level 3: on chart images (long runs of one colour) this
+ * measured about 3× faster than resvg's own encoder for a slightly smaller file (bench/).
  * Deterministic for the same pixels and zlib.
  */
 export function encodePng(rgba: Uint8Array, width: number, height: number): Buffer {
   const stride = width * 4;
+  const source = Buffer.from(rgba.buffer, rgba.byteOffset, rgba.byteLength);
   const filtered = Buffer.alloc((stride + 1) * height);
-  for (let y = 0; y < height; y++) {
-    const row = y * stride;
-    const out = y * (stride + 1);
-    filtered[out] = 1;
-    for (let i = 0; i < 4 && i < stride; i++) filtered[out + 1 + i] = rgba[row + i]!;
-    for (let i = 4; i < stride; i++) filtered[out + 1 + i] = (rgba[row + i]! - rgba[row + i - 4]!) & 0xff;
-  }
+  for (let y = 0; y < height; y++) source.copy(filtered, y * (stride + 1) + 1, y * stride, (y + 1) * stride);
   const ihdr = Buffer.alloc(13);
   ihdr.writeUInt32BE(width, 0);
   ihdr.writeUInt32BE(height, 4);
   ihdr[8] = 8;
   ihdr[9] = 6;
-  return Buffer.concat([SIGNATURE, chunk('IHDR', ihdr), chunk('IDAT', deflateSync(filtered, { level: 6 })), chunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([SIGNATURE, chunk('IHDR', ihdr), chunk('IDAT', deflateSync(filtered, { level: 3 })), chunk('IEND', Buffer.alloc(0))]);
 }

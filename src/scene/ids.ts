@@ -1,7 +1,19 @@
-/** Turns text into an id fragment: lower-case ASCII letters, digits and hyphens. */
+/** Turns text into an id fragment: lower-case ASCII letters, digits and single hyphens. */
 export function slug(text: string): string {
-  const s = text.normalize('NFKD').replace(/[\u0300-\u036f]/g, '').toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
-  return s || 'x';
+  // Only non-ASCII text needs decomposing (é → e + accent, then the accent is dropped).
+  const source = /^[\x00-\x7f]*$/.test(text) ? text : text.normalize('NFKD');
+  let out = '';
+  let gap = false;
+  for (let i = 0; i < source.length; i++) {
+    let c = source.charCodeAt(i);
+    if (c >= 65 && c <= 90) c += 32;
+    if ((c >= 97 && c <= 122) || (c >= 48 && c <= 57)) {
+      if (gap && out) out += '-';
+      out += String.fromCharCode(c);
+      gap = false;
+    } else if (c < 0x300 || c > 0x36f) gap = true;
+  }
+  return out || 'x';
 }
 
 /**

@@ -47,10 +47,20 @@ function forcedType(hint: FieldType | undefined): ColumnType | undefined {
   return undefined;
 }
 
+/** Whether every present cell reads as the type (and at least one is present); stops at the first that does not. */
+function allRead(type: ColumnType, cells: RawCell[]): boolean {
+  let present = false;
+  for (const cell of cells) {
+    const r = readAs(type, cell);
+    if (r === undefined) return false;
+    if (r !== null) present = true;
+  }
+  return present;
+}
+
 function guessType(cells: RawCell[]): { type: ColumnType; mixed: boolean } {
   for (const type of ['number', 'date', 'boolean'] as const) {
-    const { present, readable } = share(type, cells);
-    if (present > 0 && readable === present) return { type, mixed: false };
+    if (allRead(type, cells)) return { type, mixed: false };
   }
   const { present, readable } = share('number', cells);
   if (present > 0 && readable / present >= MOSTLY) return { type: 'number', mixed: true };
