@@ -58,7 +58,7 @@ export function checkCompareShape(fields: Fields, brief: ResolvedBrief): Diagnos
 export function checkBaseline(brief: ResolvedBrief, lenient: boolean): { problems: Diagnostic[]; decision: Decision } {
   const decision: Decision = {
     decision: 'the value axis starts at zero',
-    rule: 'hard rule: length-coded marks start at zero, because a bar read from a cut axis exaggerates differences (Correll, Bertini & Franconeri, CHI 2020)',
+    rule: 'hard rule: length-coded marks start at zero; a bar read from a cut axis exaggerates differences (Correll, Bertini & Franconeri, CHI 2020)',
   };
   if (brief.baseline !== 'fit') return { problems: [], decision };
   const refusal = 'bars encode values by their length, so a bar axis that does not start at zero makes small differences look large';

@@ -6,7 +6,6 @@ import { deriveBars } from '../derive/bars.js';
 import { diagnostic, hasErrors, inFile, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { inferFields } from '../fields/infer.js';
 import { FORMS } from '../forms/registry.js';
-import { nonFiniteNodes } from '../scene/check.js';
 import type { Scene } from '../scene/types.js';
 import { writeSvg } from '../svg/write.js';
 import { readTable } from '../table/load.js';
@@ -85,13 +84,16 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
   if (!derived.ok) return done({ brief, choice: choice.value, rationale });
   const laid = FORMS.bar.layout(derived.value, { brief, style: style.value, measure: env.measure });
   all.push(...locate(laid.diagnostics));
-  const broken = nonFiniteNodes(laid.scene);
-  if (broken.length) {
-    all.push(diagnostic('render.internal', `the layout produced non-finite coordinates (${broken.slice(0, 3).join(', ')}); this is a defect in chartwright`, { file: req.file, hint: 'please report it with the brief and data' }));
-  }
   if (hasErrors(strictly(all, req.strict))) return done({ brief, choice: choice.value, rationale, scene: laid.scene });
-  const svg = writeSvg(laid.scene, { kind: 'live', family: style.value.font.family });
-  return done({ brief, choice: choice.value, rationale, scene: laid.scene, svg });
+  try {
+    const svg = writeSvg(laid.scene, { kind: 'live', family: style.value.font.family });
+    return done({ brief, choice: choice.value, rationale, scene: laid.scene, svg });
+  } catch (e) {
+    // fmt refuses non-finite and absurd coordinates: a layout defect, reported, never written.
+    if (!(e instanceof RangeError)) throw e;
+    all.push(diagnostic('render.internal', `the layout produced a bad coordinate (${e.message}); this is a defect in chartwright`, { file: req.file, hint: 'please report it with the brief and data' }));
+    return done({ brief, choice: choice.value, rationale, scene: laid.scene });
+  }
 }
 
 /** The SVG of a scene with text as glyph outlines, as the raster stage draws it. */
