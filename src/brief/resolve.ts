@@ -41,10 +41,13 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
   };
 }
 
-function withPositions(diagnostics: Diagnostic[], parsed: ParsedBrief | undefined): Diagnostic[] {
-  if (!parsed) return diagnostics;
+/**
+ * Adds the brief's line and column to diagnostics that carry a brief path but no position.
+ * Diagnostics about another file (a data or style file) keep their own positions.
+ */
+export function withPositions(diagnostics: Diagnostic[], parsed: ParsedBrief): Diagnostic[] {
   return diagnostics.map((d) => {
-    if (d.path === undefined || d.line !== undefined) return d;
+    if (d.path === undefined || d.line !== undefined || d.file) return d;
     const pos = parsed.locate(d.path);
     return pos ? { ...d, line: pos.line, column: pos.column } : d;
   });

@@ -17,6 +17,11 @@ function parseScale(value: string): number {
   return n;
 }
 
+/** Diagnostics with their files relative to the working folder, as people typed them. */
+function relativeFiles(diagnostics: Diagnostic[], cwd: string): Diagnostic[] {
+  return diagnostics.map((d) => (d.file ? { ...d, file: relative(cwd, d.file) || d.file } : d));
+}
+
 /** Prints diagnostics for people on stderr; info notes only when asked. */
 function report(io: CliIo, diagnostics: Diagnostic[], withInfo: boolean): void {
   const colour = colourAllowed(io.isTTY, io.env);
@@ -42,7 +47,7 @@ async function runRender(files: string[], flags: RenderFlags, io: CliIo, env: Re
   const outDir = flags.outDir ? resolve(io.cwd, flags.outDir) : undefined;
   const reports = await renderBatch(files.map((f) => resolve(io.cwd, f)), env, batchOptions(flags, io, outDir), io.cwd);
   for (const r of reports) {
-    report(io, r.diagnostics.map((d) => (d.file ? { ...d, file: relative(io.cwd, d.file) || d.file } : d)), false);
+    report(io, relativeFiles(r.diagnostics, io.cwd), false);
     for (const w of r.written) io.stdout(`${relative(io.cwd, w)}\n`);
   }
   return batchExit(reports);
@@ -50,7 +55,7 @@ async function runRender(files: string[], flags: RenderFlags, io: CliIo, env: Re
 
 async function runExplain(file: string, flags: { json?: boolean; lenient?: boolean }, io: CliIo, env: RenderEnv): Promise<number> {
   const result = await renderFile(resolve(io.cwd, file), env, { strict: false, lenient: !!flags.lenient, debug: false });
-  const diagnostics = result.diagnostics.map((d) => (d.file ? { ...d, file: relative(io.cwd, d.file) || d.file } : d));
+  const diagnostics = relativeFiles(result.diagnostics, io.cwd);
   if (flags.json) {
     io.stdout(`${JSON.stringify({ form: result.choice?.form ?? null, ok: result.ok, rationale: result.rationale, diagnostics }, null, 2)}\n`);
   } else {
@@ -65,7 +70,7 @@ async function runCheck(files: string[], flags: { strict?: boolean; lenient?: bo
   let failed = false;
   for (const file of files) {
     const result = await renderFile(resolve(io.cwd, file), env, { strict: !!flags.strict, lenient: !!flags.lenient, debug: false });
-    report(io, result.diagnostics.map((d) => (d.file ? { ...d, file: relative(io.cwd, d.file) || d.file } : d)), false);
+    report(io, relativeFiles(result.diagnostics, io.cwd), false);
     if (!result.ok) failed = true;
     io.stdout(`${result.ok ? 'ok' : 'FAILED'} ${file}\n`);
   }

@@ -38,7 +38,6 @@ export const CATALOGUE = {
   // choice: the rules
   'choice.intent-not-supported': 'error',
   'choice.form-not-supported': 'error',
-  'choice.form-mismatch': 'error',
   'choice.no-key': 'error',
   'choice.too-many-keys': 'error',
   'choice.no-value': 'error',
@@ -47,7 +46,6 @@ export const CATALOGUE = {
   'choice.baseline-fit-refused': 'error',
   'choice.order-not-applicable': 'error',
   'choice.lenient-fallback': 'warning',
-  'choice.zero-baseline': 'info',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',

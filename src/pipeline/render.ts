@@ -1,4 +1,4 @@
-import { checkBriefValue, readBrief } from '../brief/resolve.js';
+import { checkBriefValue, readBrief, withPositions } from '../brief/resolve.js';
 import type { ResolvedBrief } from '../brief/types.js';
 import { choose } from '../choose/choose.js';
 import type { Choice, Decision } from '../choose/types.js';
@@ -62,11 +62,7 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
   all.push(...inFile(briefOutcome.diagnostics, req.file));
   if (!briefOutcome.ok) return done();
   const { brief, parsed } = briefOutcome.value;
-  const locate = (ds: Diagnostic[]) => inFile(ds.map((d) => {
-    if (d.path === undefined || d.line !== undefined || d.file) return d;
-    const pos = parsed.locate(d.path);
-    return pos ? { ...d, line: pos.line, column: pos.column } : d;
-  }), req.file);
+  const locate = (ds: Diagnostic[]) => inFile(withPositions(ds, parsed), req.file);
   const style = env.style(brief.style, req.file);
   all.push(...locate(style.diagnostics));
   const table = await readTable(brief.data, brief.fields, req.file, env.table);

@@ -1,4 +1,4 @@
-import type { Box, Datum, Scene, SceneNode, TextNode } from './types.js';
+import type { AxisInfo, Box, Datum, Scene, SceneNode, TextNode } from './types.js';
 
 /** A mark in the scene dump: role, pixel geometry, fill, and the datum it encodes. */
 export interface DumpMark {
@@ -34,7 +34,7 @@ export interface SceneDump {
   description: string;
   plot: Box;
   marks: DumpMark[];
-  axes: { orient: string; field: string; title: string; domain: number[] | string[]; ticks: number[] | string[]; tickPositions: number[]; range: [number, number] }[];
+  axes: AxisInfo[];
   texts: DumpText[];
 }
 
