@@ -17,6 +17,7 @@ export const CATALOGUE = {
   'brief.style-not-found': 'error',
   'brief.bad-style': 'error',
   'brief.low-contrast': 'warning',
+  'brief.indistinct-colours': 'warning',
   // table: reading and typing the data
   'table.not-found': 'error',
   'table.unreadable': 'error',

@@ -101,6 +101,9 @@ function vertical(c: Common): Parts {
   const shown = placed.map((p) => bars[p.index]!);
   for (const p of placed) {
     texts.push(textNode(measure, { id: c.id('tick-key', p.label), role: 'tick', text: p.label, style: tick, x: p.x, top: keyTop, anchor: 'middle' }));
+    // With labels thinned, a short tick ties each label to its bar (a clamped label may sit off-centre).
+    const centre = band(p.label)! + band.bandwidth() / 2;
+    if (k > 1) nodes.push(line(c.id('tick-mark', p.label), 'tick-mark', centre, bottom, centre, bottom + tickGap - 2, style.lines.axis, style.lines.axisWidth));
   }
   texts.push(textNode(measure, { id: 'axis-title-value', role: 'axis-title', text: c.valueTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
   texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: (left + right) / 2, top: keyTop + lineHeight(tick, factor) + tickGap, anchor: 'middle' }));

@@ -7,7 +7,7 @@ import { suggestionHint } from '../diagnostics/suggest.js';
 import { createMeasurer, type TextMeasurer } from '../font/measurer.js';
 import type { FontMetrics, GlyphOutlines } from '../font/metrics.js';
 import type { RenderEnv } from '../pipeline/env.js';
-import { checkStyle, contrastWarnings } from '../style/check.js';
+import { checkStyle, contrastWarnings, distinctnessWarnings } from '../style/check.js';
 import type { Style, Weight } from '../style/types.js';
 import type { OutlineSet } from '../svg/glyphs.js';
 import type { TableEnv } from '../table/load.js';
@@ -41,7 +41,7 @@ function loadStyle(root: string, name: string, briefFile: string | undefined): O
     return failure([diagnostic(code === 'ENOENT' ? 'brief.style-not-found' : 'brief.bad-style', code === 'ENOENT' ? `the style file \`${name}\` does not exist` : `the style file \`${name}\` is not valid JSON`, { path: '/style', found: file, hint: 'style paths are relative to the brief; presets are named without .json' })]);
   }
   const problems = checkStyle(value, file);
-  return problems.length ? failure(problems) : success(value as Style, contrastWarnings(value as Style, file));
+  return problems.length ? failure(problems) : success(value as Style, [...contrastWarnings(value as Style, file), ...distinctnessWarnings(value as Style, file)]);
 }
 
 /**

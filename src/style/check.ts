@@ -1,4 +1,8 @@
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { ciede2000 } from '../color/ciede2000.js';
+import { DEFICIENCIES, simulate } from '../color/cvd.js';
+import { rgbToLab } from '../color/lab.js';
+import { hexToRgb } from '../color/srgb.js';
 import { contrastRatio, MARK_CONTRAST, TEXT_CONTRAST } from './contrast.js';
 import type { Style } from './types.js';
 
@@ -37,6 +41,36 @@ export function contrastWarnings(style: Style, file: string): Diagnostic[] {
   for (const key of ['primary', 'negative', 'others'] as const) {
     const ratio = contrastRatio(style.palette[key], style.background);
     if (ratio < MARK_CONTRAST) problems.push(diagnostic('brief.low-contrast', `palette.${key} ${style.palette[key]} has contrast ${ratio.toFixed(2)}:1 on ${style.background}, below the 3:1 WCAG 2.1 asks of data marks (SC 1.4.11)`, { file, path: `/palette/${key}`, found: `${ratio.toFixed(2)}:1`, expected: 'at least 3:1', hint: 'use a darker fill, or outline the bars' }));
+  }
+  return problems;
+}
+
+/**
+ * Smallest CIEDE2000 difference at which two bar fills count as told apart at a glance
+ * (common practice for marks of chart size; no single published threshold).
+ */
+export const DISTINCT_DE00 = 10;
+
+/**
+ * Warns where two of a style's bar fills (primary, negative, others) come closer than
+ * DISTINCT_DE00, for normal vision or under a simulated colour-vision deficiency
+ * (Machado et al. 2009, severity 1.0).
+ */
+export function distinctnessWarnings(style: Style, file: string): Diagnostic[] {
+  const fills = [['primary', style.palette.primary], ['negative', style.palette.negative], ['others', style.palette.others]] as const;
+  const problems: Diagnostic[] = [];
+  for (let i = 0; i < fills.length; i++) {
+    for (let j = i + 1; j < fills.length; j++) {
+      const [[na, a], [nb, b]] = [fills[i]!, fills[j]!];
+      for (const vision of [undefined, ...DEFICIENCIES]) {
+        const de = ciede2000(rgbToLab(vision ? simulate(hexToRgb(a), vision) : hexToRgb(a)), rgbToLab(vision ? simulate(hexToRgb(b), vision) : hexToRgb(b)));
+        if (de >= DISTINCT_DE00) continue;
+        problems.push(diagnostic('brief.indistinct-colours', `palette.${na} ${a} and palette.${nb} ${b} differ by only ΔE00 ${de.toFixed(1)}${vision ? ` for a reader with ${vision}` : ''}`, {
+          file, path: `/palette/${nb}`, found: `ΔE00 ${de.toFixed(1)}`, expected: `at least ${DISTINCT_DE00}`, hint: 'change lightness as well as hue, so the fills differ for every reader',
+        }));
+        break;
+      }
+    }
   }
   return problems;
 }

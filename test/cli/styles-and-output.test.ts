@@ -41,6 +41,27 @@ describe('styles', () => {
   });
 });
 
+describe('style colours for every reader', () => {
+  it('warns when a custom style\'s positive and negative fills merge for a colour-blind reader', async () => {
+    const dir = tempDir();
+    const style = JSON.parse(readFileSync(join(root, 'templates', 'styles', 'report.json'), 'utf8'));
+    // A red and a green of similar lightness: distinct for normal vision, close under deuteranopia.
+    style.palette.primary = '#2e7d32';
+    style.palette.negative = '#c62828';
+    writeFileSync(join(dir, 'rg.json'), JSON.stringify(style));
+    const r = await renderBrief({ brief: brief({ style: './rg.json' }), file: join(dir, 'b.yaml') }, env);
+    expect(r.ok).toBe(true);
+    const warnings = r.diagnostics.filter((d) => d.code === 'brief.indistinct-colours');
+    expect(warnings.length).toBeGreaterThan(0);
+    expect(warnings[0]!.message).toMatch(/protanopia|deuteranopia/);
+  });
+
+  it('raises no colour warnings for the default style', async () => {
+    const r = await renderBrief({ brief: brief({}) }, env);
+    expect(r.diagnostics).toEqual([]);
+  });
+});
+
 describe('layout refusals and warnings', () => {
   it('refuses a frame too small for its words, pointing at size', async () => {
     const r = await renderBrief({ brief: brief({ size: { width: 160, height: 120 }, title: 'A title long enough to wrap over several lines here', subtitle: 'And a subtitle that wraps too', source: 'And a source line' }) }, env);
