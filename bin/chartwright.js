@@ -15,4 +15,5 @@ process.exitCode = await cli.runCli(process.argv.slice(2), {
   env: process.env,
   isTTY: Boolean(process.stderr.isTTY),
   pid: process.pid,
+  clock: () => performance.now(),
 });

@@ -80,3 +80,18 @@ export function checkPinnedForm(brief: ResolvedBrief): Diagnostic[] {
     path: '/form', found: brief.form, expected: SUPPORTED_FORMS.join(', '), hint: 'remove `form:` to let the rules choose, or pin `form: bar`',
   })];
 }
+
+/**
+ * The rules that need only the brief: a supported intent, a drawable pinned form, an honest
+ * baseline. Run before the data is read too, so one `check` reports them with data problems.
+ */
+export function checkBriefRules(brief: ResolvedBrief, lenient: boolean): { problems: Diagnostic[]; baseline: Decision } {
+  if (!(SUPPORTED_INTENTS as readonly string[]).includes(brief.intent)) {
+    const problems = [diagnostic('choice.intent-not-supported', `the intent \`${brief.intent}\` is not supported yet`, {
+      path: '/intent', found: brief.intent, expected: SUPPORTED_INTENTS.join(', '), hint: 'use `intent: compare` for bars of one value per key',
+    })];
+    return { problems, baseline: checkBaseline(brief, lenient).decision };
+  }
+  const baseline = checkBaseline(brief, lenient);
+  return { problems: [...checkPinnedForm(brief), ...baseline.problems], baseline: baseline.decision };
+}

@@ -6,7 +6,7 @@ import type { Field, Fields } from '../fields/types.js';
 import { isOrdered } from '../fields/types.js';
 import type { Style } from '../style/types.js';
 import { measureBarFit } from './bar-fit.js';
-import { checkBaseline, checkCompareShape, checkPinnedForm, SUPPORTED_INTENTS } from './checks.js';
+import { checkBriefRules, checkCompareShape } from './checks.js';
 import { matchRule } from './rules.js';
 import type { BarPlan, Choice, Decision } from './types.js';
 
@@ -56,21 +56,16 @@ function chooseOrder(brief: ResolvedBrief, key: Field, lenient: boolean, problem
  * rationale, with each decision tied to the rule that made it.
  */
 export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext): Outcome<Choice> {
-  if (!(SUPPORTED_INTENTS as readonly string[]).includes(brief.intent)) {
-    return failure([diagnostic('choice.intent-not-supported', `the intent \`${brief.intent}\` is not supported yet`, {
-      path: '/intent', found: brief.intent, expected: SUPPORTED_INTENTS.join(', '), hint: 'use `intent: compare` for bars of one value per key',
-    })]);
-  }
-  const problems = [...checkPinnedForm(brief), ...checkCompareShape(fields, brief)];
-  const baseline = checkBaseline(brief, ctx.lenient);
-  problems.push(...baseline.problems);
+  const briefRules = checkBriefRules(brief, ctx.lenient);
+  if (hasErrors(briefRules.problems)) return failure(briefRules.problems);
+  const problems = [...briefRules.problems, ...checkCompareShape(fields, brief)];
   if (hasErrors(problems)) return failure(problems);
   const rule = matchRule(brief.intent, fields)!;
   const key = fields.keys[0]!;
   const value = fields.values[0];
   const rationale: Decision[] = [{ decision: 'bar chart', rule: `${rule.id}: ${rule.why}` }];
   if (brief.form) rationale.push({ decision: `form pinned to ${brief.form}`, rule: 'the brief pins `form:`; the hard rules still apply' });
-  rationale.push(baseline.decision);
+  rationale.push(briefRules.baseline);
   const order = chooseOrder(brief, key, ctx.lenient, problems, rationale);
   if (hasErrors(problems)) return failure(problems);
 

@@ -2,7 +2,7 @@ import { readFile } from 'node:fs/promises';
 import { basename, extname, join, resolve } from 'node:path';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { RenderEnv } from '../pipeline/env.js';
-import { outlineSvg, renderBrief, type RenderResult } from '../pipeline/render.js';
+import { outlineSvg, renderBrief, type RenderResult, type StageTiming } from '../pipeline/render.js';
 import { rasterize } from '../raster/rasterize.js';
 import { dumpScene } from '../scene/dump.js';
 import { plannedOutputs, writeAtomic } from './outputs.js';
@@ -19,6 +19,8 @@ export interface BatchOptions {
   debug: boolean;
   /** Distinguishes this process's temporary files from another's writing the same folder. */
   tempTag: string;
+  /** When given, each stage is timed with it (--timings). */
+  clock?: () => number;
 }
 
 /** What happened to one brief. */
@@ -27,10 +29,12 @@ export interface BriefReport {
   ok: boolean;
   written: string[];
   diagnostics: Diagnostic[];
+  /** Per-stage times, with --timings. */
+  timings?: StageTiming[];
 }
 
 /** Reads a brief file and renders it; a missing file or unexpected failure becomes a diagnostic. */
-export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug'>): Promise<RenderResult> {
+export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock'>): Promise<RenderResult> {
   let text: string;
   try {
     text = await readFile(file, 'utf8');
@@ -39,7 +43,7 @@ export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchO
     return { ok: false, rationale: [], diagnostics: [diagnostic('brief.not-found', code === 'ENOENT' ? 'the brief file does not exist' : `the brief file cannot be read (${code})`, { file, hint: 'check the path; briefs are .yaml, .yml or .json files' })] };
   }
   try {
-    return await renderBrief({ brief: text, file, strict: opts.strict, lenient: opts.lenient }, env);
+    return await renderBrief({ brief: text, file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock }, env);
   } catch (e) {
     const detail = opts.debug ? `\n${(e as Error).stack}` : '';
     return { ok: false, rationale: [], diagnostics: [diagnostic('render.internal', `chartwright failed unexpectedly: ${(e as Error).message}${detail}`, { file, hint: 'rerun with --debug and report it with the brief and data' })] };
@@ -63,14 +67,16 @@ export async function renderBatch(files: string[], env: RenderEnv, opts: BatchOp
   const reports: BriefReport[] = [];
   for (const file of files) {
     const result = await renderFile(file, env, opts);
-    const report: BriefReport = { brief: file, ok: result.ok, written: [], diagnostics: result.diagnostics };
+    const report: BriefReport = { brief: file, ok: result.ok, written: [], diagnostics: result.diagnostics, ...(result.timings ? { timings: result.timings } : {}) };
     reports.push(report);
     if (!result.ok || !result.svg || !result.scene || !result.brief) continue;
     const planned = plannedOutputs(file, result.brief.output, opts.outDir, opts.png);
     const contents: { path: string; data: string | Buffer }[] = [];
     try {
       for (const p of planned) {
+        const started = opts.clock?.();
         contents.push({ path: p.path, data: p.kind === 'svg' ? result.svg : rasterize(outlineSvg(result.scene, env), { scale: opts.scale, fontFiles: [] }) });
+        if (p.kind === 'png' && started !== undefined) report.timings?.push({ stage: 'png', ms: opts.clock!() - started });
         if (p.kind === 'png') await breathe();
       }
     } catch (e) {

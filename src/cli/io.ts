@@ -8,4 +8,6 @@ export interface CliIo {
   isTTY: boolean;
   /** This process's id, to name temporary files. */
   pid: number;
+  /** A clock in ms for --timings; never read by rendering itself. */
+  clock: () => number;
 }

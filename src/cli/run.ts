@@ -37,10 +37,10 @@ function demoBriefs(root: string): string[] {
   return readdirSync(dir).filter((f) => /\.brief\.(ya?ml|json)$/.test(f)).sort().map((f) => join(dir, f));
 }
 
-interface RenderFlags { outDir?: string; png?: boolean; scale: number; scene?: string; strict?: boolean; lenient?: boolean; debug?: boolean }
+interface RenderFlags { outDir?: string; png?: boolean; scale: number; scene?: string; strict?: boolean; lenient?: boolean; debug?: boolean; timings?: boolean }
 
 function batchOptions(flags: RenderFlags, io: CliIo, outDir: string | undefined): BatchOptions {
-  return { outDir, png: !!flags.png, scale: flags.scale, scene: flags.scene, strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, tempTag: String(io.pid) };
+  return { outDir, png: !!flags.png, scale: flags.scale, scene: flags.scene, strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, tempTag: String(io.pid), ...(flags.timings ? { clock: io.clock } : {}) };
 }
 
 async function runRender(files: string[], flags: RenderFlags, io: CliIo, env: RenderEnv): Promise<number> {
@@ -49,6 +49,7 @@ async function runRender(files: string[], flags: RenderFlags, io: CliIo, env: Re
   for (const r of reports) {
     report(io, relativeFiles(r.diagnostics, io.cwd), false);
     for (const w of r.written) io.stdout(`${relative(io.cwd, w)}\n`);
+    if (r.timings) io.stderr(`${relative(io.cwd, r.brief)}: ${r.timings.map((t) => `${t.stage} ${t.ms.toFixed(2)} ms`).join(', ')}\n`);
   }
   return batchExit(reports);
 }
@@ -91,7 +92,8 @@ function program(io: CliIo, env: () => RenderEnv, exit: { code: number }): Comma
     .option('--scene <path>', 'dump the scene as JSON: a file for one brief, a folder for several')
     .option('--strict', 'treat warnings as errors')
     .option('--lenient', 'draw the nearest honest form, with a warning, instead of failing on a hard rule')
-    .option('--debug', 'show stack traces of unexpected failures');
+    .option('--debug', 'show stack traces of unexpected failures')
+    .option('--timings', 'print how long each stage took, per brief, on stderr');
   withRenderFlags(cli.command('render').description('render briefs to SVG (and PNG)').argument('<brief...>', 'brief files (.yaml, .yml, .json)'))
     .action(async (files: string[], flags: RenderFlags) => { exit.code = await runRender(files, flags, io, env()); });
   cli.command('explain').description('say which chart a brief gets and why').argument('<brief>', 'a brief file')

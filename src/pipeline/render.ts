@@ -1,5 +1,6 @@
 import { checkBriefValue, readBrief, withPositions } from '../brief/resolve.js';
 import type { ResolvedBrief } from '../brief/types.js';
+import { checkBriefRules } from '../choose/checks.js';
 import { choose } from '../choose/choose.js';
 import type { Choice, Decision } from '../choose/types.js';
 import { deriveBars } from '../derive/bars.js';
@@ -23,6 +24,17 @@ export interface RenderRequest {
   lenient?: boolean;
   /** Treat warnings as errors. Default: false. */
   strict?: boolean;
+  /**
+   * A clock in milliseconds, to time each stage (the CLI's --timings). Only measured, never
+   * used for output. Default: none (no timings).
+   */
+  clock?: () => number;
+}
+
+/** How long one stage took. */
+export interface StageTiming {
+  stage: string;
+  ms: number;
 }
 
 /** What a render produced: the SVG and scene when it succeeded, and always the reasons and diagnostics. */
@@ -35,6 +47,8 @@ export interface RenderResult {
   svg?: string;
   rationale: Decision[];
   diagnostics: Diagnostic[];
+  /** Per-stage times, when the request gave a clock. */
+  timings?: StageTiming[];
 }
 
 function strictly(diagnostics: Diagnostic[], strict: boolean | undefined): Diagnostic[] {
@@ -54,35 +68,52 @@ function briefStage(req: RenderRequest) {
  */
 export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<RenderResult> {
   const all: Diagnostic[] = [];
+  const timings: StageTiming[] = [];
+  let last = req.clock?.() ?? 0;
+  const lap = (stage: string) => {
+    if (!req.clock) return;
+    const now = req.clock();
+    timings.push({ stage, ms: now - last });
+    last = now;
+  };
   const done = (extra: Partial<RenderResult> = {}): RenderResult => {
     const diagnostics = strictly(all, req.strict);
-    return { ok: !hasErrors(diagnostics) && extra.svg !== undefined, rationale: [], ...extra, diagnostics };
+    return { ok: !hasErrors(diagnostics) && extra.svg !== undefined, rationale: [], ...extra, diagnostics, ...(req.clock ? { timings } : {}) };
   };
   const briefOutcome = briefStage(req);
   all.push(...inFile(briefOutcome.diagnostics, req.file));
+  lap('brief');
   if (!briefOutcome.ok) return done();
   const { brief, parsed } = briefOutcome.value;
   const locate = (ds: Diagnostic[]) => inFile(withPositions(ds, parsed), req.file);
+  // When the data cannot be charted, the rules that need only the brief are still reported.
+  const earlyRules = () => locate(checkBriefRules(brief, req.lenient ?? false).problems);
   const style = env.style(brief.style, req.file);
   all.push(...locate(style.diagnostics));
   const table = await readTable(brief.data, brief.fields, req.file, env.table);
   all.push(...locate(table.diagnostics));
-  if (!style.ok || !table.ok) return done({ brief });
+  lap('table');
+  if (!style.ok || !table.ok) { all.push(...earlyRules()); return done({ brief }); }
   const fields = inferFields(table.value, brief);
   all.push(...locate(fields.diagnostics));
-  if (!fields.ok) return done({ brief });
+  lap('fields');
+  if (!fields.ok) { all.push(...earlyRules()); return done({ brief }); }
   const choice = choose(fields.value, brief, { style: style.value, measure: env.measure, lenient: req.lenient ?? false });
   all.push(...locate(choice.diagnostics));
+  lap('choose');
   if (!choice.ok) return done({ brief });
   const rationale = choice.value.rationale;
   const derived = deriveBars(table.value, choice.value.bar);
   all.push(...locate(derived.diagnostics));
+  lap('derive');
   if (!derived.ok) return done({ brief, choice: choice.value, rationale });
   const laid = FORMS.bar.layout(derived.value, { brief, style: style.value, measure: env.measure });
   all.push(...locate(laid.diagnostics));
+  lap('layout');
   if (hasErrors(strictly(all, req.strict))) return done({ brief, choice: choice.value, rationale, scene: laid.scene });
   try {
     const svg = writeSvg(laid.scene, { kind: 'live', family: style.value.font.family });
+    lap('svg');
     return done({ brief, choice: choice.value, rationale, scene: laid.scene, svg });
   } catch (e) {
     // fmt refuses non-finite and absurd coordinates: a layout defect, reported, never written.

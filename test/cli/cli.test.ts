@@ -10,7 +10,8 @@ import { tempDir } from '../helpers.js';
 function io(cwd: string) {
   const out: string[] = [];
   const err: string[] = [];
-  const value: CliIo = { stdout: (s) => out.push(s), stderr: (s) => err.push(s), cwd, env: {}, isTTY: false, pid: 4242 };
+  let now = 0;
+  const value: CliIo = { stdout: (s) => out.push(s), stderr: (s) => err.push(s), cwd, env: {}, isTTY: false, pid: 4242, clock: () => (now += 1.5) };
   return { io: value, out: () => out.join(''), err: () => err.join('') };
 }
 
@@ -100,6 +101,17 @@ describe('chartwright render', () => {
     expect(existsSync(join(dir, 'strict'))).toBe(false);
   });
 
+  it('times each stage with --timings, and writes the same SVG as without', async () => {
+    const dir = workspace();
+    const t = io(dir);
+    expect(await runCli(['render', 'piers.brief.yaml', '--png', '--timings'], t.io)).toBe(EXIT.OK);
+    // The fake clock advances 1.5 ms per reading, so every stage reads 1.50 ms.
+    expect(t.err()).toBe('piers.brief.yaml: brief 1.50 ms, table 1.50 ms, fields 1.50 ms, choose 1.50 ms, derive 1.50 ms, layout 1.50 ms, svg 1.50 ms, png 1.50 ms\n');
+    const timed = readFileSync(join(dir, 'piers.svg'), 'utf8');
+    await runCli(['render', 'piers.brief.yaml'], io(dir).io);
+    expect(readFileSync(join(dir, 'piers.svg'), 'utf8')).toBe(timed);
+  });
+
   it('rejects a bad --scale as a usage error', async () => {
     const t = io(workspace());
     expect(await runCli(['render', 'piers.brief.yaml', '--scale', 'big'], t.io)).toBe(EXIT.USAGE);
@@ -117,6 +129,14 @@ describe('chartwright explain', () => {
     expect(report.rationale.length).toBeGreaterThan(2);
     for (const r of report.rationale) expect(Object.keys(r).sort()).toEqual(['decision', 'rule']);
     expect(report.diagnostics[0]).toMatchObject({ code: 'derive.missing-values', severity: 'warning', message: expect.any(String) });
+  });
+
+  it('reports the brief\'s own rule problems together with data problems', async () => {
+    const dir = workspace();
+    writeFileSync(join(dir, 'two.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossing\nbaseline: fit\n');
+    const t = io(dir);
+    expect(await runCli(['explain', 'two.yaml', '--json'], t.io)).toBe(EXIT.FAILED);
+    expect(JSON.parse(t.out()).diagnostics.map((d: { code: string }) => d.code)).toEqual(['brief.unknown-column', 'choice.baseline-fit-refused']);
   });
 
   it('explains in words, and fails for a brief with errors', async () => {
