@@ -26,11 +26,11 @@ export interface BarFit {
 
 /**
  * Measures whether bars with these labels fit upright in the frame, and how many bars each
- * orientation can hold at MIN_BAND_PX. The frame is measured with one note line reserved, as a
- * folded chart gets one, so the capacity is never overestimated.
+ * orientation can hold at MIN_BAND_PX. The frame is measured with two note lines reserved, as
+ * the note of a folded chart can wrap to two, so the capacity is never overestimated.
  */
 export function measureBarFit(labels: readonly string[], valueExtent: [number, number], texts: FrameTexts, style: Style, size: { width: number; height: number }, measure: TextMeasurer): BarFit {
-  const frame = layoutFrame({ ...texts, notes: [...texts.notes, 'Others'] }, style, size, measure);
+  const frame = layoutFrame({ ...texts, notes: [...texts.notes, 'Others', 'Others'] }, style, size, measure);
   const tick = style.text.tick;
   const factor = style.spacing.lineHeight;
   const ticks = niceTicks(Math.min(0, valueExtent[0]), Math.max(0, valueExtent[1]), 6, true);

@@ -25,8 +25,14 @@ export interface DerivedBars {
   valueName: string;
   /** The keys folded into "Others", largest first. */
   foldedKeys: string[];
-  /** How folded keys were combined: into an "Others" bar, or left out (mean, min, max). */
-  foldMode: 'others' | 'dropped' | 'none';
+  /**
+   * How folded keys were combined: into an "Others" bar; left out (mean, min, max cannot be
+   * added); or left out with their total stated, because an "Others" bar longer than every
+   * bar shown would squash the bars the chart is for.
+   */
+  foldMode: 'others' | 'dropped' | 'stated' | 'none';
+  /** The total of the folded keys, for "others" and "stated". */
+  foldedTotal?: number;
 }
 
 interface Group { label: string; sortKey: number; values: number[]; rows: number[] }
@@ -76,7 +82,7 @@ function sortBars(bars: BarDatum[], keyOf: Map<string, number>, order: BarPlan['
   return bars;
 }
 
-function fold(bars: BarDatum[], plan: BarPlan, valueName: string, problems: Diagnostic[]): Pick<DerivedBars, 'bars' | 'foldedKeys' | 'foldMode'> | undefined {
+function fold(bars: BarDatum[], plan: BarPlan, valueName: string, problems: Diagnostic[]): Pick<DerivedBars, 'bars' | 'foldedKeys' | 'foldMode' | 'foldedTotal'> | undefined {
   if (bars.length <= plan.capacity) return { bars, foldedKeys: [], foldMode: 'none' };
   if (plan.order === 'key') {
     problems.push(diagnostic('derive.too-many-ordered-bars', `${bars.length} bars in key order do not fit: the plot holds ${plan.capacity} at 3 px each, and folding an ordered key into "Others" would break its order`, {
@@ -85,23 +91,29 @@ function fold(bars: BarDatum[], plan: BarPlan, valueName: string, problems: Diag
     return undefined;
   }
   const additive = plan.aggregate === 'sum' || plan.aggregate === 'count';
-  const keep = additive ? plan.capacity - 1 : plan.capacity;
   const ranked = [...bars].sort((a, b) => b.value - a.value || compareText(a.label, b.label));
+  const restTotal = (keep: number) => ranked.slice(keep).reduce((s, b) => s + b.value, 0);
+  const largestShown = (keep: number) => Math.max(...ranked.slice(0, keep).map((b) => Math.abs(b.value)));
+  // An "Others" bar longer than every bar kept would squash them all on the shared scale.
+  const stated = additive && Math.abs(restTotal(plan.capacity - 1)) > largestShown(plan.capacity - 1);
+  const keep = additive && !stated ? plan.capacity - 1 : plan.capacity;
   const kept = new Set(ranked.slice(0, keep).map((b) => b.label));
   const rest = ranked.slice(keep);
+  const total = restTotal(keep);
   const shown = bars.filter((b) => kept.has(b.label));
-  if (additive) {
-    shown.push({
-      label: `Others (${rest.length})`, value: rest.reduce((s, b) => s + b.value, 0), count: rest.reduce((s, b) => s + b.count, 0),
-      rows: rest.flatMap((b) => b.rows), folds: rest.length,
-    });
+  const mode: DerivedBars['foldMode'] = !additive ? 'dropped' : stated ? 'stated' : 'others';
+  if (mode === 'others') {
+    shown.push({ label: `Others (${rest.length})`, value: total, count: rest.reduce((s, b) => s + b.count, 0), rows: rest.flatMap((b) => b.rows), folds: rest.length });
   }
-  problems.push(diagnostic('derive.others-folded', additive
-    ? `${bars.length} bars do not fit at 3 px each; the ${rest.length} smallest are folded into one "Others" bar carrying their total ${valueName}`
-    : `${bars.length} bars do not fit at 3 px each; the ${rest.length} smallest are left out, because ${plan.aggregate} values cannot be added into an "Others" bar`, {
+  const why = {
+    others: `the ${rest.length} smallest are folded into one "Others" bar carrying their total ${valueName}`,
+    stated: `the ${rest.length} smallest are left out and their total ${valueName} is stated in a note, because an "Others" bar of it would be longer than every bar shown and squash them`,
+    dropped: `the ${rest.length} smallest are left out, because ${plan.aggregate} values cannot be added into an "Others" bar`,
+  }[mode];
+  problems.push(diagnostic('derive.others-folded', `${bars.length} bars do not fit at 3 px each; ${why}`, {
     field: plan.key.name, found: `${bars.length} bars`, expected: `at most ${plan.capacity}`, hint: 'make the chart larger with `size:`, or filter the table to the keys that matter',
   }));
-  return { bars: shown, foldedKeys: rest.map((b) => b.label), foldMode: additive ? 'others' : 'dropped' };
+  return { bars: shown, foldedKeys: rest.map((b) => b.label), foldMode: mode, ...(additive ? { foldedTotal: total } : {}) };
 }
 
 /**

@@ -10,11 +10,13 @@ export function barValueTitle(derived: DerivedBars): string {
 }
 
 /** The note printed under a folded chart, saying what "Others" holds or what was left out. */
-export function foldNote(derived: DerivedBars, valueTitle: string): string[] {
+export function foldNote(derived: DerivedBars, valueTitle: string, fmt: (n: number) => string): string[] {
   const n = derived.foldedKeys.length;
   const key = derived.plan.key.label.toLowerCase();
-  if (derived.foldMode === 'others') return [`"Others (${n})" is the total of the ${n} ${key} values with the smallest ${valueTitle.toLowerCase()}.`];
-  if (derived.foldMode === 'dropped') return [`The ${n} ${key} values with the smallest ${valueTitle.toLowerCase()} are not shown.`];
+  const value = valueTitle.toLowerCase();
+  if (derived.foldMode === 'others') return [`"Others (${n})" is the total of the ${n} ${key} values with the smallest ${value}.`];
+  if (derived.foldMode === 'stated') return [`Not drawn: the ${n} ${key} values with the smallest ${value}, together ${fmt(derived.foldedTotal ?? 0)}, more than any bar shown.`];
+  if (derived.foldMode === 'dropped') return [`The ${n} ${key} values with the smallest ${value} are not shown.`];
   return [];
 }
 

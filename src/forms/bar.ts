@@ -150,7 +150,8 @@ function horizontal(c: Common): Parts {
   const { tickGap, labelGap, lineHeight: factor } = style.spacing;
   const bars = c.derived.bars;
   const diagnostics: Diagnostic[] = [];
-  const top = c.body.y + lineHeight(titleStyle, factor) + tickGap;
+  // Half a label clear of the key title: a label centred on a thin first band reaches above it.
+  const top = c.body.y + lineHeight(titleStyle, factor) + Math.max(tickGap, textBoxHeight(measure, tick) / 2);
   const bottom = c.body.y + c.body.height - (tickGap + lineHeight(tick, factor) + tickGap + lineHeight(titleStyle, factor));
   const maxLabel = c.body.width * MAX_LABEL_SHARE;
   const keyLabels = bars.map((b) => truncateText(measure, b.label, tick, maxLabel));
@@ -216,8 +217,8 @@ function missingGlyphs(nodes: SceneNode[], ctx: FormContext): Diagnostic[] {
 export function layoutBar(derived: DerivedBars, ctx: FormContext): FormResult {
   const { brief, style, measure } = ctx;
   const valueTitle = barValueTitle(derived);
-  const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: foldNote(derived, valueTitle) }, style, brief.size, measure);
   const fmtValue = valueFormatter(derived.bars.map((b) => b.value), derived.plan.value?.format);
+  const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: foldNote(derived, valueTitle, valueFormatter([derived.foldedTotal ?? 0], derived.plan.value?.format)) }, style, brief.size, measure);
   const common: Common = { derived, ctx, body: frame.body, valueTitle, keyTitle: derived.plan.key.label, fmtValue, id: idMaker() };
   const parts = derived.plan.orientation === 'vertical' ? vertical(common) : horizontal(common);
   const diagnostics = [...parts.diagnostics];

@@ -84,17 +84,35 @@ describe('perceptual contracts on every gallery chart', () => {
 
 describe('perceptual contracts on edge cases', () => {
   it('a folded chart keeps every bar at least 3 px thick, "Others" last, and its note in the chart', async () => {
+    // A few large keys and a long tail of small ones, whose total stays below the largest bar.
+    const rows = [...Array.from({ length: 5 }, (_, i) => ({ k: `Big ${i}`, v: 10000 - i })), ...Array.from({ length: 395 }, (_, i) => ({ k: `Key ${i}`, v: (i % 3) + 1 }))];
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v' }, rows);
+    const { dumpScene } = await import('../../src/scene/dump.js');
+    const dump = dumpScene(r.scene!);
+    checkBarContracts(dump, 'v', 'k');
+    const marks = bars(dump);
+    // Thickness across the key axis: the band step is at least 3 px, less the band padding.
+    const vertical = dump.axes[0]!.orient === 'left';
+    for (const b of marks) expect(vertical ? b.width! : b.height!).toBeGreaterThanOrEqual(3 * (1 - 0.22) - 1e-9);
+    expect(String(marks[marks.length - 1]!.datum!.k)).toMatch(/^Others \(\d+\)$/);
+    const total = rows.reduce((s, x) => s + x.v, 0);
+    expect(marks.reduce((s, b) => s + (b.datum!.v as number), 0)).toBe(total);
+    expect(dump.texts.some((t) => t.role === 'note' && t.text.includes('Others'))).toBe(true);
+  });
+
+  it('a heavy tail is stated in the note rather than drawn as an "Others" bar that squashes the rest', async () => {
     const rows = Array.from({ length: 400 }, (_, i) => ({ k: `Key ${i}`, v: (i * 37) % 101 + 1 }));
     const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v' }, rows);
     const { dumpScene } = await import('../../src/scene/dump.js');
     const dump = dumpScene(r.scene!);
     checkBarContracts(dump, 'v', 'k');
     const marks = bars(dump);
-    for (const b of marks) expect(Math.min(b.width!, b.height!)).toBeGreaterThanOrEqual(3 * (1 - 0.22) - 1e-9);
-    expect(String(marks[marks.length - 1]!.datum!.k)).toMatch(/^Others \(\d+\)$/);
-    const total = rows.reduce((s, x) => s + x.v, 0);
-    expect(marks.reduce((s, b) => s + (b.datum!.v as number), 0)).toBe(total);
-    expect(dump.texts.some((t) => t.role === 'note' && t.text.includes('Others'))).toBe(true);
+    expect(marks.some((b) => String(b.datum!.k).startsWith('Others'))).toBe(false);
+    const shownTotal = marks.reduce((s, b) => s + (b.datum!.v as number), 0);
+    const rest = rows.reduce((s, x) => s + x.v, 0) - shownTotal;
+    expect(rest).toBeGreaterThan(Math.max(...marks.map((b) => b.datum!.v as number)));
+    const note = dump.texts.filter((t) => t.role === 'note').map((t) => t.text).join(' ');
+    expect(note).toContain(rest.toLocaleString('en-US'));
   });
 
   it('negative values extend from the drawn zero line on both sides', async () => {
