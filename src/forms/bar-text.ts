@@ -1,3 +1,4 @@
+import { format } from 'd3-format';
 import type { DerivedBars } from '../derive/bars.js';
 import { axisTitle } from '../layout/axis.js';
 
@@ -11,7 +12,7 @@ export function barValueTitle(derived: DerivedBars): string {
 
 /** The note printed under a folded chart, saying what "Others" holds or what was left out. */
 export function foldNote(derived: DerivedBars, valueTitle: string, fmt: (n: number) => string): string[] {
-  const n = derived.foldedKeys.length;
+  const n = format(',d')(derived.foldedKeys.length);
   const key = derived.plan.key.label.toLowerCase();
   const value = valueTitle.toLowerCase();
   if (derived.foldMode === 'others') return [`"Others (${n})" is the total of the ${n} ${key} values with the smallest ${value}.`];

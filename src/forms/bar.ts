@@ -185,7 +185,10 @@ function horizontal(c: Common): Parts {
     const y0 = band(bar.label)!;
     nodes.push({ kind: 'rect', id: c.id('bar', bar.label), role: 'bar', datum: barDatum(c, bar), x: Math.min(x0, x1), y: y0, width: Math.abs(x1 - x0), height: band.bandwidth(), fill: barFill(bar, style) });
     const middle = y0 + band.bandwidth() / 2;
-    if (i % k === 0) texts.push(textNode(measure, { id: c.id('tick-key', bar.label), role: 'tick', text: keyLabels[i]!, style: tick, x: left - tickGap, top: middle - tickBox / 2, anchor: 'end' }));
+    if (i % k === 0) {
+      texts.push(textNode(measure, { id: c.id('tick-key', bar.label), role: 'tick', text: keyLabels[i]!, style: tick, x: left - tickGap, top: middle - tickBox / 2, anchor: 'end' }));
+      if (k > 1) nodes.push(line(c.id('tick-mark', bar.label), 'tick-mark', left - tickGap + 2, middle, left, middle, style.lines.axis, style.lines.axisWidth));
+    }
     if (showLabels) {
       const lx = bar.value >= 0 ? x1 + labelGap : x1 - labelGap;
       texts.push(textNode(measure, { id: c.id('label', bar.label), role: 'label', text: c.fmtValue(bar.value), style: label, x: lx, top: middle - textBoxHeight(measure, label) / 2, anchor: bar.value >= 0 ? 'start' : 'end' }));
