@@ -1,3 +1,4 @@
+import { DOMParser } from '@xmldom/xmldom';
 import { mkdtempSync, readdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -56,3 +57,11 @@ export function tempDir(): string {
 
 /** Parses YAML (for building briefs in tests). */
 export const yaml = (text: string) => parseYaml(text) as Record<string, unknown>;
+
+/** Parses SVG as XML, failing on any parser error or warning. */
+export function parseXml(svg: string): Document {
+  const problems: string[] = [];
+  const doc = new DOMParser({ onError: (level, msg) => { problems.push(`${level}: ${msg}`); } }).parseFromString(svg, 'image/svg+xml');
+  if (problems.length) throw new Error(problems.join('\n'));
+  return doc as unknown as Document;
+}

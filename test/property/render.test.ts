@@ -4,8 +4,7 @@ import { readTable } from '../../src/table/load.js';
 import { dumpScene } from '../../src/scene/dump.js';
 import { nodesOf } from '../../src/scene/check.js';
 import type { SceneNode } from '../../src/scene/types.js';
-import { memoryFiles, renderRows } from '../helpers.js';
-import { parseXml } from '../svg/write.test.js';
+import { memoryFiles, parseXml, renderRows } from '../helpers.js';
 
 function coordinates(n: SceneNode): number[] {
   switch (n.kind) {

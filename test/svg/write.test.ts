@@ -1,17 +1,8 @@
-import { DOMParser } from '@xmldom/xmldom';
 import { describe, expect, it } from 'vitest';
 import { outlineSvg } from '../../src/pipeline/render.js';
 import { escapeXml } from '../../src/svg/escape.js';
 import { fmt, fmtPath } from '../../src/svg/fmt.js';
-import { env, renderRows } from '../helpers.js';
-
-/** Parses SVG as XML, failing on any parser error or warning. */
-export function parseXml(svg: string): Document {
-  const problems: string[] = [];
-  const doc = new DOMParser({ onError: (level, msg) => { problems.push(`${level}: ${msg}`); } }).parseFromString(svg, 'image/svg+xml');
-  if (problems.length) throw new Error(problems.join('\n'));
-  return doc as unknown as Document;
-}
+import { env, parseXml, renderRows } from '../helpers.js';
 
 describe('numbers in SVG', () => {
   it('are rounded to a fixed precision with trailing zeros dropped', () => {
