@@ -1,4 +1,4 @@
-import { csvParseRows, tsvParseRows } from 'd3-dsv';
+import { csvParseRows, dsvFormat, tsvParseRows } from 'd3-dsv';
 import { describeRows, diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import type { TableOrigin } from './types.js';
 
@@ -49,13 +49,22 @@ function checkHeader(names: string[], origin: TableOrigin, headerLine: number): 
   return problems;
 }
 
-/** Parses CSV or TSV text with d3-dsv into a raw table; the first record is the header. */
+/**
+ * Whether a .csv file separates cells with semicolons, as spreadsheets in locales with a decimal
+ * comma write it: its header line has semicolons and no commas.
+ */
+export function usesSemicolons(text: string): boolean {
+  const header = text.split(/\r?\n/, 1)[0] ?? '';
+  return header.includes(';') && !header.includes(',');
+}
+
+/** Parses CSV (comma or semicolon) or TSV text with d3-dsv into a raw table; the first record is the header. */
 export function parseDelimited(text: string, origin: TableOrigin): Outcome<RawTable> {
   const body = text.replace(/^\uFEFF/, '');
   if (body.trim() === '') {
     return failure([diagnostic('table.empty', 'the data file is empty', { file: origin.file, hint: 'add a header row and at least one data row' })]);
   }
-  const records = origin.format === 'tsv' ? tsvParseRows(body) : csvParseRows(body);
+  const records = origin.format === 'tsv' ? tsvParseRows(body) : usesSemicolons(body) ? dsvFormat(';').parseRows(body) : csvParseRows(body);
   const lines = recordStartLines(body);
   const kept = records.map((r, i) => ({ r, line: lines[i] ?? i + 1 })).filter(({ r }) => !(r.length === 1 && r[0]!.trim() === ''));
   const [header, ...data] = kept;

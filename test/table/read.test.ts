@@ -22,6 +22,17 @@ describe('table stage: formats', () => {
     expect(t.rowPositions).toEqual([2, 3]);
   });
 
+  it('reads semicolon-separated CSV, as spreadsheets with a decimal comma export it', async () => {
+    const t = await table('t.csv', 'pier;crossings\n"North; upper";212\nSouth;64\n');
+    expect(columnOf(t, 'pier')!.values).toEqual(['North; upper', 'South']);
+    expect(columnOf(t, 'crossings')!.values).toEqual([212, 64]);
+  });
+
+  it('keeps commas as the separator when the header has any', async () => {
+    const t = await table('t.csv', 'name,note\nA,"x; y"\n');
+    expect(columnOf(t, 'note')!.values).toEqual(['x; y']);
+  });
+
   it('reads TSV', async () => {
     const t = await table('t.tsv', 'a\tb\nx\t1\n');
     expect(columnOf(t, 'b')!.values).toEqual([1]);
