@@ -91,6 +91,8 @@ export function runAdvance(face: CompiledFace, text: string): number {
 
 /** Characters of the text the face has no glyph for. */
 export function missingCharacters(face: CompiledFace, text: string): string[] {
+  // Printable ASCII is in every face chartwright ships (test/font checks the full cmap).
+  if (/^[\x20-\x7e]*$/.test(text)) return [];
   const missing: string[] = [];
   for (const ch of text) if (!face.advances.has(ch.codePointAt(0)!)) missing.push(ch);
   return missing;

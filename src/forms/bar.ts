@@ -28,6 +28,8 @@ interface Common {
   valueTitle: string;
   keyTitle: string;
   fmtValue: (n: number) => string;
+  /** Each bar's value as its label shows it, formatted once. */
+  valueText: Map<BarDatum, string>;
   id: (prefix: string, text: string) => string;
 }
 
@@ -55,7 +57,7 @@ function line(id: string, role: string, x1: number, y1: number, x2: number, y2: 
 function valueLabelsFit(c: Common, room: number, along: 'width' | 'height'): boolean {
   const { label } = c.ctx.style.text;
   if (along === 'height') return room >= textBoxHeight(c.ctx.measure, label);
-  return c.derived.bars.every((b) => c.ctx.measure.width(c.fmtValue(b.value), label.size, label.weight) <= room);
+  return c.derived.bars.every((b) => c.ctx.measure.width(c.valueText.get(b)!, label.size, label.weight) <= room);
 }
 
 function vertical(c: Common): Parts {
@@ -92,7 +94,7 @@ function vertical(c: Common): Parts {
     nodes.push({ kind: 'rect', id: c.id('bar', bar.label), role: 'bar', datum: barDatum(c, bar), x: band(bar.label)!, y: Math.min(y0, y1), width: band.bandwidth(), height: Math.abs(y1 - y0), fill: barFill(bar, style) });
     if (showLabels) {
       const labelTop = bar.value >= 0 ? y1 - labelGap - textBoxHeight(measure, label) : y1 + labelGap;
-      texts.push(textNode(measure, { id: c.id('label', bar.label), role: 'label', text: c.fmtValue(bar.value), style: label, x: band(bar.label)! + band.bandwidth() / 2, top: labelTop, anchor: 'middle' }));
+      texts.push(textNode(measure, { id: c.id('label', bar.label), role: 'label', text: c.valueText.get(bar)!, style: label, x: band(bar.label)! + band.bandwidth() / 2, top: labelTop, anchor: 'middle' }));
     }
   }
   nodes.push(line('zero-line', 'zero-line', left, y(0), right, y(0), style.lines.zero, style.lines.zeroWidth));
@@ -161,7 +163,7 @@ function horizontal(c: Common): Parts {
   const band = scaleBand<string>().domain(bars.map((b) => b.label)).range([top, bottom]).paddingInner(style.spacing.bandPadding).paddingOuter(style.spacing.bandPadding / 2);
   const showLabels = valueLabelsFit(c, band.step(), 'height');
   const [lo, hi] = domainOf(bars);
-  const labelRoom = (sign: number) => (showLabels ? Math.max(0, ...bars.filter((b) => Math.sign(b.value) === sign).map((b) => measure.width(c.fmtValue(b.value), label.size, label.weight) + labelGap)) : 0);
+  const labelRoom = (sign: number) => (showLabels ? Math.max(0, ...bars.filter((b) => Math.sign(b.value) === sign).map((b) => measure.width(c.valueText.get(b)!, label.size, label.weight) + labelGap)) : 0);
   const left = c.body.x + labelWidth + tickGap;
   const right = c.body.x + c.body.width;
   const probe = valueTicks(lo, hi, right - left, 'horizontal', tick, measure, c.derived.plan.value?.format);
@@ -191,7 +193,7 @@ function horizontal(c: Common): Parts {
     }
     if (showLabels) {
       const lx = bar.value >= 0 ? x1 + labelGap : x1 - labelGap;
-      texts.push(textNode(measure, { id: c.id('label', bar.label), role: 'label', text: c.fmtValue(bar.value), style: label, x: lx, top: middle - textBoxHeight(measure, label) / 2, anchor: bar.value >= 0 ? 'start' : 'end' }));
+      texts.push(textNode(measure, { id: c.id('label', bar.label), role: 'label', text: c.valueText.get(bar)!, style: label, x: lx, top: middle - textBoxHeight(measure, label) / 2, anchor: bar.value >= 0 ? 'start' : 'end' }));
     }
   });
   nodes.push(line('zero-line', 'zero-line', x(0), top, x(0), bottom, style.lines.zero, style.lines.zeroWidth));
@@ -222,7 +224,8 @@ export function layoutBar(derived: DerivedBars, ctx: FormContext): FormResult {
   const valueTitle = barValueTitle(derived);
   const fmtValue = valueFormatter(derived.bars.map((b) => b.value), derived.plan.value?.format);
   const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: foldNote(derived, valueTitle, valueFormatter([derived.foldedTotal ?? 0], derived.plan.value?.format)) }, style, brief.size, measure);
-  const common: Common = { derived, ctx, body: frame.body, valueTitle, keyTitle: derived.plan.key.label, fmtValue, id: idMaker() };
+  const valueText = new Map(derived.bars.map((b) => [b, fmtValue(b.value)]));
+  const common: Common = { derived, ctx, body: frame.body, valueTitle, keyTitle: derived.plan.key.label, fmtValue, valueText, id: idMaker() };
   const parts = derived.plan.orientation === 'vertical' ? vertical(common) : horizontal(common);
   const diagnostics = [...parts.diagnostics];
   if (parts.plot.width < 40 || parts.plot.height < 40) {

@@ -35,6 +35,13 @@ describe('font metrics extracted from the bundled TTF', () => {
     });
   }
 
+  it('covers all printable ASCII in both faces (the missing-glyph check skips such text)', () => {
+    for (const [weight, file] of faces) {
+      const font = fontkit.openSync(join(root, 'node_modules', 'source-sans', 'TTF', file)) as fontkit.Font;
+      for (let cp = 0x20; cp < 0x7f; cp++) expect(font.hasGlyphForCodePoint(cp), `${weight} U+${cp.toString(16)}`).toBe(true);
+    }
+  });
+
   it('knows which characters the font cannot draw', () => {
     expect(env.measure.missing('Hafen 港', 'regular')).toEqual(['港']);
   });
