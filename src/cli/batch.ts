@@ -63,9 +63,10 @@ const breathe = () => new Promise<void>((r) => setImmediate(r));
  * Renders briefs one after another. Each brief's files are all produced in memory first and
  * written only if it succeeded, atomically; one bad brief never stops the others.
  */
-export async function renderBatch(files: string[], env: RenderEnv, opts: BatchOptions, cwd: string): Promise<BriefReport[]> {
+export async function renderBatch(files: string[], env: RenderEnv, opts: BatchOptions, cwd: string, onBrief?: (done: number, total: number, file: string) => void): Promise<BriefReport[]> {
   const reports: BriefReport[] = [];
-  for (const file of files) {
+  for (const [i, file] of files.entries()) {
+    onBrief?.(i, files.length, file);
     const result = await renderFile(file, env, opts);
     const report: BriefReport = { brief: file, ok: result.ok, written: [], diagnostics: result.diagnostics, ...(result.timings ? { timings: result.timings } : {}) };
     reports.push(report);

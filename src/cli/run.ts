@@ -8,6 +8,8 @@ import { packageRoot } from '../io/package-root.js';
 import type { RenderEnv } from '../pipeline/env.js';
 import { renderBatch, renderFile, type BatchOptions, type BriefReport } from './batch.js';
 import { EXIT } from './exit-codes.js';
+import { writeAtomic } from './outputs.js';
+import { runReport } from './report.js';
 import { colourAllowed, formatDiagnostic } from './format.js';
 import type { CliIo } from './io.js';
 
@@ -37,19 +39,34 @@ function demoBriefs(root: string): string[] {
   return readdirSync(dir).filter((f) => /\.brief\.(ya?ml|json)$/.test(f)).sort().map((f) => join(dir, f));
 }
 
-interface RenderFlags { outDir?: string; png?: boolean; scale: number; scene?: string; strict?: boolean; lenient?: boolean; debug?: boolean; timings?: boolean }
+interface RenderFlags { outDir?: string; png?: boolean; scale: number; scene?: string; strict?: boolean; lenient?: boolean; debug?: boolean; timings?: boolean; report?: string }
 
 function batchOptions(flags: RenderFlags, io: CliIo, outDir: string | undefined): BatchOptions {
   return { outDir, png: !!flags.png, scale: flags.scale, scene: flags.scene, strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, tempTag: String(io.pid), ...(flags.timings ? { clock: io.clock } : {}) };
 }
 
+/** A progress line on stderr for batches on a terminal (never with NO_COLOR or in CI). */
+function progress(io: CliIo, count: number): { step: (done: number, total: number, file: string) => void; end: () => void } {
+  if (count < 2 || !colourAllowed(io.isTTY, io.env)) return { step: () => {}, end: () => {} };
+  return {
+    step: (done, total, file) => io.stderr(`\r\u001b[K[${done + 1}/${total}] ${relative(io.cwd, file)}`),
+    end: () => io.stderr('\r\u001b[K'),
+  };
+}
+
 async function runRender(files: string[], flags: RenderFlags, io: CliIo, env: RenderEnv): Promise<number> {
   const outDir = flags.outDir ? resolve(io.cwd, flags.outDir) : undefined;
-  const reports = await renderBatch(files.map((f) => resolve(io.cwd, f)), env, batchOptions(flags, io, outDir), io.cwd);
+  const bar = progress(io, files.length);
+  const reports = await renderBatch(files.map((f) => resolve(io.cwd, f)), env, batchOptions(flags, io, outDir), io.cwd, bar.step);
+  bar.end();
   for (const r of reports) {
     report(io, relativeFiles(r.diagnostics, io.cwd), false);
     for (const w of r.written) io.stdout(`${relative(io.cwd, w)}\n`);
     if (r.timings) io.stderr(`${relative(io.cwd, r.brief)}: ${r.timings.map((t) => `${t.stage} ${t.ms.toFixed(2)} ms`).join(', ')}\n`);
+  }
+  if (flags.report) {
+    const path = resolve(io.cwd, flags.report);
+    await writeAtomic(path, `${JSON.stringify(runReport(reports, chartwrightVersion(), io.cwd), null, 2)}\n`, String(io.pid));
   }
   return batchExit(reports);
 }
@@ -78,8 +95,13 @@ async function runCheck(files: string[], flags: { strict?: boolean; lenient?: bo
   return failed ? EXIT.FAILED : EXIT.OK;
 }
 
+/** chartwright's version, from its package.json. */
+function chartwrightVersion(): string {
+  return (JSON.parse(readFileSync(join(packageRoot(), 'package.json'), 'utf8')) as { version: string }).version;
+}
+
 function program(io: CliIo, env: () => RenderEnv, exit: { code: number }): Command {
-  const version = (JSON.parse(readFileSync(join(packageRoot(), 'package.json'), 'utf8')) as { version: string }).version;
+  const version = chartwrightVersion();
   const cli = new Command('chartwright')
     .description('Turns a table plus a stated intent into a finished static chart (SVG, PNG).')
     .version(version, '-V, --version')
@@ -93,7 +115,8 @@ function program(io: CliIo, env: () => RenderEnv, exit: { code: number }): Comma
     .option('--strict', 'treat warnings as errors')
     .option('--lenient', 'draw the nearest honest form, with a warning, instead of failing on a hard rule')
     .option('--debug', 'show stack traces of unexpected failures')
-    .option('--timings', 'print how long each stage took, per brief, on stderr');
+    .option('--timings', 'print how long each stage took, per brief, on stderr')
+    .option('--report <file>', 'write a JSON run report: every brief, its outputs and diagnostics');
   withRenderFlags(cli.command('render').description('render briefs to SVG (and PNG)').argument('<brief...>', 'brief files (.yaml, .yml, .json)'))
     .action(async (files: string[], flags: RenderFlags) => { exit.code = await runRender(files, flags, io, env()); });
   cli.command('explain').description('say which chart a brief gets and why').argument('<brief>', 'a brief file')

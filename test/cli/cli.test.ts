@@ -112,6 +112,31 @@ describe('chartwright render', () => {
     expect(readFileSync(join(dir, 'piers.svg'), 'utf8')).toBe(timed);
   });
 
+  it('writes a JSON run report with every brief, its outputs and diagnostics', async () => {
+    const dir = workspace();
+    expect(await runCli(['render', 'piers.brief.yaml', 'typo.yaml', 'warn.yaml', '--report', 'run.json'], io(dir).io)).toBe(EXIT.FAILED);
+    const run = JSON.parse(readFileSync(join(dir, 'run.json'), 'utf8'));
+    expect(run.summary).toEqual({ briefs: 3, ok: 2, failed: 1, errors: 1, warnings: 1 });
+    expect(run.briefs.map((b: { brief: string; ok: boolean; outputs: string[] }) => [b.brief, b.ok, b.outputs])).toEqual([
+      ['piers.brief.yaml', true, ['piers.svg']], ['typo.yaml', false, []], ['warn.yaml', true, ['warn.svg']],
+    ]);
+    expect(run.briefs[1].diagnostics[0]).toMatchObject({ code: 'brief.unknown-column', file: 'typo.yaml', line: 4 });
+    expect(run.chartwright).toMatch(/^\d+\.\d+\.\d+$/);
+  });
+
+  it('shows progress for a batch on a terminal only, and never in CI', async () => {
+    const dir = workspace();
+    const tty = io(dir);
+    tty.io.isTTY = true;
+    await runCli(['render', 'piers.brief.yaml', 'warn.yaml'], tty.io);
+    expect(tty.err()).toContain('[2/2] warn.yaml');
+    const ci = io(dir);
+    ci.io.isTTY = true;
+    ci.io.env = { CI: 'true' };
+    await runCli(['render', 'piers.brief.yaml', 'warn.yaml'], ci.io);
+    expect(ci.err()).not.toContain('[1/2]');
+  });
+
   it('rejects a bad --scale as a usage error', async () => {
     const t = io(workspace());
     expect(await runCli(['render', 'piers.brief.yaml', '--scale', 'big'], t.io)).toBe(EXIT.USAGE);
