@@ -4,7 +4,7 @@ import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { thinningStep, valueTicks, type ValueTicks } from '../layout/axis.js';
 import { layoutFrame } from '../layout/frame.js';
 import { valueFormatter } from '../layout/number-format.js';
-import { lineHeight, textBoxHeight, textNode, truncateText } from '../layout/text.js';
+import { fitLabel, lineHeight, textBoxHeight, textNode } from '../layout/text.js';
 import { idMaker } from '../scene/ids.js';
 import type { AxisInfo, Box, Datum, SceneNode, TextNode } from '../scene/types.js';
 import type { Style } from '../style/types.js';
@@ -156,11 +156,13 @@ function horizontal(c: Common): Parts {
   const top = c.body.y + lineHeight(titleStyle, factor) + Math.max(tickGap, textBoxHeight(measure, tick) / 2);
   const bottom = c.body.y + c.body.height - (tickGap + lineHeight(tick, factor) + tickGap + lineHeight(titleStyle, factor));
   const maxLabel = c.body.width * MAX_LABEL_SHARE;
-  const keyLabels = bars.map((b) => truncateText(measure, b.label, tick, maxLabel));
-  const truncated = keyLabels.filter((l, i) => l !== bars[i]!.label).length;
-  if (truncated) diagnostics.push(diagnostic('layout.label-truncated', `${truncated} key label${truncated === 1 ? ' is' : 's are'} longer than ${Math.round(maxLabel)} px and shortened with "…"; the full text stays in the SVG title of each bar`, { field: c.derived.plan.key.name, hint: 'use shorter labels, or a wider chart with `size:`' }));
-  const labelWidth = Math.max(...keyLabels.map((l) => measure.width(l, tick.size, tick.weight)));
   const band = scaleBand<string>().domain(bars.map((b) => b.label)).range([top, bottom]).paddingInner(style.spacing.bandPadding).paddingOuter(style.spacing.bandPadding / 2);
+  const tickLine = lineHeight(tick, factor);
+  // A long label wraps onto a second line where the band is tall enough, and is shortened only beyond that.
+  const keyLabels = bars.map((b) => fitLabel(measure, b.label, tick, maxLabel, band.step() >= 2 * tickLine ? 2 : 1));
+  const truncated = keyLabels.filter((l) => l.shortened).length;
+  if (truncated) diagnostics.push(diagnostic('layout.label-truncated', `${truncated} key label${truncated === 1 ? ' is' : 's are'} longer than ${Math.round(maxLabel)} px${band.step() >= 2 * tickLine ? ' on two lines' : ''} and shortened with "…"; the full text stays in the SVG title of each bar`, { field: c.derived.plan.key.name, hint: 'use shorter labels, or a wider chart with `size:`' }));
+  const labelWidth = Math.max(...keyLabels.flatMap((l) => l.lines.map((line) => measure.width(line, tick.size, tick.weight))));
   const showLabels = valueLabelsFit(c, band.step(), 'height');
   const [lo, hi] = domainOf(bars);
   const labelRoom = (sign: number) => (showLabels ? Math.max(0, ...bars.filter((b) => Math.sign(b.value) === sign).map((b) => measure.width(c.valueText.get(b)!, label.size, label.weight) + labelGap)) : 0);
@@ -188,7 +190,11 @@ function horizontal(c: Common): Parts {
     nodes.push({ kind: 'rect', id: c.id('bar', bar.label), role: 'bar', datum: barDatum(c, bar), x: Math.min(x0, x1), y: y0, width: Math.abs(x1 - x0), height: band.bandwidth(), fill: barFill(bar, style) });
     const middle = y0 + band.bandwidth() / 2;
     if (i % k === 0) {
-      texts.push(textNode(measure, { id: c.id('tick-key', bar.label), role: 'tick', text: keyLabels[i]!, style: tick, x: left - tickGap, top: middle - tickBox / 2, anchor: 'end' }));
+      const { lines } = keyLabels[i]!;
+      lines.forEach((text, j) => {
+        const lineTop = middle - (lines.length * tickLine) / 2 + j * tickLine + (tickLine - tickBox) / 2;
+        texts.push(textNode(measure, { id: c.id('tick-key', bar.label), role: 'tick', text, style: tick, x: left - tickGap, top: lineTop, anchor: 'end' }));
+      });
       if (k > 1) nodes.push(line(c.id('tick-mark', bar.label), 'tick-mark', left - tickGap + 2, middle, left, middle, style.lines.axis, style.lines.axisWidth));
     }
     if (showLabels) {

@@ -66,3 +66,16 @@ export function truncateText(measure: TextMeasurer, text: string, style: TextSty
   while (n > 0 && measure.width(`${chars.slice(0, n).join('').trimEnd()}…`, style.size, style.weight) > maxWidth) n--;
   return n > 0 ? `${chars.slice(0, n).join('').trimEnd()}…` : '…';
 }
+
+/**
+ * Fits a label into at most `maxLines` lines of a width: wrapped at spaces by measured text,
+ * and only the last line shortened with an ellipsis if the rest still does not fit.
+ */
+export function fitLabel(measure: TextMeasurer, text: string, style: TextStyle, maxWidth: number, maxLines: number): { lines: string[]; shortened: boolean } {
+  if (measure.width(text, style.size, style.weight) <= maxWidth) return { lines: [text], shortened: false };
+  const wrapped = maxLines > 1 ? wrapText(measure, text, style, maxWidth) : [text];
+  if (wrapped.length <= maxLines) return { lines: wrapped, shortened: false };
+  const kept = wrapped.slice(0, maxLines - 1);
+  const rest = text.slice(kept.join(' ').length).trim();
+  return { lines: [...kept, truncateText(measure, rest, style, maxWidth)], shortened: true };
+}

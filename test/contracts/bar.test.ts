@@ -129,8 +129,20 @@ describe('perceptual contracts on edge cases', () => {
     expect((dump.axes[0]!.domain as number[])[1]).toBe(0);
   });
 
-  it('long labels are shortened to fit and said so', async () => {
-    const long = 'A branch name so long that no chart of this width could ever show it whole without help';
+  it('a long label wraps onto two lines where the band has room, keeping every word', async () => {
+    const long = 'Mobile Library (north routes across the moor and the upper valleys beyond the pass)';
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v' }, [{ k: long, v: 5 }, { k: 'Short', v: 3 }]);
+    const { dumpScene } = await import('../../src/scene/dump.js');
+    const dump = dumpScene(r.scene!);
+    checkBarContracts(dump, 'v', 'k');
+    const lines = dump.texts.filter((t) => t.role === 'tick' && !/^[\d,]+$/.test(t.text) && t.text !== 'Short');
+    expect(lines).toHaveLength(2);
+    expect(lines.map((t) => t.text).join(' ')).toBe(long);
+    expect(r.diagnostics.map((d) => d.code)).not.toContain('layout.label-truncated');
+  });
+
+  it('labels too long even for two lines are shortened to fit and said so', async () => {
+    const long = 'A branch name so long that no chart of this width could ever show it whole, not even on two full lines of text';
     const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v' }, [{ k: long, v: 5 }, { k: 'Short', v: 3 }]);
     const { dumpScene } = await import('../../src/scene/dump.js');
     checkBarContracts(dumpScene(r.scene!), 'v', 'k');

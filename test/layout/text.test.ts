@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { truncateText, wrapText, textNode } from '../../src/layout/text.js';
+import { fitLabel, truncateText, wrapText, textNode } from '../../src/layout/text.js';
 import { layoutFrame } from '../../src/layout/frame.js';
 import { env } from '../helpers.js';
 import type { TextStyle } from '../../src/style/types.js';
@@ -27,6 +27,19 @@ describe('text layout', () => {
     expect(t.endsWith('…')).toBe(true);
     expect(width(t)).toBeLessThanOrEqual(100);
     expect(truncateText(env.measure, 'Short', style, 100)).toBe('Short');
+  });
+
+  it('fits a label in up to n lines, shortening only the last', () => {
+    expect(fitLabel(env.measure, 'Short', style, 100, 2)).toEqual({ lines: ['Short'], shortened: false });
+    const two = fitLabel(env.measure, 'Old Town Children\'s Library', style, 120, 2);
+    expect(two.shortened).toBe(false);
+    expect(two.lines.join(' ')).toBe('Old Town Children\'s Library');
+    const cut = fitLabel(env.measure, 'Westfield Library and Archive of the Harbour District', style, 90, 2);
+    expect(cut).toMatchObject({ shortened: true });
+    expect(cut.lines).toHaveLength(2);
+    expect(cut.lines[1]!.endsWith('…')).toBe(true);
+    for (const l of cut.lines) expect(width(l)).toBeLessThanOrEqual(90);
+    expect(fitLabel(env.measure, 'Westfield Library and Archive', style, 90, 1).lines).toHaveLength(1);
   });
 
   it('boxes text from ascender to descender around its anchor', () => {
