@@ -11,6 +11,9 @@ import type { Style } from '../style/types.js';
 import { barDescription, barValueTitle, foldNote } from './bar-text.js';
 import type { FormContext, FormResult } from './types.js';
 
+/** A band scale over the bars' labels. */
+type Band = ReturnType<typeof scaleBand<string>>;
+
 /** Longest share of the body width the key labels of horizontal bars may take before they are shortened. */
 const MAX_LABEL_SHARE = 0.4;
 
@@ -60,6 +63,52 @@ function valueLabelsFit(c: Common, room: number, along: 'width' | 'height'): boo
   return c.derived.bars.every((b) => c.ctx.measure.width(c.valueText.get(b)!, label.size, label.weight) <= room);
 }
 
+/** Marks and texts collected by a layout; texts are drawn after marks. */
+interface Marks {
+  nodes: SceneNode[];
+  texts: TextNode[];
+}
+
+/** A gridline across the plot at each value tick (zero gets the zero line instead), and each tick's label. */
+function valueGrid(c: Common, vt: ValueTicks, pos: (v: number) => number, vertical: boolean, across: [number, number], out: Marks): void {
+  const { style, measure } = c.ctx;
+  const { tick } = style.text;
+  const gap = style.spacing.tickGap;
+  const tickBox = textBoxHeight(measure, tick);
+  vt.ticks.forEach((t, i) => {
+    const p = pos(t);
+    const text = vt.labels[i]!;
+    const [a, b] = across;
+    if (t !== 0) out.nodes.push(vertical ? line(c.id('gridline', text), 'gridline', a, p, b, p, style.lines.grid, style.lines.gridWidth) : line(c.id('gridline', text), 'gridline', p, a, p, b, style.lines.grid, style.lines.gridWidth));
+    const place = vertical ? { x: a - gap, top: p - tickBox / 2, anchor: 'end' as const } : { x: p, top: b + gap, anchor: 'middle' as const };
+    out.texts.push(textNode(measure, { id: c.id('tick-value', text), role: 'tick', text, style: tick, ...place }));
+  });
+}
+
+/** One bar from the zero of the value scale to its value, across its band. */
+function barRect(c: Common, bar: BarDatum, band: Band, pos: (v: number) => number, vertical: boolean): SceneNode {
+  const [v0, v1] = [pos(0), pos(bar.value)];
+  const [b0, thickness] = [band(bar.label)!, band.bandwidth()];
+  const geometry = vertical
+    ? { x: b0, y: Math.min(v0, v1), width: thickness, height: Math.abs(v1 - v0) }
+    : { x: Math.min(v0, v1), y: b0, width: Math.abs(v1 - v0), height: thickness };
+  return { kind: 'rect', id: c.id('bar', bar.label), role: 'bar', datum: barDatum(c, bar), ...geometry, fill: barFill(bar, c.ctx.style) };
+}
+
+/** A bar's value label just beyond its end: above or below upright bars, right or left of lying ones. */
+function valueLabel(c: Common, bar: BarDatum, band: Band, pos: (v: number) => number, vertical: boolean): TextNode {
+  const { measure, style } = c.ctx;
+  const { label } = style.text;
+  const gap = style.spacing.labelGap;
+  const end = pos(bar.value);
+  const middle = band(bar.label)! + band.bandwidth() / 2;
+  const box = textBoxHeight(measure, label);
+  const place = vertical
+    ? { x: middle, top: bar.value >= 0 ? end - gap - box : end + gap, anchor: 'middle' as const }
+    : { x: bar.value >= 0 ? end + gap : end - gap, top: middle - box / 2, anchor: bar.value >= 0 ? ('start' as const) : ('end' as const) };
+  return textNode(measure, { id: c.id('label', bar.label), role: 'label', text: c.valueText.get(bar)!, style: label, ...place });
+}
+
 function vertical(c: Common): Parts {
   const { style, measure } = c.ctx;
   const { tick, axisTitle: titleStyle, label } = style.text;
@@ -71,8 +120,7 @@ function vertical(c: Common): Parts {
   const bottom = c.body.y + c.body.height - (tickGap + lineHeight(tick, factor) + tickGap + lineHeight(titleStyle, factor));
   const [lo, hi] = domainOf(bars);
   const probe = valueTicks(lo, hi, bottom - top, 'vertical', tick, measure, c.derived.plan.value?.format);
-  const tickWidth = Math.max(...probe.labels.map((l) => measure.width(l, tick.size, tick.weight)));
-  const left = c.body.x + tickWidth + tickGap;
+  const left = c.body.x + Math.max(...probe.labels.map((l) => measure.width(l, tick.size, tick.weight))) + tickGap;
   const right = c.body.x + c.body.width;
   const band = scaleBand<string>().domain(bars.map((b) => b.label)).range([left, right]).paddingInner(style.spacing.bandPadding).paddingOuter(style.spacing.bandPadding / 2);
   const showLabels = valueLabelsFit(c, band.step() - 2, 'width');
@@ -82,36 +130,26 @@ function vertical(c: Common): Parts {
   const rangeBottom = bottom - (showLabels && lo < 0 && fitted(lo) + labelRoom > bottom ? labelRoom : 0);
   const vt = valueTicks(lo, hi, rangeBottom - rangeTop, 'vertical', tick, measure, c.derived.plan.value?.format);
   const y = scaleLinear().domain(vt.domain).range([rangeBottom, rangeTop]);
-  const nodes: SceneNode[] = [];
-  const texts: TextNode[] = [];
-  vt.ticks.forEach((t, i) => {
-    if (t !== 0) nodes.push(line(c.id('gridline', vt.labels[i]!), 'gridline', left, y(t), right, y(t), style.lines.grid, style.lines.gridWidth));
-    texts.push(textNode(measure, { id: c.id('tick-value', vt.labels[i]!), role: 'tick', text: vt.labels[i]!, style: tick, x: left - tickGap, top: y(t) - tickBox / 2, anchor: 'end' }));
-  });
+  const out: Marks = { nodes: [], texts: [] };
+  valueGrid(c, vt, y, true, [left, right], out);
   for (const bar of bars) {
-    const y0 = y(0);
-    const y1 = y(bar.value);
-    nodes.push({ kind: 'rect', id: c.id('bar', bar.label), role: 'bar', datum: barDatum(c, bar), x: band(bar.label)!, y: Math.min(y0, y1), width: band.bandwidth(), height: Math.abs(y1 - y0), fill: barFill(bar, style) });
-    if (showLabels) {
-      const labelTop = bar.value >= 0 ? y1 - labelGap - textBoxHeight(measure, label) : y1 + labelGap;
-      texts.push(textNode(measure, { id: c.id('label', bar.label), role: 'label', text: c.valueText.get(bar)!, style: label, x: band(bar.label)! + band.bandwidth() / 2, top: labelTop, anchor: 'middle' }));
-    }
+    out.nodes.push(barRect(c, bar, band, y, true));
+    if (showLabels) out.texts.push(valueLabel(c, bar, band, y, true));
   }
-  nodes.push(line('zero-line', 'zero-line', left, y(0), right, y(0), style.lines.zero, style.lines.zeroWidth));
+  out.nodes.push(line('zero-line', 'zero-line', left, y(0), right, y(0), style.lines.zero, style.lines.zeroWidth));
   const keyTop = bottom + tickGap;
   const { k, placed } = placeUprightLabels(bars.map((b) => b.label), band, left, right, (l) => measure.width(l, tick.size, tick.weight), tickGap);
-  const shown = placed.map((p) => bars[p.index]!);
   for (const p of placed) {
-    texts.push(textNode(measure, { id: c.id('tick-key', p.label), role: 'tick', text: p.label, style: tick, x: p.x, top: keyTop, anchor: 'middle' }));
+    out.texts.push(textNode(measure, { id: c.id('tick-key', p.label), role: 'tick', text: p.label, style: tick, x: p.x, top: keyTop, anchor: 'middle' }));
     // With labels thinned, a short tick ties each label to its bar (a clamped label may sit off-centre).
     const centre = band(p.label)! + band.bandwidth() / 2;
-    if (k > 1) nodes.push(line(c.id('tick-mark', p.label), 'tick-mark', centre, bottom, centre, bottom + tickGap - 2, style.lines.axis, style.lines.axisWidth));
+    if (k > 1) out.nodes.push(line(c.id('tick-mark', p.label), 'tick-mark', centre, bottom, centre, bottom + tickGap - 2, style.lines.axis, style.lines.axisWidth));
   }
-  texts.push(textNode(measure, { id: 'axis-title-value', role: 'axis-title', text: c.valueTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
-  texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: (left + right) / 2, top: keyTop + lineHeight(tick, factor) + tickGap, anchor: 'middle' }));
-  const diagnostics = k > 1 ? [thinned(c, k, bars.length, shown.length)] : [];
+  out.texts.push(textNode(measure, { id: 'axis-title-value', role: 'axis-title', text: c.valueTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
+  out.texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: (left + right) / 2, top: keyTop + lineHeight(tick, factor) + tickGap, anchor: 'middle' }));
+  const diagnostics = k > 1 ? [thinned(c, k, bars.length, placed.length)] : [];
   const plot = { x: left, y: top, width: right - left, height: bottom - top };
-  return { nodes: [...nodes, ...texts], plot, diagnostics, axes: axes(c, vt, 'left', 'bottom', y, band, shown.map((b) => b.label), [rangeBottom, rangeTop], [left, right]) };
+  return { nodes: [...out.nodes, ...out.texts], plot, diagnostics, axes: axes(c, vt, 'left', 'bottom', y, band, placed.map((p) => p.label), [rangeBottom, rangeTop], [left, right]) };
 }
 
 /**
@@ -119,7 +157,7 @@ function vertical(c: Common): Parts {
  * two labels come closer than `gap`, after each is kept within the plot's width (so a wide
  * first or last label never runs under the value ticks).
  */
-function placeUprightLabels(labels: string[], band: ReturnType<typeof scaleBand<string>>, left: number, right: number, width: (l: string) => number, gap: number) {
+function placeUprightLabels(labels: string[], band: Band, left: number, right: number, width: (l: string) => number, gap: number) {
   const widest = Math.max(...labels.map(width));
   for (let k = thinningStep(widest, band.step(), gap); ; k++) {
     const placed = labels.flatMap((label, index) => {
@@ -139,11 +177,34 @@ function thinned(c: Common, k: number, total: number, shown: number): Diagnostic
   });
 }
 
-function axes(c: Common, vt: ValueTicks, valueOrient: AxisInfo['orient'], keyOrient: AxisInfo['orient'], scale: (v: number) => number, band: ReturnType<typeof scaleBand<string>>, keyTicks: string[], valueRange: [number, number], keyRange: [number, number]): AxisInfo[] {
+function axes(c: Common, vt: ValueTicks, valueOrient: AxisInfo['orient'], keyOrient: AxisInfo['orient'], scale: (v: number) => number, band: Band, keyTicks: string[], valueRange: [number, number], keyRange: [number, number]): AxisInfo[] {
   return [
     { orient: valueOrient, field: c.derived.valueName, title: c.valueTitle, domain: vt.domain, ticks: vt.ticks, tickPositions: vt.ticks.map(scale), range: valueRange },
     { orient: keyOrient, field: c.derived.plan.key.name, title: c.keyTitle, domain: band.domain(), ticks: keyTicks, tickPositions: keyTicks.map((k) => band(k)! + band.bandwidth() / 2), range: keyRange },
   ];
+}
+
+/** Key labels of lying bars, each fitted to the label column: wrapped onto two lines where the band allows. */
+function fitKeyLabels(c: Common, band: Band): { labels: { lines: string[] }[]; width: number; diagnostics: Diagnostic[] } {
+  const { style, measure } = c.ctx;
+  const { tick } = style.text;
+  const maxLabel = c.body.width * MAX_LABEL_SHARE;
+  const twoLines = band.step() >= 2 * lineHeight(tick, style.spacing.lineHeight);
+  // A long label wraps onto a second line where the band is tall enough, and is shortened only beyond that.
+  const labels = c.derived.bars.map((b) => fitLabel(measure, b.label, tick, maxLabel, twoLines ? 2 : 1));
+  const truncated = labels.filter((l) => l.shortened).length;
+  const diagnostics = truncated ? [diagnostic('layout.label-truncated', `${truncated} key label${truncated === 1 ? ' is' : 's are'} longer than ${Math.round(maxLabel)} px${twoLines ? ' on two lines' : ''} and shortened with "…"; the full text stays in the SVG title of each bar`, { field: c.derived.plan.key.name, hint: 'use shorter labels, or a wider chart with `size:`' })] : [];
+  const width = Math.max(...labels.flatMap((l) => l.lines.map((line) => measure.width(line, tick.size, tick.weight))));
+  return { labels, width, diagnostics };
+}
+
+/** The lines of one key label, right-aligned at `x` and centred as a block on `middle`. */
+function keyLabelLines(c: Common, bar: BarDatum, lines: string[], x: number, middle: number): TextNode[] {
+  const { style, measure } = c.ctx;
+  const { tick } = style.text;
+  const lh = lineHeight(tick, style.spacing.lineHeight);
+  const box = textBoxHeight(measure, tick);
+  return lines.map((text, j) => textNode(measure, { id: c.id('tick-key', bar.label), role: 'tick', text, style: tick, x, top: middle - (lines.length * lh) / 2 + j * lh + (lh - box) / 2, anchor: 'end' }));
 }
 
 function horizontal(c: Common): Parts {
@@ -151,64 +212,41 @@ function horizontal(c: Common): Parts {
   const { tick, axisTitle: titleStyle, label } = style.text;
   const { tickGap, labelGap, lineHeight: factor } = style.spacing;
   const bars = c.derived.bars;
-  const diagnostics: Diagnostic[] = [];
   // Half a label clear of the key title: a label centred on a thin first band reaches above it.
   const top = c.body.y + lineHeight(titleStyle, factor) + Math.max(tickGap, textBoxHeight(measure, tick) / 2);
   const bottom = c.body.y + c.body.height - (tickGap + lineHeight(tick, factor) + tickGap + lineHeight(titleStyle, factor));
-  const maxLabel = c.body.width * MAX_LABEL_SHARE;
   const band = scaleBand<string>().domain(bars.map((b) => b.label)).range([top, bottom]).paddingInner(style.spacing.bandPadding).paddingOuter(style.spacing.bandPadding / 2);
-  const tickLine = lineHeight(tick, factor);
-  // A long label wraps onto a second line where the band is tall enough, and is shortened only beyond that.
-  const keyLabels = bars.map((b) => fitLabel(measure, b.label, tick, maxLabel, band.step() >= 2 * tickLine ? 2 : 1));
-  const truncated = keyLabels.filter((l) => l.shortened).length;
-  if (truncated) diagnostics.push(diagnostic('layout.label-truncated', `${truncated} key label${truncated === 1 ? ' is' : 's are'} longer than ${Math.round(maxLabel)} px${band.step() >= 2 * tickLine ? ' on two lines' : ''} and shortened with "…"; the full text stays in the SVG title of each bar`, { field: c.derived.plan.key.name, hint: 'use shorter labels, or a wider chart with `size:`' }));
-  const labelWidth = Math.max(...keyLabels.flatMap((l) => l.lines.map((line) => measure.width(line, tick.size, tick.weight))));
+  const keyLabels = fitKeyLabels(c, band);
   const showLabels = valueLabelsFit(c, band.step(), 'height');
   const [lo, hi] = domainOf(bars);
   const labelRoom = (sign: number) => (showLabels ? Math.max(0, ...bars.filter((b) => Math.sign(b.value) === sign).map((b) => measure.width(c.valueText.get(b)!, label.size, label.weight) + labelGap)) : 0);
-  const left = c.body.x + labelWidth + tickGap;
+  const left = c.body.x + keyLabels.width + tickGap;
   const right = c.body.x + c.body.width;
   const probe = valueTicks(lo, hi, right - left, 'horizontal', tick, measure, c.derived.plan.value?.format);
-  const halfTick = measure.width(probe.labels[probe.labels.length - 1]!, tick.size, tick.weight) / 2;
-  const halfFirstTick = measure.width(probe.labels[0]!, tick.size, tick.weight) / 2;
-  const rangeLeft = left + Math.max(labelRoom(-1), halfFirstTick - tickGap);
-  const rangeRight = right - Math.max(labelRoom(1), halfTick);
+  const halfTick = (i: number) => measure.width(probe.labels[i]!, tick.size, tick.weight) / 2;
+  const rangeLeft = left + Math.max(labelRoom(-1), halfTick(0) - tickGap);
+  const rangeRight = right - Math.max(labelRoom(1), halfTick(probe.labels.length - 1));
   const vt = valueTicks(lo, hi, rangeRight - rangeLeft, 'horizontal', tick, measure, c.derived.plan.value?.format);
   const x = scaleLinear().domain(vt.domain).range([rangeLeft, rangeRight]);
-  const nodes: SceneNode[] = [];
-  const texts: TextNode[] = [];
-  vt.ticks.forEach((t, i) => {
-    if (t !== 0) nodes.push(line(c.id('gridline', vt.labels[i]!), 'gridline', x(t), top, x(t), bottom, style.lines.grid, style.lines.gridWidth));
-    texts.push(textNode(measure, { id: c.id('tick-value', vt.labels[i]!), role: 'tick', text: vt.labels[i]!, style: tick, x: x(t), top: bottom + tickGap, anchor: 'middle' }));
-  });
-  const tickBox = textBoxHeight(measure, tick);
-  const k = thinningStep(tickBox, band.step(), 1);
+  const out: Marks = { nodes: [], texts: [] };
+  valueGrid(c, vt, x, false, [top, bottom], out);
+  const k = thinningStep(textBoxHeight(measure, tick), band.step(), 1);
   bars.forEach((bar, i) => {
-    const x0 = x(0);
-    const x1 = x(bar.value);
-    const y0 = band(bar.label)!;
-    nodes.push({ kind: 'rect', id: c.id('bar', bar.label), role: 'bar', datum: barDatum(c, bar), x: Math.min(x0, x1), y: y0, width: Math.abs(x1 - x0), height: band.bandwidth(), fill: barFill(bar, style) });
-    const middle = y0 + band.bandwidth() / 2;
+    out.nodes.push(barRect(c, bar, band, x, false));
+    const middle = band(bar.label)! + band.bandwidth() / 2;
     if (i % k === 0) {
-      const { lines } = keyLabels[i]!;
-      lines.forEach((text, j) => {
-        const lineTop = middle - (lines.length * tickLine) / 2 + j * tickLine + (tickLine - tickBox) / 2;
-        texts.push(textNode(measure, { id: c.id('tick-key', bar.label), role: 'tick', text, style: tick, x: left - tickGap, top: lineTop, anchor: 'end' }));
-      });
-      if (k > 1) nodes.push(line(c.id('tick-mark', bar.label), 'tick-mark', left - tickGap + 2, middle, left, middle, style.lines.axis, style.lines.axisWidth));
+      out.texts.push(...keyLabelLines(c, bar, keyLabels.labels[i]!.lines, left - tickGap, middle));
+      if (k > 1) out.nodes.push(line(c.id('tick-mark', bar.label), 'tick-mark', left - tickGap + 2, middle, left, middle, style.lines.axis, style.lines.axisWidth));
     }
-    if (showLabels) {
-      const lx = bar.value >= 0 ? x1 + labelGap : x1 - labelGap;
-      texts.push(textNode(measure, { id: c.id('label', bar.label), role: 'label', text: c.valueText.get(bar)!, style: label, x: lx, top: middle - textBoxHeight(measure, label) / 2, anchor: bar.value >= 0 ? 'start' : 'end' }));
-    }
+    if (showLabels) out.texts.push(valueLabel(c, bar, band, x, false));
   });
-  nodes.push(line('zero-line', 'zero-line', x(0), top, x(0), bottom, style.lines.zero, style.lines.zeroWidth));
-  texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
-  texts.push(textNode(measure, { id: 'axis-title-value', role: 'axis-title', text: c.valueTitle, style: titleStyle, x: (left + right) / 2, top: bottom + tickGap + lineHeight(tick, factor) + tickGap, anchor: 'middle' }));
+  out.nodes.push(line('zero-line', 'zero-line', x(0), top, x(0), bottom, style.lines.zero, style.lines.zeroWidth));
+  out.texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
+  out.texts.push(textNode(measure, { id: 'axis-title-value', role: 'axis-title', text: c.valueTitle, style: titleStyle, x: (left + right) / 2, top: bottom + tickGap + lineHeight(tick, factor) + tickGap, anchor: 'middle' }));
   const shown = bars.filter((_, i) => i % k === 0).map((b) => b.label);
-  if (k > 1) diagnostics.push(thinned(c, k, bars.length, shown.length));
+  const diagnostics = [...keyLabels.diagnostics, ...(k > 1 ? [thinned(c, k, bars.length, shown.length)] : [])];
   const plot = { x: left, y: top, width: right - left, height: bottom - top };
-  return { nodes: [...nodes, ...texts], plot, diagnostics, axes: axes(c, vt, 'bottom', 'left', x, band, shown, [rangeLeft, rangeRight], [top, bottom]) };
+  return { nodes: [...out.nodes, ...out.texts], plot, diagnostics, axes: axes(c, vt, 'bottom', 'left', x, band, shown, [rangeLeft, rangeRight], [top, bottom]) };
 }
 
 function missingGlyphs(nodes: SceneNode[], ctx: FormContext): Diagnostic[] {
