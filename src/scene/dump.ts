@@ -1,4 +1,4 @@
-import type { AxisInfo, Box, Datum, Scene, SceneNode, TextNode } from './types.js';
+import type { Box, Datum, Scene, SceneNode, TextNode } from './types.js';
 
 /** A mark in the scene dump: role, pixel geometry, fill, and the datum it encodes. */
 export interface DumpMark {
@@ -25,16 +25,8 @@ export interface DumpText extends Box {
  * The scene as the documented JSON contract (`--scene FILE`): form, size, background, marks,
  * axes and texts. Checked by tests outside the project: extend it, never rename its keys.
  */
-export interface SceneDump {
-  form: string;
-  width: number;
-  height: number;
-  background: string;
-  title: string;
-  description: string;
-  plot: Box;
+export interface SceneDump extends Pick<Scene, 'form' | 'width' | 'height' | 'background' | 'title' | 'description' | 'plot' | 'axes'> {
   marks: DumpMark[];
-  axes: AxisInfo[];
   texts: DumpText[];
 }
 
