@@ -12,7 +12,7 @@ describe('library API', () => {
   });
 
   it('render(brief, rows) returns svg, scene, rationale and warnings', async () => {
-    const out = await api.render({ intent: 'compare', keys: 'pier', values: 'n' }, [{ pier: 'North', n: 3 }, { pier: 'South', n: null }], { env, pngScale: 1 });
+    const out = await api.render({ intent: 'compare', keys: 'pier', values: 'n', fields: { n: { unit: 'crossings' } } }, [{ pier: 'North', n: 3 }, { pier: 'South', n: null }], { env, pngScale: 1 });
     expect(out.svg).toMatch(/^<svg /);
     expect(out.png!.subarray(1, 4).toString()).toBe('PNG');
     expect(out.form).toBe('bar');

@@ -95,3 +95,16 @@ export function checkBriefRules(brief: ResolvedBrief, lenient: boolean): { probl
   const baseline = checkBaseline(brief, lenient);
   return { problems: [...checkPinnedForm(brief), ...baseline.problems], baseline: baseline.decision };
 }
+
+/**
+ * The hard rule that every axis title carries its unit: a value with no `unit` hint, and no
+ * unit in brackets in its name or label, is warned about (counts of rows need none).
+ */
+export function checkValueUnit(fields: Fields): Diagnostic[] {
+  const value = fields.values[0];
+  if (!value || value.unit || /[([].+[)\]]/.test(`${value.name} ${value.label}`)) return [];
+  return [diagnostic('choice.unit-missing', `the value \`${value.name}\` has no unit, so its axis title cannot say what is counted or measured`, {
+    path: `/fields/${value.name}/unit`, field: value.name, expected: 'a unit such as "crossings per day", "€" or "%"',
+    hint: `add \`fields: { ${value.name}: { unit: … } }\``,
+  })];
+}

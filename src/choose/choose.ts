@@ -6,7 +6,7 @@ import type { Field, Fields } from '../fields/types.js';
 import { isOrdered } from '../fields/types.js';
 import type { Style } from '../style/types.js';
 import { measureBarFit } from './bar-fit.js';
-import { checkBriefRules, checkCompareShape } from './checks.js';
+import { checkBriefRules, checkCompareShape, checkValueUnit } from './checks.js';
 import { matchRule } from './rules.js';
 import type { BarPlan, Choice, Decision } from './types.js';
 
@@ -59,6 +59,7 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext)
   const briefRules = checkBriefRules(brief, ctx.lenient);
   if (hasErrors(briefRules.problems)) return failure(briefRules.problems);
   const problems = [...briefRules.problems, ...checkCompareShape(fields, brief)];
+  if (!hasErrors(problems)) problems.push(...checkValueUnit(fields));
   if (hasErrors(problems)) return failure(problems);
   const rule = matchRule(brief.intent, fields)!;
   const key = fields.keys[0]!;

@@ -47,6 +47,7 @@ export const CATALOGUE = {
   'choice.baseline-fit-refused': 'error',
   'choice.order-not-applicable': 'error',
   'choice.lenient-fallback': 'warning',
+  'choice.unit-missing': 'warning',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',

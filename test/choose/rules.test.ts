@@ -98,7 +98,21 @@ describe('rules for the compare intent', () => {
   });
 
   it('refuses cluster order for bars', async () => {
-    expect(codes(await renderRows({ intent: 'compare', keys: 'pier', values: 'n', order: 'cluster' }, piers))).toEqual(['choice.order-not-applicable']);
+    expect(codes(await renderRows({ intent: 'compare', keys: 'pier', values: 'n', order: 'cluster', fields: { n: { unit: 'crossings' } } }, piers))).toEqual(['choice.order-not-applicable']);
+  });
+
+  it('warns when the value has no unit, since every axis title must carry one', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'pier', values: 'n' }, piers);
+    expect(r.ok).toBe(true);
+    expect(r.diagnostics).toMatchObject([{ code: 'choice.unit-missing', severity: 'warning', path: '/fields/n/unit' }]);
+    expect(r.diagnostics[0]!.hint).toContain('fields: { n: { unit:');
+  });
+
+  it('takes a unit from the hint, or from brackets in the column name, without warning', async () => {
+    expect(codes(await renderRows({ intent: 'compare', keys: 'pier', values: 'n', fields: { n: { unit: 'crossings' } } }, piers))).toEqual([]);
+    const bracketed = piers.map((p) => ({ pier: p.pier, 'revenue (€)': p.n }));
+    expect(codes(await renderRows({ intent: 'compare', keys: 'pier', values: 'revenue (€)' }, bracketed))).toEqual([]);
+    expect(codes(await renderRows({ intent: 'compare', keys: 'pier', aggregate: 'count' }, piers))).toEqual([]);
   });
 
   it('counts rows when asked to, without a value column', async () => {

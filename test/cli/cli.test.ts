@@ -18,9 +18,9 @@ function io(cwd: string) {
 function workspace(): string {
   const dir = tempDir();
   writeFileSync(join(dir, 'piers.csv'), 'pier,crossings\nNorth,212\nSouth,64\nEast,131\n');
-  writeFileSync(join(dir, 'piers.brief.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossings\ntitle: Piers\n');
+  writeFileSync(join(dir, 'piers.brief.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossings\ntitle: Piers\nfields: { crossings: { unit: crossings } }\n');
   writeFileSync(join(dir, 'typo.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossing\n');
-  writeFileSync(join(dir, 'warn.yaml'), 'data: gaps.csv\nintent: compare\nkeys: pier\nvalues: crossings\n');
+  writeFileSync(join(dir, 'warn.yaml'), 'data: gaps.csv\nintent: compare\nkeys: pier\nvalues: crossings\nfields: { crossings: { unit: crossings } }\n');
   writeFileSync(join(dir, 'gaps.csv'), 'pier,crossings\nNorth,212\nSouth,NA\n');
   return dir;
 }

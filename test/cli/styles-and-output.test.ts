@@ -6,7 +6,7 @@ import { renderBrief } from '../../src/pipeline/render.js';
 import { env, root, tempDir } from '../helpers.js';
 
 const rows = [{ pier: 'North', n: 5 }, { pier: 'South', n: 3 }];
-const brief = (extra: Record<string, unknown>) => ({ intent: 'compare', keys: 'pier', values: 'n', rows, ...extra });
+const brief = (extra: Record<string, unknown>) => ({ intent: 'compare', keys: 'pier', values: 'n', fields: { n: { unit: 'crossings' } }, rows, ...extra });
 
 describe('styles', () => {
   it('names an unknown preset and suggests the nearest', async () => {
@@ -81,7 +81,7 @@ describe('output', () => {
   it('reports an output that cannot be written, and leaves no temporary file behind', async () => {
     const dir = tempDir();
     writeFileSync(join(dir, 'd.csv'), 'pier,n\nNorth,5\n');
-    writeFileSync(join(dir, 'b.yaml'), 'data: d.csv\nintent: compare\nkeys: pier\nvalues: n\noutput: blocked/chart.svg\n');
+    writeFileSync(join(dir, 'b.yaml'), 'data: d.csv\nintent: compare\nkeys: pier\nvalues: n\nfields: { n: { unit: crossings } }\noutput: blocked/chart.svg\n');
     writeFileSync(join(dir, 'blocked'), 'a file where a folder should be');
     const [report] = await renderBatch([join(dir, 'b.yaml')], env, { png: false, scale: 1, strict: false, lenient: false, debug: false, tempTag: 't' }, dir);
     expect(report!.ok).toBe(false);
