@@ -19,6 +19,8 @@ export interface BatchOptions {
   debug: boolean;
   /** Distinguishes this process's temporary files from another's writing the same folder. */
   tempTag: string;
+  /** Write the SVG file with text as glyph outlines, for viewers without the font (--outline-text). */
+  outlineText: boolean;
   /** When given, each stage is timed with it (--timings). */
   clock?: () => number;
 }
@@ -76,7 +78,8 @@ export async function renderBatch(files: string[], env: RenderEnv, opts: BatchOp
     try {
       for (const p of planned) {
         const started = opts.clock?.();
-        contents.push({ path: p.path, data: p.kind === 'svg' ? result.svg : rasterize(outlineSvg(result.scene, env), { scale: opts.scale, fontFiles: [] }) });
+        const svg = p.kind === 'svg' && opts.outlineText ? outlineSvg(result.scene, env) : result.svg;
+        contents.push({ path: p.path, data: p.kind === 'svg' ? svg : rasterize(outlineSvg(result.scene, env), { scale: opts.scale, fontFiles: [] }) });
         if (p.kind === 'png' && started !== undefined) report.timings?.push({ stage: 'png', ms: opts.clock!() - started });
         if (p.kind === 'png') await breathe();
       }

@@ -39,10 +39,10 @@ function demoBriefs(root: string): string[] {
   return readdirSync(dir).filter((f) => /\.brief\.(ya?ml|json)$/.test(f)).sort().map((f) => join(dir, f));
 }
 
-interface RenderFlags { outDir?: string; png?: boolean; scale: number; scene?: string; strict?: boolean; lenient?: boolean; debug?: boolean; timings?: boolean; report?: string }
+interface RenderFlags { outDir?: string; png?: boolean; outlineText?: boolean; scale: number; scene?: string; strict?: boolean; lenient?: boolean; debug?: boolean; timings?: boolean; report?: string }
 
 function batchOptions(flags: RenderFlags, io: CliIo, outDir: string | undefined): BatchOptions {
-  return { outDir, png: !!flags.png, scale: flags.scale, scene: flags.scene, strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, tempTag: String(io.pid), ...(flags.timings ? { clock: io.clock } : {}) };
+  return { outDir, png: !!flags.png, scale: flags.scale, scene: flags.scene, strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, outlineText: !!flags.outlineText, tempTag: String(io.pid), ...(flags.timings ? { clock: io.clock } : {}) };
 }
 
 /** A progress line on stderr for batches on a terminal (never with NO_COLOR or in CI). */
@@ -110,6 +110,7 @@ function program(io: CliIo, env: () => RenderEnv, exit: { code: number }): Comma
   const withRenderFlags = (c: Command) => c
     .option('-o, --out-dir <dir>', 'write outputs under this folder instead of beside each brief')
     .option('--png', 'also write a PNG beside each SVG')
+    .option('--outline-text', 'write SVG text as glyph outlines, exact without the font (not selectable)')
     .option('--scale <n>', 'PNG pixels per CSS pixel', parseScale, 2)
     .option('--scene <path>', 'dump the scene as JSON: a file for one brief, a folder for several')
     .option('--strict', 'treat warnings as errors')

@@ -62,7 +62,9 @@ export function writeSvg(scene: Scene, mode: TextMode): string {
   const title = escapeXml(scene.title);
   const desc = escapeXml(scene.description);
   const prefix = `cw${contentHash(`${w} ${h} ${scene.background}\n${title}\n${desc}\n${body}`)}`;
-  const font = mode.kind === 'live' ? ` font-family="${escapeXml(mode.family)}, sans-serif"` : '';
+  // Quoted: an unquoted family name may not contain a bare number ("Source Sans 3"), and CSS
+  // drops the whole declaration if it does.
+  const font = mode.kind === 'live' ? ` font-family="'${mode.family.replace(/['"<>&]/g, '')}', sans-serif"` : '';
   const parts = [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}" viewBox="0 0 ${w} ${h}" role="img" aria-labelledby="${prefix}-title ${prefix}-desc"${font}>`,
     `<title id="${prefix}-title">${title}</title>`,

@@ -44,6 +44,15 @@ describe('chartwright render', () => {
     expect(readFileSync(join(dir, 'out', 'piers.png')).subarray(1, 4).toString()).toBe('PNG');
   });
 
+  it('writes SVG text as glyph outlines with --outline-text, keeping title and description', async () => {
+    const dir = workspace();
+    expect(await runCli(['render', 'piers.brief.yaml', '--outline-text'], io(dir).io)).toBe(EXIT.OK);
+    const svg = readFileSync(join(dir, 'piers.svg'), 'utf8');
+    expect(svg).not.toContain('<text');
+    expect(svg).toContain('<use href="#cw');
+    expect(svg).toMatch(/<title id="cw[0-9a-f]{8}-title">Piers<\/title>/);
+  });
+
   it('always writes the SVG beside a .png output', async () => {
     const dir = workspace();
     writeFileSync(join(dir, 'p.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossings\noutput: figures/ferry.png\n');

@@ -83,7 +83,7 @@ describe('output', () => {
     writeFileSync(join(dir, 'd.csv'), 'pier,n\nNorth,5\n');
     writeFileSync(join(dir, 'b.yaml'), 'data: d.csv\nintent: compare\nkeys: pier\nvalues: n\nfields: { n: { unit: crossings } }\noutput: blocked/chart.svg\n');
     writeFileSync(join(dir, 'blocked'), 'a file where a folder should be');
-    const [report] = await renderBatch([join(dir, 'b.yaml')], env, { png: false, scale: 1, strict: false, lenient: false, debug: false, tempTag: 't' }, dir);
+    const [report] = await renderBatch([join(dir, 'b.yaml')], env, { png: false, scale: 1, strict: false, lenient: false, debug: false, outlineText: false, tempTag: 't' }, dir);
     expect(report!.ok).toBe(false);
     expect(report!.diagnostics.map((d) => d.code)).toEqual(['output.write-failed']);
     expect(readdirSync(dir).sort()).toEqual(['b.yaml', 'blocked', 'd.csv']);
@@ -93,7 +93,7 @@ describe('output', () => {
     const dir = tempDir();
     mkdirSync(join(dir, 'out'));
     writeFileSync(join(dir, 'b.yaml'), 'data: none.csv\nintent: compare\nkeys: pier\nvalues: n\n');
-    const [report] = await renderBatch([join(dir, 'b.yaml')], env, { outDir: join(dir, 'out'), png: true, scale: 1, strict: false, lenient: false, debug: false, tempTag: 't' }, dir);
+    const [report] = await renderBatch([join(dir, 'b.yaml')], env, { outDir: join(dir, 'out'), png: true, scale: 1, strict: false, lenient: false, debug: false, outlineText: false, tempTag: 't' }, dir);
     expect(report!.diagnostics.map((d) => d.code)).toEqual(['table.not-found']);
     expect(readdirSync(join(dir, 'out'))).toEqual([]);
   });

@@ -49,6 +49,11 @@ describe('SVG writer', () => {
     expect(svg.getAttribute('aria-labelledby')).toMatch(/^cw[0-9a-f]{8}-title cw[0-9a-f]{8}-desc$/);
   });
 
+  it('quotes the font family, which CSS would drop unquoted because of the bare "3"', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v' }, rows);
+    expect(parseXml(r.svg!).documentElement.getAttribute('font-family')).toBe("'Source Sans 3', sans-serif");
+  });
+
   it('uses the brief description instead of the generated one when given', async () => {
     const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v', description: 'Custom words' }, rows);
     expect(parseXml(r.svg!).getElementsByTagName('desc')[0]!.textContent).toBe('Custom words');
