@@ -1,13 +1,26 @@
-import { crc32 as zlibCrc32, deflateSync } from 'node:zlib';
+import * as zlib from 'node:zlib';
 
 const SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+
+/** CRC-32 (ISO 3309, as PNG uses it) by table, for Node releases before zlib.crc32 (20.15). */
+export function crc32Table(data: Uint8Array): number {
+  let crc = 0xffffffff;
+  for (const byte of data) {
+    let c = (crc ^ byte) & 0xff;
+    for (let k = 0; k < 8; k++) c = c & 1 ? 0xedb88320 ^ (c >>> 1) : c >>> 1;
+    crc = (crc >>> 8) ^ c;
+  }
+  return (crc ^ 0xffffffff) >>> 0;
+}
+
+const crc32: (data: Uint8Array) => number = typeof zlib.crc32 === 'function' ? (d) => zlib.crc32(d) >>> 0 : crc32Table;
 
 function chunk(type: string, data: Buffer): Buffer {
   const head = Buffer.alloc(8);
   head.writeUInt32BE(data.length, 0);
   head.write(type, 4, 'ascii');
   const crc = Buffer.alloc(4);
-  crc.writeUInt32BE(zlibCrc32(Buffer.concat([head.subarray(4), data])) >>> 0, 0);
+  crc.writeUInt32BE(crc32(Buffer.concat([head.subarray(4), data])), 0);
   return Buffer.concat([head, data, crc]);
 }
 
@@ -27,5 +40,5 @@ export function encodePng(rgba: Uint8Array, width: number, height: number): Buff
   ihdr.writeUInt32BE(height, 4);
   ihdr[8] = 8;
   ihdr[9] = 6;
-  return Buffer.concat([SIGNATURE, chunk('IHDR', ihdr), chunk('IDAT', deflateSync(filtered, { level: 3 })), chunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([SIGNATURE, chunk('IHDR', ihdr), chunk('IDAT', zlib.deflateSync(filtered, { level: 3 })), chunk('IEND', Buffer.alloc(0))]);
 }

@@ -1,7 +1,8 @@
 import { PNG } from 'pngjs';
 import { describe, expect, it } from 'vitest';
 import { createRequire } from 'node:module';
-import { encodePng } from '../../src/raster/png-encode.js';
+import { crc32 } from 'node:zlib';
+import { crc32Table, encodePng } from '../../src/raster/png-encode.js';
 import { rasterize } from '../../src/raster/rasterize.js';
 
 const svg = '<svg xmlns="http://www.w3.org/2000/svg" width="40" height="30"><rect width="40" height="30" fill="#ffffff"/><rect x="5" y="5" width="20" height="10" fill="#206c89"/><circle cx="30" cy="20" r="6" fill="#aa5830"/></svg>';
@@ -19,6 +20,13 @@ describe('raster stage', () => {
     const rgba = new Uint8Array(3 * 2 * 4).map((_, i) => (i * 37) % 256);
     const decoded = PNG.sync.read(encodePng(rgba, 3, 2));
     expect([...decoded.data]).toEqual([...rgba]);
+  });
+
+  it('computes the same CRC-32 as zlib without it (for Node before 20.15)', () => {
+    // "123456789" → 0xcbf43926 is the standard CRC-32 check value (ISO 3309 / ITU-T V.42).
+    expect(crc32Table(Buffer.from('123456789'))).toBe(0xcbf43926);
+    const bytes = Buffer.from(Array.from({ length: 1000 }, (_, i) => (i * 131) % 256));
+    expect(crc32Table(bytes)).toBe(crc32(bytes) >>> 0);
   });
 
   it('scales by --scale', () => {
