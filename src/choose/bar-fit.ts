@@ -1,3 +1,4 @@
+import { max } from 'd3-array';
 import type { TextMeasurer } from '../font/measurer.js';
 import { layoutFrame, type FrameTexts } from '../layout/frame.js';
 import { niceTicks } from '../layout/ticks.js';
@@ -37,7 +38,7 @@ export function measureBarFit(labels: readonly string[], valueExtent: [number, n
   const fmt = tickFormatter(ticks);
   const tickWidth = Math.max(...ticks.map((t) => measure.width(fmt(t), tick.size, tick.weight)));
   const axisBlock = lineHeight(tick, factor) + style.spacing.tickGap + lineHeight(style.text.axisTitle, factor) + style.spacing.tickGap;
-  const widestLabel = Math.max(0, ...labels.map((l) => measure.width(l, tick.size, tick.weight)));
+  const widestLabel = max(labels, (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
   const plotWidth = frame.body.width - tickWidth - style.spacing.tickGap;
   const plotHeight = frame.body.height - axisBlock - lineHeight(style.text.axisTitle, factor) - style.spacing.tickGap;
   const bandNeeded = widestLabel + 2 * style.spacing.tickGap;

@@ -1,3 +1,4 @@
+import { extent } from 'd3-array';
 import type { ResolvedBrief } from '../brief/types.js';
 import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import type { TextMeasurer } from '../font/measurer.js';
@@ -27,7 +28,9 @@ function distinctLabels(key: Field): string[] {
 function valueExtent(value: Field | undefined, rows: number): [number, number] {
   if (!value) return [0, rows];
   const nums = value.column.values.filter((v): v is number => typeof v === 'number');
-  return nums.length ? [Math.min(...nums), Math.max(...nums)] : [0, 1];
+  // d3-array's extent loops; Math.min(...nums) overflows the stack beyond about 120,000 rows.
+  const [lo, hi] = extent(nums);
+  return lo === undefined || hi === undefined ? [0, 1] : [lo, hi];
 }
 
 function chooseOrder(brief: ResolvedBrief, key: Field, lenient: boolean, problems: Diagnostic[], rationale: Decision[]): BarPlan['order'] {

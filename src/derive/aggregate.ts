@@ -1,3 +1,4 @@
+import { max, min } from 'd3-array';
 import type { Aggregate } from '../brief/types.js';
 
 /** Combines the values of rows that share a key. `count` counts rows, whatever their values. */
@@ -6,8 +7,9 @@ export function aggregateValues(values: readonly number[], how: Aggregate): numb
     case 'sum': return values.reduce((a, b) => a + b, 0);
     case 'mean': return values.reduce((a, b) => a + b, 0) / values.length;
     case 'count': return values.length;
-    case 'max': return Math.max(...values);
-    case 'min': return Math.min(...values);
+    // d3-array loops; spreading a long list into Math.max overflows the stack.
+    case 'max': return max(values)!;
+    case 'min': return min(values)!;
   }
 }
 

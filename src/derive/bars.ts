@@ -37,26 +37,29 @@ export interface DerivedBars {
 
 interface Group { label: string; sortKey: number; values: number[]; rows: number[] }
 
-/** Where a row's key sits in the key's own order: time, number, or level index. */
-function keyOrder(plan: BarPlan, row: number): number {
+/** Where a row's key sits in the key's own order: time, number, or level index (levels looked up by Map, not indexOf). */
+function keyOrderOf(plan: BarPlan): (row: number) => number {
   const { column, levels } = plan.key;
-  const v = column.values[row];
-  if (typeof v === 'number') return v;
-  const i = levels.indexOf(column.text[row] ?? '');
-  return i < 0 ? Number.MAX_SAFE_INTEGER : i;
+  const index = new Map(levels.map((level, i) => [level, i]));
+  return (row) => {
+    const v = column.values[row];
+    if (typeof v === 'number') return v;
+    return index.get(column.text[row] ?? '') ?? Number.MAX_SAFE_INTEGER;
+  };
 }
 
 function groupRows(table: Table, plan: BarPlan, problems: Diagnostic[]): Group[] {
   const groups = new Map<string, Group>();
   const missingValue: number[] = [];
   const missingKey: number[] = [];
+  const keyOrder = keyOrderOf(plan);
   for (let i = 0; i < table.rowCount; i++) {
     const label = keyText(plan.key.column, i);
     const raw = plan.value ? plan.value.column.values[i] : 1;
     if (label === null) { missingKey.push(table.rowPositions[i]!); continue; }
     if (typeof raw !== 'number') { missingValue.push(table.rowPositions[i]!); continue; }
     let g = groups.get(label);
-    if (!g) { g = { label, sortKey: keyOrder(plan, i), values: [], rows: [] }; groups.set(label, g); }
+    if (!g) { g = { label, sortKey: keyOrder(i), values: [], rows: [] }; groups.set(label, g); }
     g.values.push(raw);
     g.rows.push(table.rowPositions[i]!);
   }

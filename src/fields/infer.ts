@@ -31,20 +31,22 @@ function levelsOf(column: Column, type: FieldType, hint: FieldHint | undefined, 
   const present = firstAppearance(column);
   if (!hint?.order) return type === 'cyclic' ? cycleOrder(present) ?? present : present;
   const order = hint.order.map(String);
-  const duplicate = order.find((v, i) => order.indexOf(v) !== i);
+  const duplicate = order.find((v, i) => order.indexOf(v) !== i); // order lists are short: written by hand
   if (duplicate !== undefined) {
     problems.push(diagnostic('fields.order-duplicate', `\`fields.${column.name}.order\` lists ${JSON.stringify(duplicate)} twice`, {
       path: `/fields/${column.name}/order`, found: duplicate, hint: 'list each level once',
     }));
   }
-  const unlisted = present.filter((v) => !order.includes(v));
+  const listed = new Set(order);
+  const unlisted = present.filter((v) => !listed.has(v));
   if (unlisted.length) {
     problems.push(diagnostic('fields.order-incomplete', `\`fields.${column.name}.order\` does not list ${unlisted.slice(0, 5).map((v) => JSON.stringify(v)).join(', ')}${unlisted.length > 5 ? ` and ${unlisted.length - 5} more` : ''}, found in the data`, {
       path: `/fields/${column.name}/order`, field: column.name, found: unlisted.slice(0, 5).join(', '), expected: 'every level of the column',
       hint: `add the missing level${unlisted.length > 1 ? 's' : ''} to the order, or fix the spelling in the data`,
     }));
   }
-  return order.filter((v) => present.includes(v));
+  const seen = new Set(present);
+  return order.filter((v) => seen.has(v));
 }
 
 function checkNames(names: readonly string[], basePath: string, table: Table, listed: boolean): Diagnostic[] {

@@ -52,6 +52,13 @@ describe('rules for the compare intent', () => {
     expect(r.choice!.bar.capacity).toBeLessThan(300);
   });
 
+  it('chooses for a table of 200,000 rows and 100,000 keys without overflowing the stack', async () => {
+    const rows = Array.from({ length: 200_000 }, (_, i) => ({ k: `k${i % 100_000}`, v: i % 997 }));
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v', fields: { v: { unit: 'units' } } }, rows);
+    expect(r.ok).toBe(true);
+    expect(codes(r)).toContain('derive.others-folded');
+  });
+
   it('refuses a fitted baseline for bars, and explains why', async () => {
     const r = await renderRows({ intent: 'compare', keys: 'pier', values: 'n', baseline: 'fit' }, piers);
     expect(r.ok).toBe(false);

@@ -92,6 +92,13 @@ describe('derive stage for bars', () => {
     expect(r.diagnostics.map((d) => d.code)).toEqual(['derive.too-many-ordered-bars']);
   });
 
+  it('handles tables far beyond the argument limit of Math.max (a past crash above about 130,000 rows)', async () => {
+    const rows = Array.from({ length: 200_000 }, (_, i) => ({ k: i % 2 ? 'a' : `key ${i}`, v: i }));
+    const r = await derive(rows, { aggregate: 'max', capacity: 50 });
+    expect(r.ok).toBe(true);
+    expect(r.ok && r.value.bars[0]).toMatchObject({ label: 'a', value: 199_999 });
+  });
+
   it('compares digits as numbers in natural order', () => {
     expect(['b2', 'b10', 'a', 'B1'].sort(compareNatural)).toEqual(['a', 'B1', 'b2', 'b10']);
   });
