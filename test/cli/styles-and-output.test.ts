@@ -99,10 +99,19 @@ describe('output', () => {
   });
 });
 
+describe('defects', () => {
+  it('a layout defect (non-finite coordinates) becomes render.internal, never a throw or a half-written SVG', async () => {
+    const broken = { ...env, measure: { ...env.measure, width: () => Number.NaN } };
+    const r = await renderBrief({ brief: brief({}) }, broken);
+    expect(r.ok).toBe(false);
+    expect(r.svg).toBeUndefined();
+    expect(r.diagnostics.map((d) => d.code)).toContain('render.internal');
+  });
+});
+
 describe('the diagnostic catalogue', () => {
-  // Codes no user input can trigger: they mark defects in chartwright or failures of the
-  // machine, and are raised only around the raster and layout writers.
-  const untriggerable = new Set(['render.internal', 'output.raster-failed']);
+  // Codes no input can trigger: a failure inside resvg itself.
+  const untriggerable = new Set(['output.raster-failed']);
 
   it('every code a user can cause is exercised by some test', async () => {
     const { CATALOGUE } = await import('../../src/diagnostics/catalogue.js');
