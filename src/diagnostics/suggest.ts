@@ -22,6 +22,13 @@ export function nearestName(found: string, candidates: readonly string[]): strin
   const squash = (s: string) => s.toLowerCase().replace(/[\s_\-]+/g, '');
   const exactish = candidates.find((c) => squash(c) === squash(found));
   if (exactish !== undefined) return exactish;
+  // A long shared start catches words that were extended or cut ("comparison" for "compare").
+  const prefix = (a: string, b: string) => { let i = 0; while (i < a.length && i < b.length && a[i] === b[i]) i++; return i; };
+  const byPrefix = candidates
+    .map((c) => ({ c, n: prefix(squash(c), squash(found)) }))
+    .filter(({ c, n }) => n >= 4 && n >= 0.75 * Math.min(squash(c).length, squash(found).length))
+    .sort((a, b) => b.n - a.n || (a.c < b.c ? -1 : 1))[0];
+  if (byPrefix) return byPrefix.c;
   const limit = Math.min(3, Math.max(1, Math.floor(found.length / 3)));
   let best: string | undefined;
   let bestDistance = Infinity;

@@ -1,0 +1,30 @@
+import { describe, expect, it } from 'vitest';
+import { editDistance, nearestName } from '../../src/diagnostics/suggest.js';
+
+describe('near-miss suggestions', () => {
+  const intents = ['compare', 'part-to-whole', 'composition', 'trend', 'change', 'distribution'];
+
+  it('suggests names within a few edits', () => {
+    expect(nearestName('compair', intents)).toBe('compare');
+    expect(nearestName('crossing', ['pier', 'crossings'])).toBe('crossings');
+  });
+
+  it('suggests names that were extended or cut short', () => {
+    expect(nearestName('comparison', intents)).toBe('compare');
+    expect(nearestName('distrib', intents)).toBe('distribution');
+  });
+
+  it('matches regardless of case, spaces and underscores', () => {
+    expect(nearestName('Balance M3', ['balance_m3'])).toBe('balance_m3');
+  });
+
+  it('suggests nothing for unrelated names', () => {
+    expect(nearestName('weather', intents)).toBeUndefined();
+    expect(nearestName('xy', ['pier', 'crossings'])).toBeUndefined();
+  });
+
+  it('counts edits as Levenshtein distance', () => {
+    // Classic example: kitten → sitting takes 3 edits (common textbook example).
+    expect(editDistance('kitten', 'sitting')).toBe(3);
+  });
+});
