@@ -65,3 +65,8 @@ export function parseXml(svg: string): Document {
   if (problems.length) throw new Error(problems.join('\n'));
   return doc as unknown as Document;
 }
+
+/** Runs for a property test, scaled by FC_SCALE for deeper local exploration. */
+export function runs(n: number): number {
+  return Math.round(n * (Number(process.env.FC_SCALE) || 1));
+}

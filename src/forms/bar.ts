@@ -126,7 +126,8 @@ function vertical(c: Common): Parts {
   const showLabels = valueLabelsFit(c, band.step() - 2, 'width');
   // Room for the labels of the longest bars is taken from the plot only where they would not fit.
   const fitted = scaleLinear().domain(probe.domain).range([bottom, top]);
-  const rangeTop = top + (showLabels && hi > 0 && fitted(hi) - labelRoom < top - tickBox / 2 ? labelRoom : 0);
+  // A zero bar's label sits on the positive side, as placed by valueLabel.
+  const rangeTop = top + (showLabels && bars.some((b) => b.value >= 0) && fitted(hi) - labelRoom < top - tickBox / 2 ? labelRoom : 0);
   const rangeBottom = bottom - (showLabels && lo < 0 && fitted(lo) + labelRoom > bottom ? labelRoom : 0);
   const vt = valueTicks(lo, hi, rangeBottom - rangeTop, 'vertical', tick, measure, c.derived.plan.value?.format);
   const y = scaleLinear().domain(vt.domain).range([rangeBottom, rangeTop]);
@@ -219,13 +220,14 @@ function horizontal(c: Common): Parts {
   const keyLabels = fitKeyLabels(c, band);
   const showLabels = valueLabelsFit(c, band.step(), 'height');
   const [lo, hi] = domainOf(bars);
-  const labelRoom = (sign: number) => (showLabels ? Math.max(0, ...bars.filter((b) => Math.sign(b.value) === sign).map((b) => measure.width(c.valueText.get(b)!, label.size, label.weight) + labelGap)) : 0);
+  // Room beyond the bar ends for value labels; a zero bar's label sits on the positive side, as placed by valueLabel.
+  const labelRoom = (positive: boolean) => (showLabels ? Math.max(0, ...bars.filter((b) => (b.value >= 0) === positive).map((b) => measure.width(c.valueText.get(b)!, label.size, label.weight) + labelGap)) : 0);
   const left = c.body.x + keyLabels.width + tickGap;
   const right = c.body.x + c.body.width;
   const probe = valueTicks(lo, hi, right - left, 'horizontal', tick, measure, c.derived.plan.value?.format);
   const halfTick = (i: number) => measure.width(probe.labels[i]!, tick.size, tick.weight) / 2;
-  const rangeLeft = left + Math.max(labelRoom(-1), halfTick(0) - tickGap);
-  const rangeRight = right - Math.max(labelRoom(1), halfTick(probe.labels.length - 1));
+  const rangeLeft = left + Math.max(labelRoom(false), halfTick(0) - tickGap);
+  const rangeRight = right - Math.max(labelRoom(true), halfTick(probe.labels.length - 1));
   const vt = valueTicks(lo, hi, rangeRight - rangeLeft, 'horizontal', tick, measure, c.derived.plan.value?.format);
   const x = scaleLinear().domain(vt.domain).range([rangeLeft, rangeRight]);
   const out: Marks = { nodes: [], texts: [] };

@@ -121,6 +121,16 @@ describe('perceptual contracts on edge cases', () => {
     checkBarContracts(dumpScene(r.scene!), 'v', 'k');
   });
 
+  it('a zero value keeps its label on the canvas, upright and lying (found by the property test)', async () => {
+    const { dumpScene } = await import('../../src/scene/dump.js');
+    for (const size of [{ width: 204, height: 209 }, { width: 720, height: 440 }]) {
+      const lying = await renderRows({ intent: 'compare', keys: 'k', values: 'v', size }, [{ k: 'a'.repeat(80), v: -0.000001 }, { k: 'b', v: 0 }]);
+      checkBarContracts(dumpScene(lying.scene!), 'v', 'k');
+      const upright = await renderRows({ intent: 'compare', keys: 'k', values: 'v', size }, [{ k: 'a', v: -5 }, { k: 'b', v: 0 }]);
+      checkBarContracts(dumpScene(upright.scene!), 'v', 'k');
+    }
+  });
+
   it('an all-negative chart still includes zero', async () => {
     const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v' }, [{ k: 'a', v: -5 }, { k: 'b', v: -3 }]);
     const { dumpScene } = await import('../../src/scene/dump.js');

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { CATALOGUE } from '../../src/diagnostics/catalogue.js';
 import { renderBrief } from '../../src/pipeline/render.js';
-import { env, parseXml } from '../helpers.js';
+import { env, parseXml, runs } from '../helpers.js';
 
 const rows = [{ pier: 'North', n: 5, day: '2026-01-01' }, { pier: 'South', n: -2, day: '2026-01-02' }, { pier: 'East <&>', n: null, day: '2026-01-03' }];
 
@@ -32,6 +32,6 @@ describe('property: every brief renders or fails clearly', () => {
         expect(r.diagnostics.some((d) => d.severity === 'error')).toBe(true);
         expect(r.svg).toBeUndefined();
       }
-    }), { numRuns: 400 });
+    }), { numRuns: runs(400) });
   });
 });

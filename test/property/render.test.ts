@@ -4,7 +4,7 @@ import { readTable } from '../../src/table/load.js';
 import { dumpScene } from '../../src/scene/dump.js';
 import { nodesOf } from '../../src/scene/check.js';
 import type { SceneNode } from '../../src/scene/types.js';
-import { memoryFiles, parseXml, renderRows } from '../helpers.js';
+import { memoryFiles, parseXml, renderRows, runs } from '../helpers.js';
 
 function coordinates(n: SceneNode): number[] {
   switch (n.kind) {
@@ -25,7 +25,7 @@ describe('property: any table renders or fails clearly', () => {
         expect(r.diagnostics.length).toBeGreaterThan(0);
         for (const d of r.diagnostics) expect(d.code).toMatch(/^table\./);
       } else expect(r.value.rowCount).toBeGreaterThan(0);
-    }), { numRuns: 300 });
+    }), { numRuns: runs(300) });
   });
 
   it('any 1–500 rows with finite values give well-formed SVG with every coordinate finite and on the canvas', async () => {
@@ -46,7 +46,7 @@ describe('property: any table renders or fails clearly', () => {
           expect(v).toBeLessThanOrEqual(Math.max(width, height) + 0.5);
         }
       }
-    }), { numRuns: 120 });
+    }), { numRuns: runs(120) });
   });
 
   it('shuffling the input rows does not change a sorted chart', async () => {
@@ -57,6 +57,6 @@ describe('property: any table renders or fails clearly', () => {
       const b = await renderRows({ intent: 'compare', keys: 'k', values: 'v' }, shuffled);
       expect(a.ok).toBe(b.ok);
       if (a.ok) expect(dumpScene(b.scene!)).toEqual(dumpScene(a.scene!));
-    }), { numRuns: 60 });
+    }), { numRuns: runs(60) });
   });
 });
