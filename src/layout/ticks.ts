@@ -11,6 +11,8 @@ const Q = [1, 5, 2, 2.5, 4, 3];
 /** Weights of simplicity, coverage, density and legibility. */
 const W = [0.25, 0.2, 0.5, 0.05] as const;
 const EPS = 2.220446049250313e-16 * 100;
+/** Largest tick count and skip factor searched. */
+const MAX_SEARCH = 50;
 
 /** Floored modulo, as R's `%%` (the sign follows the divisor). */
 function mod(a: number, b: number): number {
@@ -66,12 +68,14 @@ export function extendedLabelling(dmin: number, dmax: number, m: number, onlyLoo
   if (!(dmax - dmin > EPS) || !Number.isFinite(dmin) || !Number.isFinite(dmax) || m < 2) return undefined;
   let best: Labelling | undefined;
   const bestScore = () => best?.score ?? -2;
-  for (let j = 1; j < 1000; j++) {
+  // The reference code loops until its bounds prune; when no labelling qualifies (only-loose
+  // at the limit of float precision) they never do, so the search stops at 50 ticks and j = 50.
+  for (let j = 1; j <= MAX_SEARCH; j++) {
     for (let i = 0; i < Q.length; i++) {
       const q = Q[i]!;
       const sm = simplicityMax(i, j);
       if (W[0] * sm + W[1] + W[2] + W[3] < bestScore()) return best;
-      for (let k = 2; k < 1000; k++) {
+      for (let k = 2; k <= MAX_SEARCH; k++) {
         const dm = densityMax(k, m);
         if (W[0] * sm + W[1] + W[2] * dm + W[3] < bestScore()) break;
         const delta = (dmax - dmin) / (k + 1) / j / q;
@@ -95,16 +99,19 @@ export function extendedLabelling(dmin: number, dmax: number, m: number, onlyLoo
   return best;
 }
 
-/** Removes binary float noise from a tick value: 0.30000000000000004 → 0.3. */
-function clean(n: number): number {
-  const v = Number(n.toPrecision(12));
-  return Object.is(v, -0) ? 0 : v;
-}
-
-/** The tick values of a labelling, as exact-looking numbers. */
-export function ticksOf(l: Labelling): number[] {
+/**
+ * The ticks of a labelling, as exact-looking numbers: each is rounded to two decimals below its
+ * step (0.30000000000000004 → 0.3), which keeps them evenly spaced at any magnitude. `scale`
+ * maps a labelling found on a rescaled range back to data units.
+ */
+export function ticksOf(l: Labelling, scale = 1): number[] {
   const count = Math.round((l.lmax - l.lmin) / l.lstep) + 1;
-  return Array.from({ length: count }, (_, i) => clean(l.lmin + i * l.lstep));
+  const step = l.lstep * scale;
+  const decimals = Math.min(20, Math.max(0, 2 - Math.floor(Math.log10(step))));
+  return Array.from({ length: count }, (_, i) => {
+    const v = Number(((l.lmin + i * l.lstep) * scale).toFixed(decimals));
+    return Object.is(v, -0) ? 0 : v;
+  });
 }
 
 /**
@@ -117,6 +124,13 @@ export function niceTicks(dmin: number, dmax: number, m: number, onlyLoose = fal
   const tiny = (v: number) => (Math.abs(v) < 1e-300 ? 0 : v);
   let lo = tiny(dmin);
   let hi = tiny(dmax);
+  // A span below 1e-10 of its magnitude is one value as far as doubles can label it: the end
+  // farther from zero, so the axis still reaches all the data.
+  if (hi - lo <= 1e-10 * Math.max(Math.abs(lo), Math.abs(hi))) {
+    const v = Math.abs(hi) >= Math.abs(lo) ? hi : lo;
+    lo = v;
+    hi = v;
+  }
   if (!(hi > lo)) {
     if (lo === 0) hi = 1;
     else if (lo > 0) lo = 0;
@@ -124,6 +138,5 @@ export function niceTicks(dmin: number, dmax: number, m: number, onlyLoose = fal
   }
   const scale = 10 ** Math.floor(Math.log10(hi - lo));
   const l = extendedLabelling(lo / scale, hi / scale, Math.max(2, m), onlyLoose);
-  if (!l) return [clean(lo), clean(hi)];
-  return ticksOf(l).map((t) => clean(t * scale));
+  return l ? ticksOf(l, scale) : [lo, hi];
 }

@@ -52,6 +52,13 @@ describe('extended Wilkinson ticks', () => {
     expect(niceTicks(-5e-324, 5e-324, 5, true)).toEqual([0, 0.25, 0.5, 0.75, 1]);
   });
 
+  it('returns at once for a span too narrow for doubles to label (it used to search for minutes)', () => {
+    // Found by the property test: 1e-6 at 1e9 is a relative span of 1e-15.
+    const ticks = niceTicks(1e9, 1e9 + 1e-6, 5, true);
+    expect(ticks[0]).toBe(0);
+    expect(ticks[ticks.length - 1]).toBeGreaterThanOrEqual(1e9);
+  });
+
   it('writes tick values without float noise', () => {
     expect(niceTicks(0, 0.3, 4, true).every((t) => String(t).length < 6)).toBe(true);
   });
@@ -70,6 +77,19 @@ describe('number formats', () => {
 
   it('writes negatives with a true minus sign', () => {
     expect(tickFormatter([-4, 0, 4])(-4)).toBe('\u22124');
+  });
+
+  it('writes micro-scale ticks in exponent form rather than rows of zeros (found by the property test)', () => {
+    const ticks = niceTicks(0, 1e-6, 5, true);
+    const labels = ticks.map(tickFormatter(ticks));
+    expect(new Set(labels).size).toBe(ticks.length);
+    expect(labels[0]).toBe('0');
+    expect(labels[labels.length - 1]).toBe('1e\u22126');
+  });
+
+  it('labels tiny values with significant digits, never as 0.00', () => {
+    expect(valueFormatter([0.000001, 0.0000025])(0.0000025)).toBe('0.0000025');
+    expect(valueFormatter([0.004])(0.004)).toBe('0.004');
   });
 
   it('honours a d3-format specifier from the brief', () => {
