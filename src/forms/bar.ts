@@ -14,7 +14,7 @@ import type { FormContext, FormResult } from './types.js';
 /** A band scale over the bars' labels. */
 type Band = ReturnType<typeof scaleBand<string>>;
 
-/** Longest share of the body width the key labels of horizontal bars may take before they are shortened. */
+/** Longest share of the plot the labels may take: key labels of lying bars (of the body width), value labels (of the plot's length). */
 const MAX_LABEL_SHARE = 0.4;
 
 interface Parts {
@@ -81,7 +81,7 @@ function valueGrid(c: Common, vt: ValueTicks, pos: (v: number) => number, vertic
     const [a, b] = across;
     if (t !== 0) out.nodes.push(vertical ? line(c.id('gridline', text), 'gridline', a, p, b, p, style.lines.grid, style.lines.gridWidth) : line(c.id('gridline', text), 'gridline', p, a, p, b, style.lines.grid, style.lines.gridWidth));
     const place = vertical ? { x: a - gap, top: p - tickBox / 2, anchor: 'end' as const } : { x: p, top: b + gap, anchor: 'middle' as const };
-    out.texts.push(textNode(measure, { id: c.id('tick-value', text), role: 'tick', text, style: tick, ...place }));
+    if (vt.shown[i]) out.texts.push(textNode(measure, { id: c.id('tick-value', text), role: 'tick', text, style: tick, ...place }));
   });
 }
 
@@ -123,12 +123,15 @@ function vertical(c: Common): Parts {
   const left = c.body.x + Math.max(...probe.labels.map((l) => measure.width(l, tick.size, tick.weight))) + tickGap;
   const right = c.body.x + c.body.width;
   const band = scaleBand<string>().domain(bars.map((b) => b.label)).range([left, right]).paddingInner(style.spacing.bandPadding).paddingOuter(style.spacing.bandPadding / 2);
-  const showLabels = valueLabelsFit(c, band.step() - 2, 'width');
-  // Room for the labels of the longest bars is taken from the plot only where they would not fit.
+  // Room for the labels of the longest bars is taken from the plot only where they would not fit;
+  // a zero bar's label sits on the positive side, as placed by valueLabel.
   const fitted = scaleLinear().domain(probe.domain).range([bottom, top]);
-  // A zero bar's label sits on the positive side, as placed by valueLabel.
-  const rangeTop = top + (showLabels && bars.some((b) => b.value >= 0) && fitted(hi) - labelRoom < top - tickBox / 2 ? labelRoom : 0);
-  const rangeBottom = bottom - (showLabels && lo < 0 && fitted(lo) + labelRoom > bottom ? labelRoom : 0);
+  const roomTop = bars.some((b) => b.value >= 0) && fitted(hi) - labelRoom < top - tickBox / 2 ? labelRoom : 0;
+  const roomBottom = lo < 0 && fitted(lo) + labelRoom > bottom ? labelRoom : 0;
+  // Value labels need their band's width, and may take at most MAX_LABEL_SHARE of the plot's height.
+  const showLabels = valueLabelsFit(c, band.step() - 2, 'width') && roomTop + roomBottom <= (bottom - top) * MAX_LABEL_SHARE;
+  const rangeTop = top + (showLabels ? roomTop : 0);
+  const rangeBottom = bottom - (showLabels ? roomBottom : 0);
   const vt = valueTicks(lo, hi, rangeBottom - rangeTop, 'vertical', tick, measure, c.derived.plan.value?.format);
   const y = scaleLinear().domain(vt.domain).range([rangeBottom, rangeTop]);
   const out: Marks = { nodes: [], texts: [] };
@@ -218,12 +221,14 @@ function horizontal(c: Common): Parts {
   const bottom = c.body.y + c.body.height - (tickGap + lineHeight(tick, factor) + tickGap + lineHeight(titleStyle, factor));
   const band = scaleBand<string>().domain(bars.map((b) => b.label)).range([top, bottom]).paddingInner(style.spacing.bandPadding).paddingOuter(style.spacing.bandPadding / 2);
   const keyLabels = fitKeyLabels(c, band);
-  const showLabels = valueLabelsFit(c, band.step(), 'height');
   const [lo, hi] = domainOf(bars);
   // Room beyond the bar ends for value labels; a zero bar's label sits on the positive side, as placed by valueLabel.
-  const labelRoom = (positive: boolean) => (showLabels ? Math.max(0, ...bars.filter((b) => (b.value >= 0) === positive).map((b) => measure.width(c.valueText.get(b)!, label.size, label.weight) + labelGap)) : 0);
+  const room = (positive: boolean) => Math.max(0, ...bars.filter((b) => (b.value >= 0) === positive).map((b) => measure.width(c.valueText.get(b)!, label.size, label.weight) + labelGap));
   const left = c.body.x + keyLabels.width + tickGap;
   const right = c.body.x + c.body.width;
+  // Value labels need the band's height, and may take at most MAX_LABEL_SHARE of the plot's width.
+  const showLabels = valueLabelsFit(c, band.step(), 'height') && room(true) + room(false) <= (right - left) * MAX_LABEL_SHARE;
+  const labelRoom = (positive: boolean) => (showLabels ? room(positive) : 0);
   const probe = valueTicks(lo, hi, right - left, 'horizontal', tick, measure, c.derived.plan.value?.format);
   const halfTick = (i: number) => measure.width(probe.labels[i]!, tick.size, tick.weight) / 2;
   const rangeLeft = left + Math.max(labelRoom(false), halfTick(0) - tickGap);

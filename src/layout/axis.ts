@@ -21,30 +21,48 @@ export function axisTitle(field: Field | undefined, fallback: string): string {
 export interface ValueTicks {
   ticks: number[];
   labels: string[];
+  /** Which tick labels are printed; in a cramped plot some ticks keep only their gridline. */
+  shown: boolean[];
   domain: [number, number];
+}
+
+/** Extent of each label along the axis direction: its width lying, its box height upright. */
+function extents(labels: string[], direction: 'vertical' | 'horizontal', style: TextStyle, measure: TextMeasurer): number[] {
+  const height = measure.ascent(style.size, style.weight) + measure.descent(style.size, style.weight);
+  return labels.map((l) => (direction === 'horizontal' ? measure.width(l, style.size, style.weight) : height));
+}
+
+/**
+ * Which labels to print so no two come closer than half the font size: the tick farthest from
+ * zero first, then zero, then the others in order, each kept only if it clears those kept.
+ */
+function labelsThatFit(ticks: number[], sizes: number[], length: number, gap: number): boolean[] {
+  const spacing = length / Math.max(1, ticks.length - 1);
+  const far = ticks.reduce((best, t, i) => (Math.abs(t) > Math.abs(ticks[best]!) ? i : best), 0);
+  const order = [far, ...ticks.map((_, i) => i).filter((i) => i !== far).sort((a, b) => Number(ticks[b] === 0) - Number(ticks[a] === 0) || a - b)];
+  const shown = ticks.map(() => false);
+  for (const i of order) {
+    const clear = shown.every((on, j) => !on || Math.abs(i - j) * spacing >= (sizes[i]! + sizes[j]!) / 2 + gap);
+    if (clear) shown[i] = true;
+  }
+  return shown;
 }
 
 /**
  * Ticks for a value axis of `length` px that covers [lo, hi] (and zero, for bars). The domain
- * is fitted to the outer ticks. On a horizontal axis, fewer ticks are tried until no two
- * labels overlap.
+ * is fitted to the outer ticks. Fewer ticks are tried until no two labels overlap; where even
+ * two do not fit, only the labels that clear each other are printed.
  */
 export function valueTicks(lo: number, hi: number, length: number, direction: 'vertical' | 'horizontal', style: TextStyle, measure: TextMeasurer, specifier?: string): ValueTicks {
-  let m = Math.max(2, Math.min(10, Math.round(length / PX_PER_TICK[direction]) + 1));
-  for (;;) {
+  const gap = style.size * 0.5;
+  // A non-finite length (a defect upstream) must not leave m as NaN, which never reaches 2.
+  const wanted = Number.isFinite(length) ? Math.round(length / PX_PER_TICK[direction]) + 1 : 2;
+  for (let m = Math.max(2, Math.min(10, wanted)); ; m--) {
     const ticks = niceTicks(lo, hi, m, true);
-    const fmt = tickFormatter(ticks, specifier);
-    const labels = ticks.map(fmt);
-    const domain: [number, number] = [ticks[0]!, ticks[ticks.length - 1]!];
-    if (direction === 'vertical' || m <= 2 || !overlaps(labels, length, style, measure)) return { ticks, labels, domain };
-    m--;
+    const labels = ticks.map(tickFormatter(ticks, specifier));
+    const shown = labelsThatFit(ticks, extents(labels, direction, style, measure), length, gap);
+    if (shown.every(Boolean) || m <= 2) return { ticks, labels, shown, domain: [ticks[0]!, ticks[ticks.length - 1]!] };
   }
-}
-
-function overlaps(labels: string[], length: number, style: TextStyle, measure: TextMeasurer): boolean {
-  const spacing = length / Math.max(1, labels.length - 1);
-  const widths = labels.map((l) => measure.width(l, style.size, style.weight));
-  return widths.some((w, i) => i > 0 && (w + widths[i - 1]!) / 2 + style.size * 0.5 > spacing);
 }
 
 /** Every k-th label fits: the smallest k such that the widest label plus a gap fits k bands. */

@@ -46,11 +46,14 @@ export function wrapText(measure: TextMeasurer, text: string, style: TextStyle, 
       if (fits(candidate)) { line = candidate; continue; }
       if (line) lines.push(line);
       line = word;
-      while (!fits(line) && line.length > 1) {
-        let cut = line.length - 1;
-        while (cut > 1 && !fits(line.slice(0, cut))) cut--;
-        lines.push(line.slice(0, cut));
-        line = line.slice(cut);
+      // Break by code points, so a character outside the BMP is never split in two.
+      let chars = [...line];
+      while (!fits(line) && chars.length > 1) {
+        let cut = chars.length - 1;
+        while (cut > 1 && !fits(chars.slice(0, cut).join(''))) cut--;
+        lines.push(chars.slice(0, cut).join(''));
+        chars = chars.slice(cut);
+        line = chars.join('');
       }
     }
     lines.push(line);

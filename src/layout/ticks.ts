@@ -106,10 +106,12 @@ export function extendedLabelling(dmin: number, dmax: number, m: number, onlyLoo
  */
 export function ticksOf(l: Labelling, scale = 1): number[] {
   const count = Math.round((l.lmax - l.lmin) / l.lstep) + 1;
-  const step = l.lstep * scale;
-  const decimals = Math.min(20, Math.max(0, 2 - Math.floor(Math.log10(step))));
+  const exp = Math.floor(Math.log10(l.lstep * scale)) - 2;
+  // An integer divided by a power of ten is the double nearest that decimal, so it prints as
+  // written (2.07, not 2.0700000000000003); toFixed would stop at 20 decimals.
+  const round = exp < 0 ? (v: number) => Math.round(v * 10 ** -exp) / 10 ** -exp : (v: number) => Math.round(v / 10 ** exp) * 10 ** exp;
   return Array.from({ length: count }, (_, i) => {
-    const v = Number(((l.lmin + i * l.lstep) * scale).toFixed(decimals));
+    const v = round((l.lmin + i * l.lstep) * scale);
     return Object.is(v, -0) ? 0 : v;
   });
 }

@@ -59,6 +59,13 @@ describe('extended Wilkinson ticks', () => {
     expect(ticks[ticks.length - 1]).toBeGreaterThanOrEqual(1e9);
   });
 
+  it('labels values near the smallest doubles, with ticks that stay apart (found by the property test)', () => {
+    const ticks = niceTicks(0, 1e-300, 5, true);
+    expect(ticks[0]).toBe(0);
+    expect(new Set(ticks).size).toBe(ticks.length);
+    expect(ticks[ticks.length - 1]).toBeGreaterThanOrEqual(1e-300);
+  });
+
   it('writes tick values without float noise', () => {
     expect(niceTicks(0, 0.3, 4, true).every((t) => String(t).length < 6)).toBe(true);
   });

@@ -1,9 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { isMissingText } from '../../src/table/cells.js';
 import { readTable } from '../../src/table/load.js';
 import { dumpScene } from '../../src/scene/dump.js';
 import { nodesOf } from '../../src/scene/check.js';
 import type { SceneNode } from '../../src/scene/types.js';
+import { checkBarContracts } from '../contracts/bar-contracts.js';
 import { memoryFiles, parseXml, renderRows, runs } from '../helpers.js';
 
 function coordinates(n: SceneNode): number[] {
@@ -33,12 +35,17 @@ describe('property: any table renders or fails clearly', () => {
     await fc.assert(fc.asyncProperty(rows, fc.integer({ min: 160, max: 1600 }), fc.integer({ min: 120, max: 1200 }), async (data, width, height) => {
       const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v', title: 'T <&>', size: { width, height } }, data);
       if (!r.ok) {
-        // The only acceptable refusal is a frame too small for its text, and it must say so.
-        expect(r.diagnostics.filter((d) => d.severity === 'error').map((d) => d.code)).toEqual(['layout.frame-too-small']);
+        // The acceptable refusals: a frame too small for its text, or no row with a key at all
+        // (keys such as "" or "NA" read as missing); each must say so.
+        const errors = r.diagnostics.filter((d) => d.severity === 'error').map((d) => d.code);
+        if (data.every((row) => isMissingText(row.k))) expect(errors).toEqual(['derive.no-rows']);
+        else expect(errors).toEqual(['layout.frame-too-small']);
         return;
       }
       parseXml(r.svg!);
       expect(r.svg).not.toMatch(/NaN|Infinity/);
+      // Every perceptual contract holds: lengths ∝ values, one zero baseline, titles, no overlaps.
+      checkBarContracts(dumpScene(r.scene!), 'v', 'k');
       for (const node of nodesOf(r.scene!.root)) {
         for (const v of coordinates(node)) {
           expect(Number.isFinite(v)).toBe(true);

@@ -1,0 +1,64 @@
+import { expect } from 'vitest';
+import type { DumpText, SceneDump } from '../../src/scene/dump.js';
+
+/** The value axis of a bar chart and a function from value to px along it. */
+function valueAxis(dump: SceneDump) {
+  const axis = dump.axes[0]!;
+  const [d0, d1] = axis.domain as number[];
+  const [r0, r1] = axis.range;
+  return { axis, px: (v: number) => r0! + ((v - d0!) * (r1! - r0!)) / (d1! - d0!), perUnit: Math.abs(r1! - r0!) / (d1! - d0!) };
+}
+
+export function bars(dump: SceneDump) {
+  return dump.marks.filter((m) => m.role === 'bar');
+}
+
+function overlap(a: DumpText, b: DumpText): boolean {
+  const eps = 0.01;
+  return a.x < b.x + b.width - eps && b.x < a.x + a.width - eps && a.y < b.y + b.height - eps && b.y < a.y + a.height - eps;
+}
+
+/** Perceptual contracts every bar chart must keep, asserted on its scene. */
+export function checkBarContracts(dump: SceneDump, valueName: string, keyName: string) {
+  const vertical = dump.axes[0]!.orient === 'left';
+  const { px, perUnit } = valueAxis(dump);
+  const zero = px(0);
+  for (const bar of bars(dump)) {
+    const value = bar.datum![valueName] as number;
+    const length = vertical ? bar.height! : bar.width!;
+    // Bar length ∝ value: the same px per unit for every bar, within 0.5 px.
+    expect(Math.abs(length - Math.abs(value) * perUnit)).toBeLessThanOrEqual(0.5);
+    // One baseline: every bar starts at the zero of the shared scale.
+    const start = vertical ? (value >= 0 ? bar.y! + bar.height! : bar.y!) : (value >= 0 ? bar.x! : bar.x! + bar.width!);
+    expect(Math.abs(start - zero)).toBeLessThanOrEqual(0.5);
+  }
+  // The value axis includes zero.
+  const [d0, d1] = dump.axes[0]!.domain as number[];
+  expect(d0).toBeLessThanOrEqual(0);
+  expect(d1).toBeGreaterThanOrEqual(0);
+  // A zero line is drawn where the bars start.
+  expect(dump.marks.filter((m) => m.role === 'zero-line')).toHaveLength(1);
+  // Every axis has a non-empty title, and names its field.
+  for (const a of dump.axes) expect(a.title.trim()).not.toBe('');
+  expect(dump.axes.map((a) => a.field)).toEqual([valueName, keyName]);
+  // No text outside the canvas, and no two texts overlap.
+  for (const t of dump.texts) {
+    expect(t.x).toBeGreaterThanOrEqual(0);
+    expect(t.y).toBeGreaterThanOrEqual(0);
+    expect(t.x + t.width).toBeLessThanOrEqual(dump.width);
+    expect(t.y + t.height).toBeLessThanOrEqual(dump.height);
+  }
+  for (let i = 0; i < dump.texts.length; i++) {
+    for (let j = i + 1; j < dump.texts.length; j++) {
+      const [a, b] = [dump.texts[i]!, dump.texts[j]!];
+      if (overlap(a, b)) throw new Error(`texts overlap: ${JSON.stringify(a.text)} (${a.role}) and ${JSON.stringify(b.text)} (${b.role})`);
+    }
+  }
+  // Every mark lies inside the canvas.
+  for (const m of dump.marks.filter((x) => x.kind === 'rect')) {
+    expect(m.x!).toBeGreaterThanOrEqual(0);
+    expect(m.x! + m.width!).toBeLessThanOrEqual(dump.width + 1e-6);
+    expect(m.y! + m.height!).toBeLessThanOrEqual(dump.height + 1e-6);
+  }
+}
+
