@@ -70,3 +70,9 @@ export function parseXml(svg: string): Document {
 export function runs(n: number): number {
   return Math.round(n * (Number(process.env.FC_SCALE) || 1));
 }
+
+/** Asserts no attribute of the SVG holds NaN, Infinity or undefined (text content may: a pier can be named "Infinity"). */
+export function expectFiniteAttributes(svg: string): void {
+  const bad = svg.match(/\s[a-z-]+="[^"]*\b(NaN|Infinity|undefined)\b[^"]*"/);
+  if (bad) throw new Error(`non-finite attribute in SVG: ${bad[0]}`);
+}
