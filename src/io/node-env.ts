@@ -70,6 +70,7 @@ export function createNodeEnv(root: string = packageRoot()): RenderEnv {
     },
     outlines() {
       outlines ??= {
+        family: faces.regular.family,
         outlines: { regular: readJson<GlyphOutlines>(join(fonts, 'source-sans-3-regular.outlines.json')), semibold: readJson<GlyphOutlines>(join(fonts, 'source-sans-3-semibold.outlines.json')) },
         notdef: { regular: faces.regular.notdefOutline, semibold: faces.semibold.notdefOutline },
       };

@@ -6,6 +6,8 @@ import { fmt, fmtPath } from './fmt.js';
 
 /** Glyph outlines for each weight, and the .notdef outline drawn for characters the font lacks. */
 export interface OutlineSet {
+  /** The font family the outlines come from; part of the id prefix, since glyph ids name only weight and code point. */
+  family: string;
   outlines: Record<Weight, GlyphOutlines>;
   notdef: Record<Weight, string>;
 }

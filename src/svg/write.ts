@@ -46,24 +46,23 @@ function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined)
   }
 }
 
-/** Stands for the id prefix while the body is written; replaced once the body's hash is known. */
-const PREFIX_SLOT = '\u0000';
-
 /**
  * The svg stage: scene → SVG text. Deterministic: numbers through `fmt`, nodes in scene order,
- * ids prefixed with a hash of the chart's own content, so two charts inlined in one page never
- * clash and the same chart always gets the same ids.
+ * ids prefixed with a hash of the chart's title, description and font, so charts inlined in one
+ * page never point at each other's different content and the same chart always gets the same ids.
  */
 export function writeSvg(scene: Scene, mode: TextMode): string {
-  const defs = mode.kind === 'outlines' ? new GlyphDefs(PREFIX_SLOT, mode.set) : undefined;
-  const body = writeNode(scene.root, mode, defs);
   const w = fmt(scene.width);
   const h = fmt(scene.height);
   const title = escapeXml(scene.title);
   const desc = escapeXml(scene.description);
-  const prefix = `cw${contentHash(`${w} ${h} ${scene.background}\n${title}\n${desc}\n${body}`)}`;
-  // Quoted: an unquoted family name may not contain a bare number ("Source Sans 3"), and CSS
-  // drops the whole declaration if it does.
+  // The ids that elements refer to are the title, the description and (with outlines) glyphs,
+  // whose ids name their weight and code point. Hashing those texts and the font family means
+  // two charts whose prefixes collide point at identical content.
+  const family = mode.kind === 'live' ? mode.family : mode.set.family;
+  const prefix = `cw${contentHash(`${title}\n${desc}\n${family}`)}`;
+  const defs = mode.kind === 'outlines' ? new GlyphDefs(prefix, mode.set) : undefined;
+  const body = writeNode(scene.root, mode, defs);
   const font = mode.kind === 'live' ? ` font-family="'${mode.family.replace(/['"<>&]/g, '')}', sans-serif"` : '';
   const parts = [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}" viewBox="0 0 ${w} ${h}" role="img" aria-labelledby="${prefix}-title ${prefix}-desc"${font}>`,
@@ -74,5 +73,5 @@ export function writeSvg(scene: Scene, mode: TextMode): string {
     body,
     '</svg>',
   ].filter((part) => part !== '').join('\n');
-  return `${defs ? parts.replaceAll(PREFIX_SLOT, prefix) : parts}\n`;
+  return `${parts}\n`;
 }

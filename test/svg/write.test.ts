@@ -74,6 +74,16 @@ describe('SVG writer', () => {
     expect(again.svg).toBe(a.svg);
   });
 
+  it('derives the prefix from title, description and font, the content its ids point at', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v' }, rows);
+    const { writeSvg } = await import('../../src/svg/write.js');
+    const prefix = (svg: string) => /aria-labelledby="(cw[0-9a-f]{8})-title/.exec(svg)![1];
+    const a = writeSvg(r.scene!, { kind: 'live', family: 'Source Sans 3' });
+    expect(prefix(writeSvg({ ...r.scene!, background: '#000000' }, { kind: 'live', family: 'Source Sans 3' }))).toBe(prefix(a));
+    expect(prefix(writeSvg(r.scene!, { kind: 'live', family: 'Another Sans' }))).not.toBe(prefix(a));
+    expect(prefix(writeSvg({ ...r.scene!, title: 'Other' }, { kind: 'live', family: 'Source Sans 3' }))).not.toBe(prefix(a));
+  });
+
   it('draws text as glyph outlines on the raster path, each glyph defined once', async () => {
     const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v', title: 'Aaaa' }, rows);
     const svg = outlineSvg(r.scene!, env);
