@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { isMissingText } from '../../src/table/cells.js';
 import { readTable } from '../../src/table/load.js';
 import { dumpScene } from '../../src/scene/dump.js';
-import { nodesOf } from '../../src/scene/check.js';
+import { nodesOf } from '../../src/scene/walk.js';
 import type { SceneNode } from '../../src/scene/types.js';
 import { checkBarContracts } from '../contracts/bar-contracts.js';
 import { expectFiniteAttributes, memoryFiles, parseXml, renderRows, runs } from '../helpers.js';
