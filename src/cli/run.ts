@@ -2,7 +2,7 @@ import { Command, CommanderError, InvalidArgumentError } from 'commander';
 import { readFileSync, readdirSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
 import { BRIEF_SCHEMA } from '../brief/schema.js';
-import { hasErrors, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { diagnostic, hasErrors, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { createNodeEnv } from '../io/node-env.js';
 import { packageRoot } from '../io/package-root.js';
 import type { RenderEnv } from '../pipeline/env.js';
@@ -24,10 +24,10 @@ function relativeFiles(diagnostics: Diagnostic[], cwd: string): Diagnostic[] {
   return diagnostics.map((d) => (d.file ? { ...d, file: relative(cwd, d.file) || d.file } : d));
 }
 
-/** Prints diagnostics for people on stderr; info notes only when asked. */
-function report(io: CliIo, diagnostics: Diagnostic[], withInfo: boolean): void {
+/** Prints errors and warnings for people on stderr; info notes are for `explain`. */
+function report(io: CliIo, diagnostics: Diagnostic[]): void {
   const colour = colourAllowed(io.isTTY, io.env);
-  for (const d of diagnostics) if (withInfo || d.severity !== 'info') io.stderr(`${formatDiagnostic(d, colour)}\n`);
+  for (const d of diagnostics) if (d.severity !== 'info') io.stderr(`${formatDiagnostic(d, colour)}\n`);
 }
 
 function batchExit(reports: BriefReport[]): number {
@@ -60,13 +60,18 @@ async function runRender(files: string[], flags: RenderFlags, io: CliIo, env: Re
   const reports = await renderBatch(files.map((f) => resolve(io.cwd, f)), env, batchOptions(flags, io, outDir), io.cwd, bar.step);
   bar.end();
   for (const r of reports) {
-    report(io, relativeFiles(r.diagnostics, io.cwd), false);
+    report(io, relativeFiles(r.diagnostics, io.cwd));
     for (const w of r.written) io.stdout(`${relative(io.cwd, w)}\n`);
     if (r.timings) io.stderr(`${relative(io.cwd, r.brief)}: ${r.timings.map((t) => `${t.stage} ${t.ms.toFixed(2)} ms`).join(', ')}\n`);
   }
   if (flags.report) {
     const path = resolve(io.cwd, flags.report);
-    await writeAtomic(path, `${JSON.stringify(runReport(reports, chartwrightVersion(), io.cwd), null, 2)}\n`, String(io.pid));
+    try {
+      await writeAtomic(path, `${JSON.stringify(runReport(reports, chartwrightVersion(), io.cwd), null, 2)}\n`, String(io.pid));
+    } catch (e) {
+      report(io, [diagnostic('output.write-failed', `could not write the run report: ${(e as Error).message}`, { file: flags.report, hint: 'check that the report folder is writable' })]);
+      return EXIT.FAILED;
+    }
   }
   return batchExit(reports);
 }
@@ -88,7 +93,7 @@ async function runCheck(files: string[], flags: { strict?: boolean; lenient?: bo
   let failed = false;
   for (const file of files) {
     const result = await renderFile(resolve(io.cwd, file), env, { strict: !!flags.strict, lenient: !!flags.lenient, debug: false });
-    report(io, relativeFiles(result.diagnostics, io.cwd), false);
+    report(io, relativeFiles(result.diagnostics, io.cwd));
     if (!result.ok) failed = true;
     io.stdout(`${result.ok ? 'ok' : 'FAILED'} ${file}\n`);
   }

@@ -133,6 +133,14 @@ describe('chartwright render', () => {
     expect(run.chartwright).toMatch(/^\d+\.\d+\.\d+$/);
   });
 
+  it('fails cleanly when the run report cannot be written', async () => {
+    const dir = workspace();
+    writeFileSync(join(dir, 'blocked'), 'a file where a folder should be');
+    const t = io(dir);
+    expect(await runCli(['render', 'piers.brief.yaml', '--report', 'blocked/run.json'], t.io)).toBe(EXIT.FAILED);
+    expect(t.err()).toContain('error[output.write-failed] could not write the run report');
+  });
+
   it('shows progress for a batch on a terminal only, and never in CI', async () => {
     const dir = workspace();
     const tty = io(dir);
