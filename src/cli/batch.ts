@@ -5,7 +5,8 @@ import type { RenderEnv } from '../pipeline/env.js';
 import { outlineSvg, renderBrief, type RenderResult, type StageTiming } from '../pipeline/render.js';
 import { rasterize } from '../raster/rasterize.js';
 import { dumpScene } from '../scene/dump.js';
-import { plannedOutputs, writeAtomic } from './outputs.js';
+import type { Scene } from '../scene/types.js';
+import { plannedOutputs, writeAtomic, type PlannedFile } from './outputs.js';
 
 /** Options shared by render and demo. */
 export interface BatchOptions {
@@ -61,6 +62,24 @@ function sceneTarget(scene: string | undefined, brief: string, many: boolean, cw
 /** Yields to the event loop so resvg's native memory is reclaimed between renders (a tight loop grows it fast). */
 const breathe = () => new Promise<void>((r) => setImmediate(r));
 
+/** The bytes of each planned file; a PNG is drawn from the outline SVG, written once and reused. */
+async function produceFiles(result: RenderResult & { svg: string; scene: Scene }, planned: PlannedFile[], env: RenderEnv, opts: BatchOptions, report: BriefReport): Promise<{ path: string; data: string | Buffer }[]> {
+  let outlines: string | undefined;
+  const outlined = () => (outlines ??= outlineSvg(result.scene, env));
+  const files: { path: string; data: string | Buffer }[] = [];
+  for (const p of planned) {
+    if (p.kind === 'svg') {
+      files.push({ path: p.path, data: opts.outlineText ? outlined() : result.svg });
+      continue;
+    }
+    const started = opts.clock?.();
+    files.push({ path: p.path, data: rasterize(outlined(), { scale: opts.scale, fontFiles: [] }) });
+    if (started !== undefined) report.timings?.push({ stage: 'png', ms: opts.clock!() - started });
+    await breathe();
+  }
+  return files;
+}
+
 /**
  * Renders briefs one after another. Each brief's files are all produced in memory first and
  * written only if it succeeded, atomically; one bad brief never stops the others.
@@ -72,17 +91,10 @@ export async function renderBatch(files: string[], env: RenderEnv, opts: BatchOp
     const result = await renderFile(file, env, opts);
     const report: BriefReport = { brief: file, ok: result.ok, written: [], diagnostics: result.diagnostics, ...(result.timings ? { timings: result.timings } : {}) };
     reports.push(report);
-    if (!result.ok || !result.svg || !result.scene || !result.brief) continue;
-    const planned = plannedOutputs(file, result.brief.output, opts.outDir, opts.png);
-    const contents: { path: string; data: string | Buffer }[] = [];
+    if (!result.ok || result.svg === undefined || !result.scene || !result.brief) continue;
+    let contents: { path: string; data: string | Buffer }[];
     try {
-      for (const p of planned) {
-        const started = opts.clock?.();
-        const svg = p.kind === 'svg' && opts.outlineText ? outlineSvg(result.scene, env) : result.svg;
-        contents.push({ path: p.path, data: p.kind === 'svg' ? svg : rasterize(outlineSvg(result.scene, env), { scale: opts.scale, fontFiles: [] }) });
-        if (p.kind === 'png' && started !== undefined) report.timings?.push({ stage: 'png', ms: opts.clock!() - started });
-        if (p.kind === 'png') await breathe();
-      }
+      contents = await produceFiles({ ...result, svg: result.svg, scene: result.scene }, plannedOutputs(file, result.brief.output, opts.outDir, opts.png), env, opts, report);
     } catch (e) {
       report.ok = false;
       report.diagnostics.push(diagnostic('output.raster-failed', `could not draw the PNG: ${(e as Error).message}`, { file, hint: 'rerun with --debug and report it with the brief and data' }));
