@@ -1,5 +1,5 @@
 import { Command, CommanderError, InvalidArgumentError } from 'commander';
-import { readFileSync, readdirSync } from 'node:fs';
+import { readFileSync, readdirSync, statSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
 import { BRIEF_SCHEMA } from '../brief/schema.js';
 import { diagnostic, hasErrors, type Diagnostic } from '../diagnostics/diagnostic.js';
@@ -34,6 +34,20 @@ function batchExit(reports: BriefReport[]): number {
   return reports.every((r) => r.ok) ? EXIT.OK : EXIT.FAILED;
 }
 
+/**
+ * Brief paths from the command line: a folder stands for the briefs in it (.yaml and .yml
+ * files, and .brief.json; plain .json is left out, as it may be data), sorted by name.
+ */
+function expandBriefs(paths: string[], cwd: string): string[] {
+  return paths.flatMap((p) => {
+    const full = resolve(cwd, p);
+    let isDir = false;
+    try { isDir = statSync(full).isDirectory(); } catch { /* a missing path is reported as brief.not-found */ }
+    if (!isDir) return [full];
+    return readdirSync(full).filter((f) => /\.ya?ml$|\.brief\.json$/.test(f)).sort().map((f) => join(full, f));
+  });
+}
+
 function demoBriefs(root: string): string[] {
   const dir = join(root, 'demo-data');
   return readdirSync(dir).filter((f) => /\.brief\.(ya?ml|json)$/.test(f)).sort().map((f) => join(dir, f));
@@ -57,7 +71,7 @@ function progress(io: CliIo, count: number): { step: (done: number, total: numbe
 async function runRender(files: string[], flags: RenderFlags, io: CliIo, env: RenderEnv): Promise<number> {
   const outDir = flags.outDir ? resolve(io.cwd, flags.outDir) : undefined;
   const bar = progress(io, files.length);
-  const reports = await renderBatch(files.map((f) => resolve(io.cwd, f)), env, batchOptions(flags, io, outDir), io.cwd, bar.step);
+  const reports = await renderBatch(files, env, batchOptions(flags, io, outDir), io.cwd, bar.step);
   bar.end();
   for (const r of reports) {
     report(io, relativeFiles(r.diagnostics, io.cwd));
@@ -92,10 +106,10 @@ async function runExplain(file: string, flags: { json?: boolean; lenient?: boole
 async function runCheck(files: string[], flags: { strict?: boolean; lenient?: boolean }, io: CliIo, env: RenderEnv): Promise<number> {
   let failed = false;
   for (const file of files) {
-    const result = await renderFile(resolve(io.cwd, file), env, { strict: !!flags.strict, lenient: !!flags.lenient, debug: false });
+    const result = await renderFile(file, env, { strict: !!flags.strict, lenient: !!flags.lenient, debug: false });
     report(io, relativeFiles(result.diagnostics, io.cwd));
     if (!result.ok) failed = true;
-    io.stdout(`${result.ok ? 'ok' : 'FAILED'} ${file}\n`);
+    io.stdout(`${result.ok ? 'ok' : 'FAILED'} ${relative(io.cwd, file) || file}\n`);
   }
   return failed ? EXIT.FAILED : EXIT.OK;
 }
@@ -123,16 +137,16 @@ function program(io: CliIo, env: () => RenderEnv, exit: { code: number }): Comma
     .option('--debug', 'show stack traces of unexpected failures')
     .option('--timings', 'print how long each stage took, per brief, on stderr')
     .option('--report <file>', 'write a JSON run report: every brief, its outputs and diagnostics');
-  withRenderFlags(cli.command('render').description('render briefs to SVG (and PNG)').argument('<brief...>', 'brief files (.yaml, .yml, .json)'))
-    .action(async (files: string[], flags: RenderFlags) => { exit.code = await runRender(files, flags, io, env()); });
+  withRenderFlags(cli.command('render').description('render briefs to SVG (and PNG)').argument('<brief...>', 'brief files (.yaml, .yml, .json), or folders of them'))
+    .action(async (files: string[], flags: RenderFlags) => { exit.code = await runRender(expandBriefs(files, io.cwd), flags, io, env()); });
   cli.command('explain').description('say which chart a brief gets and why').argument('<brief>', 'a brief file')
     .option('--json', 'print JSON: { form, rationale, diagnostics }')
     .option('--lenient', 'explain the lenient render')
     .action(async (file: string, flags: { json?: boolean; lenient?: boolean }) => { exit.code = await runExplain(file, flags, io, env()); });
-  cli.command('check').description('validate and lint briefs; non-zero exit on errors').argument('<brief...>', 'brief files')
+  cli.command('check').description('validate and lint briefs; non-zero exit on errors').argument('<brief...>', 'brief files, or folders of them')
     .option('--strict', 'fail on warnings too')
     .option('--lenient', 'check the lenient render')
-    .action(async (files: string[], flags: { strict?: boolean; lenient?: boolean }) => { exit.code = await runCheck(files, flags, io, env()); });
+    .action(async (files: string[], flags: { strict?: boolean; lenient?: boolean }) => { exit.code = await runCheck(expandBriefs(files, io.cwd), flags, io, env()); });
   withRenderFlags(cli.command('demo').description('render the demo gallery from demo-data/ as SVG and PNG').argument('[dir]', 'output folder', 'gallery'))
     .action(async (dir: string, flags: RenderFlags) => {
       exit.code = await runRender(demoBriefs(packageRoot()), { ...flags, png: true, outDir: flags.outDir ?? dir }, io, env());

@@ -1,4 +1,4 @@
-import { existsSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { EXIT } from '../../src/cli/exit-codes.js';
@@ -76,6 +76,20 @@ describe('chartwright render', () => {
     expect(await runCli(['render', 'typo.yaml', 'piers.brief.yaml', 'missing.yaml'], t.io)).toBe(EXIT.FAILED);
     expect(existsSync(join(dir, 'piers.svg'))).toBe(true);
     expect(t.err()).toContain('missing.yaml: error[brief.not-found]');
+  });
+
+  it('renders every brief in a folder, leaving plain JSON (which may be data) alone', async () => {
+    const dir = workspace();
+    mkdirSync(join(dir, 'briefs'));
+    writeFileSync(join(dir, 'briefs', 'a.yaml'), 'data: ../piers.csv\nintent: compare\nkeys: pier\nvalues: crossings\nfields: { crossings: { unit: crossings } }\n');
+    writeFileSync(join(dir, 'briefs', 'b.brief.json'), JSON.stringify({ data: '../piers.csv', intent: 'compare', keys: 'pier', values: 'crossings', fields: { crossings: { unit: 'crossings' } } }));
+    writeFileSync(join(dir, 'briefs', 'rows.json'), '[{"pier": "North", "crossings": 1}]');
+    const t = io(dir);
+    expect(await runCli(['render', 'briefs'], t.io)).toBe(EXIT.OK);
+    expect(t.out()).toBe('briefs/a.svg\nbriefs/b.svg\n');
+    const c = io(dir);
+    expect(await runCli(['check', 'briefs'], c.io)).toBe(EXIT.OK);
+    expect(c.out()).toBe('ok briefs/a.yaml\nok briefs/b.brief.json\n');
   });
 
   it('dumps the scene contract to a file for one brief', async () => {
