@@ -64,7 +64,7 @@ describe('chartwright render', () => {
     const dir = workspace();
     const t = io(dir);
     expect(await runCli(['render', 'typo.yaml'], t.io)).toBe(EXIT.FAILED);
-    expect(t.err()).toContain('typo.yaml:4:9: error[brief.unknown-column] the data has no column `crossing` (at /values)');
+    expect(t.err()).toContain('typo.yaml: error[brief.unknown-column] the data has no column `crossing` (at /values, line 4:9)');
     expect(t.err()).toContain('hint: did you mean `crossings`?');
     expect(t.err()).not.toMatch(/\n\s+at /);
     expect(existsSync(join(dir, 'typo.svg'))).toBe(false);
@@ -254,7 +254,9 @@ describe('diagnostic formatting', () => {
 
   it('pins the layout of a formatted diagnostic', () => {
     expect(formatDiagnostic({ code: 'table.ragged-row', severity: 'error', message: 'line 3 has a different number of cells', file: 'd.csv', line: 3, found: '1 cells', expected: '2 cells', hint: 'quote cells' }))
-      .toBe('d.csv:3: error[table.ragged-row] line 3 has a different number of cells\n  found: 1 cells; expected: 2 cells\n  hint: quote cells');
+      .toBe('d.csv: error[table.ragged-row] line 3 has a different number of cells\n  found: 1 cells; expected: 2 cells\n  hint: quote cells');
+    expect(formatDiagnostic({ code: 'table.header-only', severity: 'error', message: 'the data file has a header but no data rows', file: 'd.csv', line: 1, hint: 'add rows' }))
+      .toBe('d.csv: error[table.header-only] the data file has a header but no data rows (line 1)\n  hint: add rows');
     expect(formatDiagnostic({ code: 'choice.no-key', severity: 'error', message: 'm', path: '/keys' }, true)).toBe('\u001b[31merror\u001b[0m[choice.no-key] m (at /keys)');
   });
 });
