@@ -9,7 +9,7 @@ import { createNodeEnv, outlineSvg, rasterize, renderBrief } from '../dist/chart
 import { jsdomRoute, stringTemplateChart } from './routes.js';
 
 const root = new URL('..', import.meta.url).pathname;
-const briefFile = join(root, 'demo-data', 'hut-overnights.brief.yaml');
+const briefFile = join(root, 'demo-data', 'hut-overnights.yaml');
 const briefText = readFileSync(briefFile, 'utf8');
 const table = csvParse(readFileSync(join(root, 'demo-data', 'hut-overnights.csv'), 'utf8'));
 const rows = table.map((r) => ({ label: r.hut, value: Number(r.overnights) }));

@@ -4,7 +4,7 @@ import { readFileSync } from 'node:fs';
 import { createNodeEnv, outlineSvg, rasterize, renderBrief } from '../dist/chartwright.js';
 
 const n = Number(process.argv[2] ?? 500);
-const file = new URL('../demo-data/hut-overnights.brief.yaml', import.meta.url).pathname;
+const file = new URL('../demo-data/hut-overnights.yaml', import.meta.url).pathname;
 const env = createNodeEnv();
 const text = readFileSync(file, 'utf8');
 let peak = process.memoryUsage().rss;

@@ -7,7 +7,7 @@ import { join } from 'node:path';
 import { writeFileSync } from 'node:fs';
 
 const root = new URL('..', import.meta.url).pathname;
-const brief = join(root, 'demo-data', 'hut-overnights.brief.yaml');
+const brief = join(root, 'demo-data', 'hut-overnights.yaml');
 const node = (args) => JSON.parse(execFileSync(process.execPath, args, { cwd: root }).toString());
 const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 

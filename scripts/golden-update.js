@@ -5,12 +5,12 @@ import { basename, join } from 'node:path';
 import { createNodeEnv, outlineSvg, rasterize, renderBrief } from '../dist/chartwright.js';
 
 const env = createNodeEnv();
-const briefs = readdirSync('demo-data').filter((f) => f.endsWith('.brief.yaml')).sort();
+const briefs = readdirSync('demo-data').filter((f) => f.endsWith('.yaml')).sort();
 for (const name of briefs) {
   const file = join('demo-data', name);
   const result = await renderBrief({ brief: readFileSync(file, 'utf8'), file }, env);
   if (!result.ok) throw new Error(`${file} failed: ${JSON.stringify(result.diagnostics)}`);
-  const id = basename(name, '.brief.yaml');
+  const id = basename(name, '.yaml');
   mkdirSync(join('golden', id), { recursive: true });
   writeFileSync(join('golden', id, `${id}.svg`), result.svg);
   writeFileSync(join('golden', id, `${id}.png`), rasterize(outlineSvg(result.scene, env), { scale: 2, fontFiles: [] }));

@@ -39,7 +39,7 @@ export function codes(result: { diagnostics: { code: string }[] }): string[] {
 /** The demo briefs shipped in demo-data/. */
 export function demoBriefs(): string[] {
   const dir = join(root, 'demo-data');
-  return readdirSync(dir).filter((f) => f.endsWith('.brief.yaml')).sort().map((f) => join(dir, f));
+  return readdirSync(dir).filter((f) => f.endsWith('.yaml')).sort().map((f) => join(dir, f));
 }
 
 /** Renders a demo brief file and dumps its scene. */

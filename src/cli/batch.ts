@@ -56,7 +56,7 @@ export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchO
 function sceneTarget(scene: string | undefined, brief: string, many: boolean, cwd: string): string | undefined {
   if (!scene) return undefined;
   if (!many) return resolve(cwd, scene);
-  return join(resolve(cwd, scene), `${basename(brief, extname(brief)).replace(/\.brief$/, '')}.scene.json`);
+  return join(resolve(cwd, scene), `${basename(brief, extname(brief))}.scene.json`);
 }
 
 /** Yields to the event loop so resvg's native memory is reclaimed between renders (a tight loop grows it fast). */

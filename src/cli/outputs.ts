@@ -14,7 +14,7 @@ export interface PlannedFile {
  */
 export function plannedOutputs(briefFile: string, outputs: string[], outDir: string | undefined, png: boolean): PlannedFile[] {
   const base = outDir ?? dirname(briefFile);
-  const names = outputs.length ? outputs : [`${basename(briefFile, extname(briefFile)).replace(/\.brief$/, '')}.svg`];
+  const names = outputs.length ? outputs : [`${basename(briefFile, extname(briefFile))}.svg`];
   const files = new Map<string, PlannedFile>();
   for (const name of names) {
     const path = join(base, name);

@@ -50,7 +50,7 @@ function expandBriefs(paths: string[], cwd: string): string[] {
 
 function demoBriefs(root: string): string[] {
   const dir = join(root, 'demo-data');
-  return readdirSync(dir).filter((f) => /\.brief\.(ya?ml|json)$/.test(f)).sort().map((f) => join(dir, f));
+  return readdirSync(dir).filter((f) => /\.ya?ml$/.test(f)).sort().map((f) => join(dir, f));
 }
 
 interface RenderFlags { outDir?: string; png?: boolean; outlineText?: boolean; scale: number; scene?: string; strict?: boolean; lenient?: boolean; debug?: boolean; timings?: boolean; report?: string }

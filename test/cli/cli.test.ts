@@ -18,7 +18,7 @@ function io(cwd: string) {
 function workspace(): string {
   const dir = tempDir();
   writeFileSync(join(dir, 'piers.csv'), 'pier,crossings\nNorth,212\nSouth,64\nEast,131\n');
-  writeFileSync(join(dir, 'piers.brief.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossings\ntitle: Piers\nfields: { crossings: { unit: crossings } }\n');
+  writeFileSync(join(dir, 'piers.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossings\ntitle: Piers\nfields: { crossings: { unit: crossings } }\n');
   writeFileSync(join(dir, 'typo.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossing\n');
   writeFileSync(join(dir, 'warn.yaml'), 'data: gaps.csv\nintent: compare\nkeys: pier\nvalues: crossings\nfields: { crossings: { unit: crossings } }\n');
   writeFileSync(join(dir, 'gaps.csv'), 'pier,crossings\nNorth,212\nSouth,NA\n');
@@ -31,22 +31,29 @@ describe('chartwright render', () => {
   it('writes the SVG beside the brief, named after it, and lists it on stdout', async () => {
     const dir = workspace();
     const t = io(dir);
-    expect(await runCli(['render', 'piers.brief.yaml'], t.io)).toBe(EXIT.OK);
+    expect(await runCli(['render', 'piers.yaml'], t.io)).toBe(EXIT.OK);
     expect(readFileSync(join(dir, 'piers.svg'), 'utf8')).toMatch(/^<svg /);
     expect(t.out()).toBe('piers.svg\n');
     expect(files(dir).some((f) => f.endsWith('.tmp'))).toBe(false);
   });
 
+  it('names the SVG after the brief with its extension replaced, as documented', async () => {
+    const dir = workspace();
+    writeFileSync(join(dir, 'ferry.brief.yaml'), readFileSync(join(dir, 'piers.yaml')));
+    expect(await runCli(['render', 'ferry.brief.yaml'], io(dir).io)).toBe(EXIT.OK);
+    expect(existsSync(join(dir, 'ferry.brief.svg'))).toBe(true);
+  });
+
   it('writes SVG and PNG under -o DIR with --png', async () => {
     const dir = workspace();
-    expect(await runCli(['render', 'piers.brief.yaml', '-o', 'out', '--png', '--scale', '1'], io(dir).io)).toBe(EXIT.OK);
+    expect(await runCli(['render', 'piers.yaml', '-o', 'out', '--png', '--scale', '1'], io(dir).io)).toBe(EXIT.OK);
     expect(files(join(dir, 'out'))).toEqual(['piers.png', 'piers.svg']);
     expect(readFileSync(join(dir, 'out', 'piers.png')).subarray(1, 4).toString()).toBe('PNG');
   });
 
   it('writes SVG text as glyph outlines with --outline-text, keeping title and description', async () => {
     const dir = workspace();
-    expect(await runCli(['render', 'piers.brief.yaml', '--outline-text'], io(dir).io)).toBe(EXIT.OK);
+    expect(await runCli(['render', 'piers.yaml', '--outline-text'], io(dir).io)).toBe(EXIT.OK);
     const svg = readFileSync(join(dir, 'piers.svg'), 'utf8');
     expect(svg).not.toContain('<text');
     expect(svg).toContain('<use href="#cw');
@@ -73,7 +80,7 @@ describe('chartwright render', () => {
   it('renders the good briefs of a batch even when one is bad', async () => {
     const dir = workspace();
     const t = io(dir);
-    expect(await runCli(['render', 'typo.yaml', 'piers.brief.yaml', 'missing.yaml'], t.io)).toBe(EXIT.FAILED);
+    expect(await runCli(['render', 'typo.yaml', 'piers.yaml', 'missing.yaml'], t.io)).toBe(EXIT.FAILED);
     expect(existsSync(join(dir, 'piers.svg'))).toBe(true);
     expect(t.err()).toContain('missing.yaml: error[brief.not-found]');
   });
@@ -86,7 +93,7 @@ describe('chartwright render', () => {
     writeFileSync(join(dir, 'briefs', 'rows.json'), '[{"pier": "North", "crossings": 1}]');
     const t = io(dir);
     expect(await runCli(['render', 'briefs'], t.io)).toBe(EXIT.OK);
-    expect(t.out()).toBe('briefs/a.svg\nbriefs/b.svg\n');
+    expect(t.out()).toBe('briefs/a.svg\nbriefs/b.brief.svg\n');
     const c = io(dir);
     expect(await runCli(['check', 'briefs'], c.io)).toBe(EXIT.OK);
     expect(c.out()).toBe('ok briefs/a.yaml\nok briefs/b.brief.json\n');
@@ -94,7 +101,7 @@ describe('chartwright render', () => {
 
   it('dumps the scene contract to a file for one brief', async () => {
     const dir = workspace();
-    expect(await runCli(['render', 'piers.brief.yaml', '--scene', 'scene.json'], io(dir).io)).toBe(EXIT.OK);
+    expect(await runCli(['render', 'piers.yaml', '--scene', 'scene.json'], io(dir).io)).toBe(EXIT.OK);
     const scene = JSON.parse(readFileSync(join(dir, 'scene.json'), 'utf8'));
     expect(Object.keys(scene)).toEqual(expect.arrayContaining(['form', 'width', 'height', 'background', 'marks', 'axes', 'texts']));
     expect(scene).toMatchObject({ form: 'bar', width: 720, height: 440, background: '#ffffff' });
@@ -111,7 +118,7 @@ describe('chartwright render', () => {
   it('dumps one scene per brief into a folder for several briefs', async () => {
     const dir = workspace();
     writeFileSync(join(dir, 'second.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossings\n');
-    expect(await runCli(['render', 'piers.brief.yaml', 'second.yaml', '--scene', 'scenes'], io(dir).io)).toBe(EXIT.OK);
+    expect(await runCli(['render', 'piers.yaml', 'second.yaml', '--scene', 'scenes'], io(dir).io)).toBe(EXIT.OK);
     expect(files(join(dir, 'scenes'))).toEqual(['piers.scene.json', 'second.scene.json']);
   });
 
@@ -127,21 +134,21 @@ describe('chartwright render', () => {
   it('times each stage with --timings, and writes the same SVG as without', async () => {
     const dir = workspace();
     const t = io(dir);
-    expect(await runCli(['render', 'piers.brief.yaml', '--png', '--timings'], t.io)).toBe(EXIT.OK);
+    expect(await runCli(['render', 'piers.yaml', '--png', '--timings'], t.io)).toBe(EXIT.OK);
     // The fake clock advances 1.5 ms per reading, so every stage reads 1.50 ms.
-    expect(t.err()).toBe('piers.brief.yaml: brief 1.50 ms, table 1.50 ms, fields 1.50 ms, choose 1.50 ms, derive 1.50 ms, layout 1.50 ms, svg 1.50 ms, png 1.50 ms\n');
+    expect(t.err()).toBe('piers.yaml: brief 1.50 ms, table 1.50 ms, fields 1.50 ms, choose 1.50 ms, derive 1.50 ms, layout 1.50 ms, svg 1.50 ms, png 1.50 ms\n');
     const timed = readFileSync(join(dir, 'piers.svg'), 'utf8');
-    await runCli(['render', 'piers.brief.yaml'], io(dir).io);
+    await runCli(['render', 'piers.yaml'], io(dir).io);
     expect(readFileSync(join(dir, 'piers.svg'), 'utf8')).toBe(timed);
   });
 
   it('writes a JSON run report with every brief, its outputs and diagnostics', async () => {
     const dir = workspace();
-    expect(await runCli(['render', 'piers.brief.yaml', 'typo.yaml', 'warn.yaml', '--report', 'run.json'], io(dir).io)).toBe(EXIT.FAILED);
+    expect(await runCli(['render', 'piers.yaml', 'typo.yaml', 'warn.yaml', '--report', 'run.json'], io(dir).io)).toBe(EXIT.FAILED);
     const run = JSON.parse(readFileSync(join(dir, 'run.json'), 'utf8'));
     expect(run.summary).toEqual({ briefs: 3, ok: 2, failed: 1, errors: 1, warnings: 1 });
     expect(run.briefs.map((b: { brief: string; ok: boolean; outputs: string[] }) => [b.brief, b.ok, b.outputs])).toEqual([
-      ['piers.brief.yaml', true, ['piers.svg']], ['typo.yaml', false, []], ['warn.yaml', true, ['warn.svg']],
+      ['piers.yaml', true, ['piers.svg']], ['typo.yaml', false, []], ['warn.yaml', true, ['warn.svg']],
     ]);
     expect(run.briefs[1].diagnostics[0]).toMatchObject({ code: 'brief.unknown-column', file: 'typo.yaml', line: 4 });
     expect(run.chartwright).toMatch(/^\d+\.\d+\.\d+$/);
@@ -151,7 +158,7 @@ describe('chartwright render', () => {
     const dir = workspace();
     writeFileSync(join(dir, 'blocked'), 'a file where a folder should be');
     const t = io(dir);
-    expect(await runCli(['render', 'piers.brief.yaml', '--report', 'blocked/run.json'], t.io)).toBe(EXIT.FAILED);
+    expect(await runCli(['render', 'piers.yaml', '--report', 'blocked/run.json'], t.io)).toBe(EXIT.FAILED);
     expect(t.err()).toContain('error[output.write-failed] could not write the run report');
   });
 
@@ -159,18 +166,18 @@ describe('chartwright render', () => {
     const dir = workspace();
     const tty = io(dir);
     tty.io.isTTY = true;
-    await runCli(['render', 'piers.brief.yaml', 'warn.yaml'], tty.io);
+    await runCli(['render', 'piers.yaml', 'warn.yaml'], tty.io);
     expect(tty.err()).toContain('[2/2] warn.yaml');
     const ci = io(dir);
     ci.io.isTTY = true;
     ci.io.env = { CI: 'true' };
-    await runCli(['render', 'piers.brief.yaml', 'warn.yaml'], ci.io);
+    await runCli(['render', 'piers.yaml', 'warn.yaml'], ci.io);
     expect(ci.err()).not.toContain('[1/2]');
   });
 
   it('rejects a bad --scale as a usage error', async () => {
     const t = io(workspace());
-    expect(await runCli(['render', 'piers.brief.yaml', '--scale', 'big'], t.io)).toBe(EXIT.USAGE);
+    expect(await runCli(['render', 'piers.yaml', '--scale', 'big'], t.io)).toBe(EXIT.USAGE);
     expect(t.err()).toMatch(/scale/);
   });
 });
@@ -198,7 +205,7 @@ describe('chartwright explain', () => {
   it('explains in words, and fails for a brief with errors', async () => {
     const dir = workspace();
     const t = io(dir);
-    expect(await runCli(['explain', 'piers.brief.yaml'], t.io)).toBe(EXIT.OK);
+    expect(await runCli(['explain', 'piers.yaml'], t.io)).toBe(EXIT.OK);
     expect(t.out()).toMatch(/^form: bar\n- bar chart\n {4}because compare\.categorical-key/);
     const bad = io(dir);
     expect(await runCli(['explain', 'typo.yaml', '--json'], bad.io)).toBe(EXIT.FAILED);
@@ -209,8 +216,8 @@ describe('chartwright explain', () => {
 describe('chartwright check, schema, help and version', () => {
   it('check passes clean briefs, fails bad ones, and fails warnings with --strict', async () => {
     const dir = workspace();
-    expect(await runCli(['check', 'piers.brief.yaml', 'warn.yaml'], io(dir).io)).toBe(EXIT.OK);
-    expect(await runCli(['check', 'piers.brief.yaml', 'warn.yaml', '--strict'], io(dir).io)).toBe(EXIT.FAILED);
+    expect(await runCli(['check', 'piers.yaml', 'warn.yaml'], io(dir).io)).toBe(EXIT.OK);
+    expect(await runCli(['check', 'piers.yaml', 'warn.yaml', '--strict'], io(dir).io)).toBe(EXIT.FAILED);
     expect(await runCli(['check', 'typo.yaml'], io(dir).io)).toBe(EXIT.FAILED);
     expect(files(dir).filter((f) => f.endsWith('.svg'))).toEqual([]);
   });

@@ -12,7 +12,7 @@ function renderInFreshProcess(brief: string, out: string, extraEnv: Record<strin
 
 describe('determinism', () => {
   it('the same brief rendered in two separate processes gives identical SVG and PNG bytes', () => {
-    const brief = join(root, 'demo-data', 'hut-overnights.brief.yaml');
+    const brief = join(root, 'demo-data', 'hut-overnights.yaml');
     const [a, b] = [tempDir(), tempDir()];
     renderInFreshProcess(brief, a);
     // A different time zone and locale must not matter either.
@@ -24,7 +24,7 @@ describe('determinism', () => {
 
   it('the bundled CLI writes the same SVG as the golden', () => {
     const out = tempDir();
-    renderInFreshProcess(join(root, 'demo-data', 'ferry-crossings.brief.yaml'), out);
+    renderInFreshProcess(join(root, 'demo-data', 'ferry-crossings.yaml'), out);
     expect(readFileSync(join(out, 'ferry-crossings.svg'), 'utf8')).toBe(readFileSync(join(root, 'golden', 'ferry-crossings', 'ferry-crossings.svg'), 'utf8'));
   });
 });

@@ -11,7 +11,7 @@ import { demoBriefs, env, renderDemo, root } from '../helpers.js';
 // purpose; a mismatch writes expected | actual | diff images to test-output/golden/.
 describe('golden gallery', () => {
   for (const file of demoBriefs()) {
-    const id = basename(file, '.brief.yaml');
+    const id = basename(file, '.yaml');
     const dir = join(root, 'golden', id);
 
     it(`${id}: SVG is byte for byte the golden`, async () => {
