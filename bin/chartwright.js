@@ -8,6 +8,13 @@ try {
   process.stderr.write('chartwright: dist/ is missing; run `npm install` (or `npm run build`) in the chartwright folder first\n');
   process.exit(3);
 }
+// A reader that stops early (`chartwright render … | head`) closes the pipe: stop quietly.
+for (const stream of [process.stdout, process.stderr]) {
+  stream.on('error', (e) => {
+    if (e.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+    throw e;
+  });
+}
 process.exitCode = await cli.runCli(process.argv.slice(2), {
   stdout: (text) => process.stdout.write(text),
   stderr: (text) => process.stderr.write(text),
