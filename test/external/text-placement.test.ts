@@ -17,7 +17,7 @@ describe('text placement agrees with resvg shaping the same font', () => {
       const noText = PNG.sync.read(rasterize(result.svg!, { scale: 2, fontFiles: [] }));
       const outlines = PNG.sync.read(rasterize(outlineSvg(result.scene!, env), { scale: 2, fontFiles: [] }));
       const pixels = live.width * live.height;
-      const differ = (a: PNG, b: PNG) => pixelmatch(a.data, b.data, null, a.width, a.height, { threshold: 0.1 }) / pixels;
+      const differ = (a: PNG, b: PNG) => pixelmatch(a.data, b.data, undefined, a.width, a.height, { threshold: 0.1 }) / pixels;
       // The comparison means something only if text covers a fair share of the chart.
       expect(differ(live, noText)).toBeGreaterThan(0.005);
       expect(differ(live, outlines)).toBeLessThan(0.001);
