@@ -3,6 +3,7 @@ import { describeRows, diagnostic, failure, success, type Diagnostic, type Outco
 import { keyText } from '../fields/labels.js';
 import type { Table } from '../table/types.js';
 import { AGGREGATE_VERB, aggregateValues } from './aggregate.js';
+import { firstUnevenStep } from './dates.js';
 import { compareNatural, compareText } from './order.js';
 
 /** One bar: its label, the value it shows, and the rows behind it. */
@@ -119,6 +120,24 @@ function fold(bars: BarDatum[], plan: BarPlan, valueName: string, problems: Diag
   return { bars: shown, foldedKeys: rest.map((b) => b.label), foldMode: mode, ...(additive ? { foldedTotal: total } : {}) };
 }
 
+const GRAIN_WORD = { year: 'years', month: 'months', day: 'days', minute: 'ms', second: 'ms' } as const;
+
+/**
+ * Bars stand evenly apart, so a date key with gaps (a missing month) would look like one step:
+ * warned about, naming the first gap.
+ */
+function unevenDates(bars: BarDatum[], keyOf: Map<string, number>, plan: BarPlan): Diagnostic[] {
+  const { column } = plan.key;
+  if (plan.key.type !== 'temporal' || plan.order !== 'key' || column.type !== 'date') return [];
+  const grain = column.grain ?? 'day';
+  const gap = firstUnevenStep(bars.map((b) => keyOf.get(b.label)!), grain);
+  if (!gap) return [];
+  const after = bars.find((b) => keyOf.get(b.label) === gap.after)!.label;
+  return [diagnostic('derive.uneven-dates', `the dates of \`${plan.key.name}\` are not evenly spaced: after ${after} comes a step of ${gap.step} ${GRAIN_WORD[grain]} where the others are ${gap.usual}; bars stand evenly apart, so the gap does not show`, {
+    field: plan.key.name, hint: 'add rows for the missing dates (NA leaves a visible empty slot), or chart time to scale with a line (intent: trend)',
+  })];
+}
+
 /**
  * The derive stage for bars: rows → one bar per key, combined by the brief's aggregate, in the
  * chosen order, folded to what the plot can show. Missing values are left out, never drawn as 0.
@@ -141,7 +160,9 @@ export function deriveBars(table: Table, plan: BarPlan): Outcome<DerivedBars> {
   }
   const bars = groups.map((g) => ({ label: g.label, value: aggregateValues(g.values, plan.aggregate), count: g.values.length, rows: g.rows }));
   const keyOf = new Map(groups.map((g) => [g.label, g.sortKey]));
-  const folded = fold(sortBars(bars, keyOf, plan.order), plan, valueName, problems);
+  const sorted = sortBars(bars, keyOf, plan.order);
+  problems.push(...unevenDates(sorted, keyOf, plan));
+  const folded = fold(sorted, plan, valueName, problems);
   if (!folded) return failure(problems);
   return success({ plan, valueName, ...folded }, problems);
 }

@@ -54,6 +54,7 @@ export const CATALOGUE = {
   'derive.others-folded': 'warning',
   'derive.no-rows': 'error',
   'derive.too-many-ordered-bars': 'error',
+  'derive.uneven-dates': 'warning',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',

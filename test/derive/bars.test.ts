@@ -99,6 +99,20 @@ describe('derive stage for bars', () => {
     expect(r.ok && r.value.bars[0]).toMatchObject({ label: 'a', value: 199_999 });
   });
 
+  it('warns when date keys are unevenly spaced, since bars hide the gap', async () => {
+    const rows = ['2026-01', '2026-02', '2026-03', '2026-06', '2026-07'].map((k, i) => ({ k, v: i + 1 }));
+    const r = await derive(rows, { order: 'key' });
+    expect(r.diagnostics).toMatchObject([{ code: 'derive.uneven-dates', severity: 'warning', field: 'k' }]);
+    expect(r.diagnostics[0]!.message).toContain('after Mar 2026 comes a step of 3 months where the others are 1');
+  });
+
+  it('counts calendar months, so monthly data across February is even', async () => {
+    const rows = ['2026-01-31', '2026-02-28', '2026-03-31'].map((k, i) => ({ k: k.slice(0, 7), v: i + 1 }));
+    expect((await derive(rows, { order: 'key' })).diagnostics).toEqual([]);
+    const days = ['2026-02-27', '2026-02-28', '2026-03-01', '2026-03-02'].map((k, i) => ({ k, v: i + 1 }));
+    expect((await derive(days, { order: 'key' })).diagnostics).toEqual([]);
+  });
+
   it('compares digits as numbers in natural order', () => {
     expect(['b2', 'b10', 'a', 'B1'].sort(compareNatural)).toEqual(['a', 'B1', 'b2', 'b10']);
   });
