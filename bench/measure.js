@@ -28,19 +28,27 @@ async function time(fn, runs) {
 const group = process.argv[2];
 if (group === 'svg') {
   // The same chart from the same rows in memory, as the jsdom route gets them; and the whole
-  // job from the brief file (YAML, CSV read and parsed, typed) as the CLI does it.
+  // job from the brief file (YAML, CSV read and parsed, typed) as the CLI does it. The routes
+  // are timed in interleaved rounds, so a machine that slows down mid-run slows all of them.
   const { parse } = await import('yaml');
   const brief = parse(briefText);
   delete brief.data;
-  const out = {
-    chartwrightFromRows: await time(() => renderBrief({ brief, rows: table }, env), 1500),
-    chartwrightFromFile: await time(() => renderBrief({ brief: briefText, file: briefFile }, env), 800),
-    template: await time(() => stringTemplateChart(rows), 3000),
-  };
   const jsdom = await jsdomRoute();
-  out.jsdomShared = await time(() => jsdom.sharedDocument(rows), 300);
-  out.jsdomNew = await time(() => jsdom.newDocument(rows), 100);
-  console.log(JSON.stringify(out));
+  const routes = {
+    chartwrightFromRows: [() => renderBrief({ brief, rows: table }, env), 150],
+    chartwrightFromFile: [() => renderBrief({ brief: briefText, file: briefFile }, env), 80],
+    template: [() => stringTemplateChart(rows), 300],
+    jsdomShared: [() => jsdom.sharedDocument(rows), 30],
+    jsdomNew: [() => jsdom.newDocument(rows), 10],
+  };
+  const samples = Object.fromEntries(Object.keys(routes).map((k) => [k, []]));
+  for (let round = 0; round < 10; round++) {
+    for (const [name, [fn, runs]] of Object.entries(routes)) {
+      for (let i = 0; i < Math.ceil(runs / 5); i++) await fn();
+      for (let i = 0; i < runs; i++) { const t = performance.now(); await fn(); samples[name].push(performance.now() - t); }
+    }
+  }
+  console.log(JSON.stringify(Object.fromEntries(Object.entries(samples).map(([k, xs]) => [k, median(xs)]))));
 } else if (group === 'png') {
   const require = createRequire(import.meta.url);
   const { Resvg } = require('@resvg/resvg-js');
