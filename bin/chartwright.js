@@ -13,7 +13,8 @@ const dist = join(dirname(fileURLToPath(import.meta.url)), '..', 'dist');
 async function loadCli() {
   const file = join(dist, 'chartwright.cjs');
   const cache = join(dist, 'chartwright.code-cache');
-  if (existsSync(file)) {
+  // CHARTWRIGHT_ESM=1 takes the ESM bundle instead (for debugging, and for the test that both loaders agree).
+  if (existsSync(file) && !process.env.CHARTWRIGHT_ESM) {
     const cachedData = existsSync(cache) ? readFileSync(cache) : undefined;
     const script = new vm.Script(Module.wrap(readFileSync(file, 'utf8')), { filename: file, cachedData });
     const loaded = { exports: {} };

@@ -22,6 +22,16 @@ describe('determinism', () => {
     }
   });
 
+  it('the code-cached CommonJS loader and the ESM bundle write identical bytes', () => {
+    const brief = join(root, 'demo-data', 'cistern-balance.yaml');
+    const [a, b] = [tempDir(), tempDir()];
+    renderInFreshProcess(brief, a);
+    renderInFreshProcess(brief, b, { CHARTWRIGHT_ESM: '1' });
+    for (const name of ['cistern-balance.svg', 'cistern-balance.png']) {
+      expect(readFileSync(join(b, name)).equals(readFileSync(join(a, name)))).toBe(true);
+    }
+  });
+
   it('the bundled CLI writes the same SVG as the golden', () => {
     const out = tempDir();
     renderInFreshProcess(join(root, 'demo-data', 'ferry-crossings.yaml'), out);
