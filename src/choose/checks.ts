@@ -86,13 +86,13 @@ export function checkPinnedForm(brief: ResolvedBrief): Diagnostic[] {
  * baseline. Run before the data is read too, so one `check` reports them with data problems.
  */
 export function checkBriefRules(brief: ResolvedBrief, lenient: boolean): { problems: Diagnostic[]; baseline: Decision } {
+  const baseline = checkBaseline(brief, lenient);
   if (!(SUPPORTED_INTENTS as readonly string[]).includes(brief.intent)) {
     const problems = [diagnostic('choice.intent-not-supported', `the intent \`${brief.intent}\` is not supported yet`, {
       path: '/intent', found: brief.intent, expected: SUPPORTED_INTENTS.join(', '), hint: 'use `intent: compare` for bars of one value per key',
     })];
-    return { problems, baseline: checkBaseline(brief, lenient).decision };
+    return { problems, baseline: baseline.decision };
   }
-  const baseline = checkBaseline(brief, lenient);
   return { problems: [...checkPinnedForm(brief), ...baseline.problems], baseline: baseline.decision };
 }
 

@@ -40,6 +40,6 @@ export function createMeasurer(metrics: Record<Weight, FontMetrics>): TextMeasur
     ascent: (size, weight) => (faces[weight].metrics.ascent * size) / faces[weight].metrics.unitsPerEm,
     descent: (size, weight) => (-faces[weight].metrics.descent * size) / faces[weight].metrics.unitsPerEm,
     missing: (text, weight) => missingCharacters(faces[weight], text),
-    run: (text, weight) => ({ glyphs: layoutRun(faces[weight], text).glyphs, unitsPerEm: faces[weight].metrics.unitsPerEm }),
+    run: (text, weight) => ({ glyphs: layoutRun(faces[weight], text), unitsPerEm: faces[weight].metrics.unitsPerEm }),
   };
 }

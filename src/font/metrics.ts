@@ -49,11 +49,10 @@ export function compileFace(metrics: FontMetrics): CompiledFace {
 
 /**
  * Lays out a single line of text from cached advances and kerning pairs: the glyphs with their
- * x offsets, and the total advance. No shaping beyond pair kerning: chart labels do not need it.
+ * x offsets. No shaping beyond pair kerning: chart labels do not need it.
  */
-export function layoutRun(face: CompiledFace, text: string): { glyphs: PlacedGlyph[]; advance: number; missing: string[] } {
+export function layoutRun(face: CompiledFace, text: string): PlacedGlyph[] {
   const glyphs: PlacedGlyph[] = [];
-  const missing: string[] = [];
   let x = 0;
   let previous = -1;
   for (const ch of text) {
@@ -61,7 +60,6 @@ export function layoutRun(face: CompiledFace, text: string): { glyphs: PlacedGly
     const advance = face.advances.get(cp);
     if (previous >= 0) x += face.kerning.get(previous * PAIR + cp) ?? 0;
     if (advance === undefined) {
-      missing.push(ch);
       glyphs.push({ codePoint: -1, x });
       x += face.metrics.notdefAdvance;
       previous = -1;
@@ -71,7 +69,7 @@ export function layoutRun(face: CompiledFace, text: string): { glyphs: PlacedGly
       previous = cp;
     }
   }
-  return { glyphs, advance: x, missing };
+  return glyphs;
 }
 
 /** The advance of a line of text in font units, without building the glyph list. */

@@ -30,7 +30,6 @@ interface Common {
   body: Box;
   valueTitle: string;
   keyTitle: string;
-  fmtValue: (n: number) => string;
   /** Each bar's value as its label shows it, formatted once. */
   valueText: Map<BarDatum, string>;
   id: (prefix: string, text: string) => string;
@@ -276,7 +275,7 @@ export function layoutBar(derived: DerivedBars, ctx: FormContext): FormResult {
   const fmtValue = valueFormatter(derived.bars.map((b) => b.value), derived.plan.value?.format);
   const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: foldNote(derived, valueTitle, valueFormatter([derived.foldedTotal ?? 0], derived.plan.value?.format)) }, style, brief.size, measure);
   const valueText = new Map(derived.bars.map((b) => [b, fmtValue(b.value)]));
-  const common: Common = { derived, ctx, body: frame.body, valueTitle, keyTitle: derived.plan.key.label, fmtValue, valueText, id: idMaker() };
+  const common: Common = { derived, ctx, body: frame.body, valueTitle, keyTitle: derived.plan.key.label, valueText, id: idMaker() };
   const parts = derived.plan.orientation === 'vertical' ? vertical(common) : horizontal(common);
   const diagnostics = [...parts.diagnostics];
   if (parts.plot.width < 40 || parts.plot.height < 40) {

@@ -1,15 +1,13 @@
+import { hexToRgb, toLinear } from '../color/srgb.js';
+
 /**
  * Relative luminance and contrast ratio as WCAG 2.x defines them ("relative luminance",
  * "contrast ratio" in the WCAG 2.2 glossary). The linearisation threshold is 0.04045 (2.2);
  * 2.0/2.1 printed 0.03928, which gives identical results for every 8-bit value.
  */
 export function relativeLuminance(hex: string): number {
-  const n = Number.parseInt(hex.slice(1), 16);
-  const channel = (c: number) => {
-    const s = c / 255;
-    return s <= 0.04045 ? s / 12.92 : ((s + 0.055) / 1.055) ** 2.4;
-  };
-  return 0.2126 * channel((n >> 16) & 255) + 0.7152 * channel((n >> 8) & 255) + 0.0722 * channel(n & 255);
+  const [r, g, b] = hexToRgb(hex).map(toLinear) as [number, number, number];
+  return 0.2126 * r + 0.7152 * g + 0.0722 * b;
 }
 
 /** WCAG 2.x contrast ratio of two #rrggbb colours, from 1 to 21. */

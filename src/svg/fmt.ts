@@ -7,7 +7,7 @@ export const PRECISION = 2;
  */
 export function fmt(n: number): string {
   if (!Number.isFinite(n)) throw new RangeError(`non-finite number in scene: ${n}`);
-  // toFixed switches to exponent form from 1e21; no coordinate of a real chart comes near.
+  // String() switches to exponent form from 1e21; no coordinate of a real chart comes near.
   if (Math.abs(n) >= 1e15) throw new RangeError(`number too large for a coordinate: ${n}`);
   const f = 10 ** PRECISION;
   const r = Math.round(n * f) / f;
