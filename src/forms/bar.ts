@@ -135,9 +135,11 @@ function vertical(c: Common): Parts {
   const y = scaleLinear().domain(vt.domain).range([rangeBottom, rangeTop]);
   const out: Marks = { nodes: [], texts: [] };
   valueGrid(c, vt, y, true, [left, right], out);
+  const tickMarks: SceneNode[] = [];
+  const valueLabels: TextNode[] = [];
   for (const bar of bars) {
     out.nodes.push(barRect(c, bar, band, y, true));
-    if (showLabels) out.texts.push(valueLabel(c, bar, band, y, true));
+    if (showLabels) valueLabels.push(valueLabel(c, bar, band, y, true));
   }
   out.nodes.push(line('zero-line', 'zero-line', left, y(0), right, y(0), style.lines.zero, style.lines.zeroWidth));
   const keyTop = bottom + tickGap;
@@ -146,8 +148,10 @@ function vertical(c: Common): Parts {
     out.texts.push(textNode(measure, { id: c.id('tick-key', p.label), role: 'tick', text: p.label, style: tick, x: p.x, top: keyTop, anchor: 'middle' }));
     // With labels thinned, a short tick ties each label to its bar (a clamped label may sit off-centre).
     const centre = band(p.label)! + band.bandwidth() / 2;
-    if (k > 1) out.nodes.push(line(c.id('tick-mark', p.label), 'tick-mark', centre, bottom, centre, bottom + tickGap - 2, style.lines.axis, style.lines.axisWidth));
+    if (k > 1) tickMarks.push(line(c.id('tick-mark', p.label), 'tick-mark', centre, bottom, centre, bottom + tickGap - 2, style.lines.axis, style.lines.axisWidth));
   }
+  out.nodes.push(...tickMarks);
+  out.texts.push(...valueLabels);
   out.texts.push(textNode(measure, { id: 'axis-title-value', role: 'axis-title', text: c.valueTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
   out.texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: (left + right) / 2, top: keyTop + lineHeight(tick, factor) + tickGap, anchor: 'middle' }));
   const diagnostics = k > 1 ? [thinned(c, k, bars.length, placed.length)] : [];
@@ -237,18 +241,22 @@ function horizontal(c: Common): Parts {
   const out: Marks = { nodes: [], texts: [] };
   valueGrid(c, vt, x, false, [top, bottom], out);
   const k = thinningStep(textBoxHeight(measure, tick), band.step(), 1);
+  const tickMarks: SceneNode[] = [];
+  const valueLabels: TextNode[] = [];
   bars.forEach((bar, i) => {
     out.nodes.push(barRect(c, bar, band, x, false));
     const middle = band(bar.label)! + band.bandwidth() / 2;
     if (i % k === 0) {
       out.texts.push(...keyLabelLines(c, bar, keyLabels.labels[i]!.lines, left - tickGap, middle));
-      if (k > 1) out.nodes.push(line(c.id('tick-mark', bar.label), 'tick-mark', left - tickGap + 2, middle, left, middle, style.lines.axis, style.lines.axisWidth));
+      if (k > 1) tickMarks.push(line(c.id('tick-mark', bar.label), 'tick-mark', left - tickGap + 2, middle, left, middle, style.lines.axis, style.lines.axisWidth));
     }
-    if (showLabels) out.texts.push(valueLabel(c, bar, band, x, false));
+    if (showLabels) valueLabels.push(valueLabel(c, bar, band, x, false));
   });
   out.nodes.push(line('zero-line', 'zero-line', x(0), top, x(0), bottom, style.lines.zero, style.lines.zeroWidth));
-  out.texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
+  out.nodes.push(...tickMarks);
+  out.texts.push(...valueLabels);
   out.texts.push(textNode(measure, { id: 'axis-title-value', role: 'axis-title', text: c.valueTitle, style: titleStyle, x: (left + right) / 2, top: bottom + tickGap + lineHeight(tick, factor) + tickGap, anchor: 'middle' }));
+  out.texts.push(textNode(measure, { id: 'axis-title-key', role: 'axis-title', text: c.keyTitle, style: titleStyle, x: c.body.x, top: c.body.y }));
   const shown = bars.filter((_, i) => i % k === 0).map((b) => b.label);
   const diagnostics = [...keyLabels.diagnostics, ...(k > 1 ? [thinned(c, k, bars.length, shown.length)] : [])];
   const plot = { x: left, y: top, width: right - left, height: bottom - top };
