@@ -6,7 +6,8 @@ import { layoutFrame } from '../layout/frame.js';
 import { valueFormatter } from '../layout/number-format.js';
 import { fitLabel, lineHeight, textBoxHeight, textNode } from '../layout/text.js';
 import { idMaker } from '../scene/ids.js';
-import type { AxisInfo, Box, Datum, SceneNode, TextNode } from '../scene/types.js';
+import type { AxisInfo, Box, Datum, Role, SceneNode, TextNode } from '../scene/types.js';
+import { segment } from '../svg/path.js';
 import type { Style } from '../style/types.js';
 import { barDescription, barValueTitle, foldNote } from './bar-text.js';
 import type { FormContext, FormResult } from './types.js';
@@ -52,8 +53,8 @@ function domainOf(bars: BarDatum[]): [number, number] {
 }
 
 /** A straight line as a path node. */
-function line(id: string, role: string, x1: number, y1: number, x2: number, y2: number, stroke: string, width: number): SceneNode {
-  return { kind: 'path', id, role, d: `M${x1} ${y1}L${x2} ${y2}`, fill: undefined, stroke, strokeWidth: width };
+function line(id: string, role: Role, x1: number, y1: number, x2: number, y2: number, stroke: string, width: number): SceneNode {
+  return { kind: 'path', id, role, commands: segment(x1, y1, x2, y2), stroke, strokeWidth: width };
 }
 
 function valueLabelsFit(c: Common, room: number, along: 'width' | 'height'): boolean {
@@ -186,8 +187,8 @@ function thinned(c: Common, k: number, total: number, shown: number): Diagnostic
 
 function axes(c: Common, vt: ValueTicks, valueOrient: AxisInfo['orient'], keyOrient: AxisInfo['orient'], scale: (v: number) => number, band: Band, keyTicks: string[], valueRange: [number, number], keyRange: [number, number]): AxisInfo[] {
   return [
-    { orient: valueOrient, field: c.derived.valueName, title: c.valueTitle, domain: vt.domain, ticks: vt.ticks, tickPositions: vt.ticks.map(scale), range: valueRange },
-    { orient: keyOrient, field: c.derived.plan.key.name, title: c.keyTitle, domain: band.domain(), ticks: keyTicks, tickPositions: keyTicks.map((k) => band(k)! + band.bandwidth() / 2), range: keyRange },
+    { orient: valueOrient, scale: 'linear', field: c.derived.valueName, title: c.valueTitle, domain: vt.domain, ticks: vt.ticks, tickPositions: vt.ticks.map(scale), range: valueRange },
+    { orient: keyOrient, scale: 'band', field: c.derived.plan.key.name, title: c.keyTitle, domain: band.domain(), ticks: keyTicks, tickPositions: keyTicks.map((k) => band(k)! + band.bandwidth() / 2), range: keyRange },
   ];
 }
 
@@ -299,6 +300,7 @@ export function layoutBar(derived: DerivedBars, ctx: FormContext): FormResult {
       title: brief.title ?? `${valueTitle} by ${derived.plan.key.label.toLowerCase()}`,
       description: brief.description ?? barDescription(derived, valueTitle, fmtValue),
       root: { kind: 'group', id: 'chart', role: 'chart', children }, axes: parts.axes, plot: parts.plot,
+      panels: [{ id: 'panel', plot: parts.plot, axes: parts.axes }], legends: [],
     },
     diagnostics,
   };
