@@ -1,9 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { ciede2000 } from '../../src/color/ciede2000.js';
 import { DEFICIENCIES, simulate, type Deficiency } from '../../src/color/cvd.js';
-import { rgbToLab } from '../../src/color/lab.js';
+import { ciede2000, rgbToLab } from '../../src/color/lab.js';
 import { hexToRgb, rgbToHex } from '../../src/color/srgb.js';
 import { DISTINCT_DE00 } from '../../src/style/check.js';
 import type { Style } from '../../src/style/types.js';
