@@ -1,8 +1,6 @@
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
-import { ciede2000 } from '../color/ciede2000.js';
-import { DEFICIENCIES, simulate } from '../color/cvd.js';
-import { rgbToLab } from '../color/lab.js';
-import { hexToRgb } from '../color/srgb.js';
+import { VISIONS } from '../color/cvd.js';
+import { deltaE } from '../color/distinct.js';
 import { contrastRatio, MARK_CONTRAST, TEXT_CONTRAST } from './contrast.js';
 import type { Style } from './types.js';
 
@@ -62,10 +60,10 @@ export function distinctnessWarnings(style: Style, file: string): Diagnostic[] {
   for (let i = 0; i < fills.length; i++) {
     for (let j = i + 1; j < fills.length; j++) {
       const [[na, a], [nb, b]] = [fills[i]!, fills[j]!];
-      for (const vision of [undefined, ...DEFICIENCIES]) {
-        const de = ciede2000(rgbToLab(vision ? simulate(hexToRgb(a), vision) : hexToRgb(a)), rgbToLab(vision ? simulate(hexToRgb(b), vision) : hexToRgb(b)));
+      for (const vision of VISIONS) {
+        const de = deltaE(a, b, vision);
         if (de >= DISTINCT_DE00) continue;
-        problems.push(diagnostic('brief.indistinct-colours', `palette.${na} ${a} and palette.${nb} ${b} differ by only ΔE00 ${de.toFixed(1)}${vision ? ` for a reader with ${vision}` : ''}`, {
+        problems.push(diagnostic('brief.indistinct-colours', `palette.${na} ${a} and palette.${nb} ${b} differ by only ΔE00 ${de.toFixed(1)}${vision === 'normal' ? '' : ` for a reader with ${vision}`}`, {
           file, path: `/palette/${nb}`, found: `ΔE00 ${de.toFixed(1)}`, expected: `at least ${DISTINCT_DE00}`, hint: 'change lightness as well as hue, so the fills differ for every reader',
         }));
         break;
