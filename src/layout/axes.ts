@@ -3,9 +3,9 @@ import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { AxisInfo, Box, Role, SceneNode, TextNode } from '../scene/types.js';
 import { segment } from '../svg/path.js';
 import { thinningStep } from './axis.js';
-import type { BandChannel, Channel, LayoutContext, LinearChannel } from './kit-types.js';
+import type { BandChannel, Channel, LayoutContext, LinearChannel, TimeChannel } from './kit-types.js';
 import type { FittedBandLabels } from './plot-box.js';
-import type { BandScale, LinearScale } from './scales.js';
+import type { BandScale, LinearScale, TimeScale } from './scales.js';
 import { lineHeight, textBoxHeight, textNode } from './text.js';
 
 /** One axis, drawn: gridlines (under the marks), tick marks, tick labels and title (over them). */
@@ -58,6 +58,32 @@ export function drawLinearAxis(side: 'left' | 'bottom', scale: LinearScale, chan
   });
   const info: AxisInfo = { orient: side, scale: 'linear', field: channel.field, title: channel.title, domain: scale.domain, ticks: scale.ticks, tickPositions: scale.ticks.map(scale.map), range: scale.range };
   return { grid, tickMarks: [], labels, title: axisTitleNode(side, channel, plot, body, ctx), info, diagnostics: [] };
+}
+
+/**
+ * Which of a time axis's labels to print: every k-th, the smallest k at which no two printed
+ * labels come closer than half the font size (labels of calendar ticks are not all equal, so
+ * thinning keeps a regular rhythm rather than picking favourites).
+ */
+function thinTimeLabels(scale: TimeScale, vertical: boolean, ctx: LayoutContext): boolean[] {
+  const { tick } = ctx.style.text;
+  const gap = tick.size * 0.5;
+  const extent = (l: string) => (vertical ? textBoxHeight(ctx.measure, tick) : ctx.measure.width(l, tick.size, tick.weight));
+  for (let k = 1; k <= scale.ticks.length; k++) {
+    const kept = scale.ticks.map((_, i) => i % k === 0);
+    const idx = kept.flatMap((on, i) => (on ? [i] : []));
+    const clear = idx.every((i, j) => j === 0 || Math.abs(scale.map(scale.ticks[i]!) - scale.map(scale.ticks[idx[j - 1]!]!)) >= (extent(scale.labels[i]!) + extent(scale.labels[idx[j - 1]!]!)) / 2 + gap);
+    if (clear) return kept;
+  }
+  return scale.ticks.map((_, i) => i === 0);
+}
+
+/** A time axis: a gridline at each calendar tick and its label at the data's grain, thinned to every k-th when crowded. */
+export function drawTimeAxis(side: 'left' | 'bottom', scale: TimeScale, channel: TimeChannel, plot: Box, body: Box, ctx: LayoutContext): DrawnAxis {
+  const shown = thinTimeLabels(scale, side === 'left', ctx);
+  const asLinear: LinearScale = { kind: 'linear', domain: scale.domain, range: scale.range, ticks: scale.ticks, labels: scale.labels, shown, map: scale.map };
+  const drawn = drawLinearAxis(side, asLinear, { kind: 'linear', name: channel.name, field: channel.field, title: channel.title, extent: channel.extent }, plot, body, ctx);
+  return { ...drawn, info: { ...drawn.info, scale: 'time', domain: scale.domain } };
 }
 
 /**

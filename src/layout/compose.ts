@@ -1,12 +1,13 @@
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Box, Scene, SceneNode } from '../scene/types.js';
 import { valueTicks } from './axis.js';
-import { drawBottomBandAxis, drawLeftBandAxis, drawLinearAxis, rule, type DrawnAxis } from './axes.js';
+import { drawBottomBandAxis, drawLeftBandAxis, drawLinearAxis, drawTimeAxis, rule, type DrawnAxis } from './axes.js';
 import { checkScene } from './checks.js';
 import { layoutFrame } from './frame.js';
-import type { CartesianDomains, FormMarks, FormWords, LabelRoom, LayoutContext, LinearChannel, PlotArea, ScaleProbe } from './kit-types.js';
-import { plotBox, type PlotBox } from './plot-box.js';
+import type { CartesianDomains, FormMarks, FormWords, LabelRoom, LayoutContext, LinearChannel, PlotArea, ScaleProbe, TimeChannel } from './kit-types.js';
+import { plotBox, tickCount, type PlotBox } from './plot-box.js';
 import { bandScale, linearScale, type BandScale, type LinearScale, type Scale } from './scales.js';
+import { timeScale, type TimeScale } from './time-scale.js';
 
 /** What the composer needs of a form drawn on a left and a bottom axis. */
 export interface CartesianForm<D> {
@@ -40,6 +41,17 @@ function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], 
   return linearScale(vt, [rangeLeft, rangeRight]);
 }
 
+/** A bottom time axis, inset like a linear one so its end labels stay inside the plot's width. */
+function bottomTime(channel: TimeChannel, plot: Box, ctx: LayoutContext): TimeScale {
+  const { tick } = ctx.style.text;
+  const [left, right] = [plot.x, plot.x + plot.width];
+  const probe = timeScale(channel.extent, [left, right], tickCount(plot.width, 'horizontal'));
+  const half = (i: number) => (probe.labels.length ? ctx.measure.width(probe.labels[i]!, tick.size, tick.weight) / 2 : 0);
+  const rangeLeft = left + Math.max(0, half(0) - ctx.style.spacing.tickGap);
+  const rangeRight = right - Math.max(0, half(probe.labels.length - 1));
+  return timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'));
+}
+
 interface FittedScales { x: Scale; y: Scale; room: LabelRoom }
 
 /** Builds both scales from the forms' domains over the plot box, taking the room the form's labels need. */
@@ -54,8 +66,10 @@ function fitScales<D>(form: CartesianForm<D>, derived: D, domains: CartesianDoma
     ? { plot, side: 'left', band: bottomBand, linear: linearScale(left.probe, [plot.y + plot.height, plot.y]) }
     : bottomProbe ? { plot, side: 'bottom', band: leftBand, linear: linearScale(bottomProbe, [plot.x, plot.x + plot.width]) } : undefined;
   const room = probe && form.room ? form.room(derived, probe, ctx) : NO_ROOM;
-  const y = domains.left.kind === 'linear' ? leftLinear(domains.left, plot, probe?.side === 'left' ? room : NO_ROOM, ctx) : leftBand!;
-  const x = domains.bottom.kind === 'linear' ? bottomLinear(domains.bottom, plot, bottomProbe!.labels, probe?.side === 'bottom' ? room : NO_ROOM, ctx) : bottomBand!;
+  const y = domains.left.kind === 'linear' ? leftLinear(domains.left, plot, probe?.side === 'left' ? room : NO_ROOM, ctx)
+    : domains.left.kind === 'time' ? timeScale(domains.left.extent, [plot.y + plot.height, plot.y], tickCount(plot.height, 'vertical')) : leftBand!;
+  const x = domains.bottom.kind === 'linear' ? bottomLinear(domains.bottom, plot, bottomProbe!.labels, probe?.side === 'bottom' ? room : NO_ROOM, ctx)
+    : domains.bottom.kind === 'time' ? bottomTime(domains.bottom, plot, ctx) : bottomBand!;
   return { x, y, room };
 }
 
@@ -63,6 +77,7 @@ function drawAxis(side: 'left' | 'bottom', domains: CartesianDomains, scales: Fi
   const channel = domains[side];
   const scale = side === 'left' ? scales.y : scales.x;
   if (channel.kind === 'linear' && scale.kind === 'linear') return drawLinearAxis(side, scale, channel, box.plot, body, ctx);
+  if (channel.kind === 'time' && scale.kind === 'time') return drawTimeAxis(side, scale, channel, box.plot, body, ctx);
   if (channel.kind === 'band' && side === 'bottom' && scale.kind === 'band') return drawBottomBandAxis(scale, channel, box.plot, body, ctx);
   if (channel.kind === 'band' && box.left.kind === 'band') return drawLeftBandAxis(box.left, channel, box.plot, body, ctx);
   throw new Error(`no axis drawer for a ${channel.kind} channel on the ${side}`);

@@ -36,8 +36,17 @@ export interface BandChannel {
   domain: string[];
 }
 
+/** A time channel: the span of UTC times (epoch ms) its axis must cover, drawn to scale. */
+export interface TimeChannel {
+  kind: 'time';
+  name: string;
+  field: string;
+  title: string;
+  extent: [number, number];
+}
+
 /** What a channel of a form spans. */
-export type Channel = LinearChannel | BandChannel;
+export type Channel = LinearChannel | BandChannel | TimeChannel;
 
 /** The channels of a chart with a left and a bottom axis, as a form reports them. */
 export interface CartesianDomains {

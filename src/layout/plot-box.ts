@@ -4,6 +4,7 @@ import type { Box } from '../scene/types.js';
 import { valueTicks, type ValueTicks } from './axis.js';
 import type { BandChannel, CartesianDomains, LayoutContext } from './kit-types.js';
 import { bandScale, type BandScale } from './scales.js';
+import { timeScale, type TimeScale } from './time-scale.js';
 import { fitLabel, lineHeight, textBoxHeight } from './text.js';
 
 /** Longest share of the body the labels of a left band axis may take (wrapped, then shortened). */
@@ -20,7 +21,12 @@ export interface FittedBandLabels {
 }
 
 /** How the left axis was measured: a probe of its ticks, or its fitted band labels. */
-export type LeftFit = { kind: 'linear'; probe: ValueTicks } | ({ kind: 'band' } & FittedBandLabels);
+export type LeftFit = { kind: 'linear'; probe: ValueTicks } | { kind: 'time'; probe: TimeScale } | ({ kind: 'band' } & FittedBandLabels);
+
+/** About how many ticks a continuous axis of this length gets (common practice: one per 50 px upright, 90 px across). */
+export function tickCount(length: number, direction: 'vertical' | 'horizontal'): number {
+  return Number.isFinite(length) ? Math.max(2, Math.round(length / (direction === 'vertical' ? 50 : 90)) + 1) : 2;
+}
 
 /** The plot box and what was measured to find it. */
 export interface PlotBox {
@@ -62,6 +68,10 @@ export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext
     const [lo, hi] = domains.left.extent;
     const probe = valueTicks(lo, hi, bottom - top, 'vertical', tick, measure, domains.left.format);
     left = { kind: 'linear', probe };
+    leftWidth = max(probe.labels, (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
+  } else if (domains.left.kind === 'time') {
+    const probe = timeScale(domains.left.extent, [bottom, top], tickCount(bottom - top, 'vertical'));
+    left = { kind: 'time', probe };
     leftWidth = max(probe.labels, (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
   } else {
     const fitted = fitBandLabels(domains.left, bandScale(domains.left.domain, [top, bottom], style.spacing.bandPadding), body, ctx);

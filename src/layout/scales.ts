@@ -1,5 +1,6 @@
 import { scaleBand, scaleLinear } from 'd3-scale';
 import type { ValueTicks } from './axis.js';
+import type { TimeScale } from './time-scale.js';
 
 /** A continuous scale with its ticks: data value → px. */
 export interface LinearScale {
@@ -29,7 +30,9 @@ export interface BandScale {
 }
 
 /** Any scale an axis can draw. */
-export type Scale = LinearScale | BandScale;
+export type Scale = LinearScale | BandScale | TimeScale;
+
+export type { TimeScale };
 
 /** A linear scale over ticks chosen for it, mapping their domain onto `range`. */
 export function linearScale(ticks: ValueTicks, range: [number, number]): LinearScale {
