@@ -1,0 +1,131 @@
+import { randomBytes } from 'node:crypto';
+import { constants } from 'node:fs';
+import { lstat, mkdir, open, readdir, rename, rm } from 'node:fs/promises';
+import { dirname, join } from 'node:path';
+
+/** The file operations a commit needs; tests inject failing ones (a full disk). */
+export interface OutputFs {
+  mkdir(dir: string): Promise<void>;
+  /** Creates `path` exclusively (never an existing file, FIFO or link), writes `data` and syncs it to disk. */
+  writeNew(path: string, data: string | Buffer): Promise<void>;
+  rename(from: string, to: string): Promise<void>;
+  remove(path: string): Promise<void>;
+  list(dir: string): Promise<string[]>;
+  /** Modification time in ms of a regular file (links and other kinds: undefined). */
+  fileMtime(path: string): Promise<number | undefined>;
+}
+
+// O_EXCL: fail on anything already there, even a dangling link or a FIFO; O_NOFOLLOW also
+// where the platform has it (not on Windows, where it is 0).
+const CREATE_NEW = constants.O_WRONLY | constants.O_CREAT | constants.O_EXCL | (constants.O_NOFOLLOW ?? 0);
+
+/** The real file system. */
+export const nodeOutputFs: OutputFs = {
+  mkdir: async (dir) => { await mkdir(dir, { recursive: true }); },
+  async writeNew(path, data) {
+    const handle = await open(path, CREATE_NEW, 0o666);
+    try {
+      await handle.writeFile(data);
+      await handle.sync();
+    } finally {
+      await handle.close();
+    }
+  },
+  rename: (from, to) => rename(from, to),
+  remove: (path) => rm(path, { force: true }),
+  list: (dir) => readdir(dir),
+  async fileMtime(path) {
+    const s = await lstat(path);
+    return s.isFile() ? s.mtimeMs : undefined;
+  },
+};
+
+/**
+ * chartwright's temporaries: `.chartwright-<owner>-<16 random hex>.tmp` beside the final file.
+ * The owner is the writing process's id; the random part makes the name unpredictable, so no
+ * link or FIFO can be planted in its place.
+ */
+export const TEMP_PATTERN = /^\.chartwright-(\w+)-[0-9a-f]{16}\.tmp$/;
+
+/** A temporary younger than this is never removed: its writer may still be renaming it. */
+export const STALE_AFTER_MS = 60_000;
+/** A temporary older than this is stale whoever owns it (its pid may have been reused). */
+export const ABANDONED_AFTER_MS = 60 * 60_000;
+
+/** What the sweep needs to know about the world. */
+export interface Housekeeping {
+  /** Whether a process id is running on this machine. */
+  alive(pid: number): boolean;
+  /** Wall-clock time in ms (to age temporaries). */
+  now(): number;
+}
+
+/**
+ * Whether a temporary is stale: a temporary lives only while its brief is committed (seconds),
+ * so one at least a minute old whose owning process is gone (kill -9), or any at least an hour
+ * old, was left behind.
+ */
+export function isStale(name: string, ageMs: number, world: Housekeeping): boolean {
+  const match = TEMP_PATTERN.exec(name);
+  if (!match || ageMs < STALE_AFTER_MS) return false;
+  const pid = /^\d+$/.test(match[1]!) ? Number(match[1]) : undefined;
+  return ageMs >= ABANDONED_AFTER_MS || (pid !== undefined && !world.alive(pid));
+}
+
+/** Removes stale temporaries of chartwright's own naming from a folder; nothing else is touched. */
+async function sweep(dir: string, fs: OutputFs, world: Housekeeping): Promise<void> {
+  let names: string[];
+  try { names = await fs.list(dir); } catch { return; }
+  for (const name of names.filter((n) => TEMP_PATTERN.test(n))) {
+    try {
+      const mtime = await fs.fileMtime(join(dir, name));
+      if (mtime !== undefined && isStale(name, world.now() - mtime, world)) await fs.remove(join(dir, name));
+    } catch { /* gone already, or not ours to judge: leave it */ }
+  }
+}
+
+/** A file to commit: where it goes, and its bytes. */
+export interface FileContent {
+  path: string;
+  data: string | Buffer;
+}
+
+/** Writes one temporary; a half-written one is removed (but never a file that was there before: EEXIST). */
+async function writeTemp(fs: OutputFs, temp: string, data: string | Buffer): Promise<void> {
+  try {
+    await fs.writeNew(temp, data);
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code !== 'EEXIST') await fs.remove(temp).catch(() => {});
+    throw e;
+  }
+}
+
+/**
+ * Writes one brief's files all together or not at all: every file goes to a temporary first
+ * (created exclusively, synced); only when all are complete are they renamed into place. On any
+ * failure the temporaries are removed, so no new SVG is left beside a PNG that failed. The first
+ * write into a folder in a run sweeps that folder's stale temporaries.
+ */
+export function createCommitter(owner: string, world: Housekeeping, fs: OutputFs = nodeOutputFs): (files: FileContent[]) => Promise<void> {
+  const swept = new Set<string>();
+  return async (files) => {
+    const temps: { temp: string; path: string }[] = [];
+    try {
+      for (const f of files) {
+        const dir = dirname(f.path);
+        await fs.mkdir(dir);
+        if (!swept.has(dir)) { swept.add(dir); await sweep(dir, fs, world); }
+        const temp = join(dir, `.chartwright-${owner}-${randomBytes(8).toString('hex')}.tmp`);
+        await writeTemp(fs, temp, f.data);
+        temps.push({ temp, path: f.path });
+      }
+      for (const [i, t] of temps.entries()) {
+        await fs.rename(t.temp, t.path);
+        temps[i] = { temp: '', path: t.path };
+      }
+    } catch (e) {
+      await Promise.all(temps.filter((t) => t.temp).map((t) => fs.remove(t.temp).catch(() => {})));
+      throw e;
+    }
+  };
+}
