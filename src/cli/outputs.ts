@@ -71,6 +71,13 @@ function checkOutput(name: string, at: string, base: string, rules: OutputRules)
   return { path };
 }
 
+/** The SVG of an output name, and the PNG beside it when the name is .png or `png` is set. */
+function withPng(path: string, png: boolean): PlannedFile[] {
+  const stem = path.slice(0, path.length - extname(path).length);
+  const svg: PlannedFile = { path: `${stem}.svg`, kind: 'svg' };
+  return extname(path).toLowerCase() === '.png' || png ? [svg, { path: `${stem}.png`, kind: 'png' }] : [svg];
+}
+
 /**
  * The files one brief renders to, or the problems with its `output:` names. The brief's
  * `output` names them (relative to the brief, or to `outDir`); by default the brief's own name
@@ -79,15 +86,14 @@ function checkOutput(name: string, at: string, base: string, rules: OutputRules)
  */
 export function plannedOutputs(briefFile: string, outputs: string[], rules: OutputRules): { files: PlannedFile[]; problems: Diagnostic[] } {
   const base = resolve(rules.outDir ?? dirname(briefFile));
-  const names = outputs.length ? outputs : [`${basename(briefFile, extname(briefFile))}.svg`];
+  // The default name comes from the brief's own file name, which needs no checking.
+  if (!outputs.length) return { files: withPng(join(base, `${basename(briefFile, extname(briefFile))}.svg`), rules.png), problems: [] };
   const files = new Map<string, PlannedFile>();
   const problems: Diagnostic[] = [];
-  for (const [i, name] of names.entries()) {
+  for (const [i, name] of outputs.entries()) {
     const checked = checkOutput(name, outputs.length > 1 ? `/output/${i}` : '/output', base, rules);
     if ('problem' in checked) { problems.push(checked.problem); continue; }
-    const stem = checked.path.slice(0, checked.path.length - extname(checked.path).length);
-    files.set(`${stem}.svg`, { path: `${stem}.svg`, kind: 'svg' });
-    if (extname(checked.path).toLowerCase() === '.png' || rules.png) files.set(`${stem}.png`, { path: `${stem}.png`, kind: 'png' });
+    for (const f of withPng(checked.path, rules.png)) files.set(f.path, f);
   }
   return { files: problems.length ? [] : [...files.values()], problems };
 }
