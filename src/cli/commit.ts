@@ -47,8 +47,13 @@ export const nodeOutputFs: OutputFs = {
  */
 export const TEMP_PATTERN = /^\.chartwright-(\w+)-[0-9a-f]{16}\.tmp$/;
 
-/** A temporary younger than this is never removed: its writer may still be renaming it. */
-export const STALE_AFTER_MS = 60_000;
+/**
+ * A temporary younger than this is never removed: its writer may still be renaming it (a
+ * temporary lives only while its brief's files are written: well under a second, seconds for a
+ * large PNG on a slow disk). It also covers a writer on another machine sharing the folder, whose
+ * process id means nothing here.
+ */
+export const STALE_AFTER_MS = 10_000;
 /** A temporary older than this is stale whoever owns it (its pid may have been reused). */
 export const ABANDONED_AFTER_MS = 60 * 60_000;
 
@@ -62,7 +67,7 @@ export interface Housekeeping {
 
 /**
  * Whether a temporary is stale: a temporary lives only while its brief is committed (seconds),
- * so one at least a minute old whose owning process is gone (kill -9), or any at least an hour
+ * so one at least 10 s old whose owning process is gone (kill -9), or any at least an hour
  * old, was left behind.
  */
 export function isStale(name: string, ageMs: number, world: Housekeeping): boolean {

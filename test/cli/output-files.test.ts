@@ -1,11 +1,13 @@
+import { execFileSync, spawn } from 'node:child_process';
 import { mkdirSync, readFileSync, symlinkSync, utimesSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { open } from 'node:fs/promises';
+import { describe, expect, it, vi } from 'vitest';
 import { renderBatch } from '../../src/cli/batch.js';
 import { ABANDONED_AFTER_MS, createCommitter, isStale, nodeOutputFs, TEMP_PATTERN, type OutputFs } from '../../src/cli/commit.js';
 import { EXIT } from '../../src/cli/exit-codes.js';
 import { runCli } from '../../src/cli/run.js';
-import { env, tempDir } from '../helpers.js';
+import { env, root, tempDir } from '../helpers.js';
 import { files, io, pierBrief, workspace } from './cli-helpers.js';
 
 const world = { alive: () => true, now: () => Date.now() };
@@ -70,6 +72,26 @@ describe('temporary files (a past planted link at the predictable <out>.<pid>.tm
     expect(readFileSync(join(dir, 'plain.tmp'), 'utf8')).toBe('there before');
   });
 
+  it('are written, then synced to disk (so a rename never publishes unsynced bytes)', async () => {
+    const dir = tempDir();
+    writeFileSync(join(dir, 'probe'), '');
+    const probe = await open(join(dir, 'probe'), 'r');
+    const handle = Object.getPrototypeOf(probe) as Record<'writeFile' | 'sync', (...a: unknown[]) => Promise<unknown>>;
+    await probe.close();
+    const calls: string[] = [];
+    const spies = (['writeFile', 'sync'] as const).map((m) => {
+      const real = handle[m];
+      return vi.spyOn(handle, m).mockImplementation(function (this: unknown, ...a: unknown[]) { calls.push(m); return real.apply(this, a); });
+    });
+    try {
+      await nodeOutputFs.writeNew(join(dir, 'new.tmp'), 'data');
+    } finally {
+      for (const s of spies) s.mockRestore();
+    }
+    expect(calls).toEqual(['writeFile', 'sync']);
+    expect(readFileSync(join(dir, 'new.tmp'), 'utf8')).toBe('data');
+  });
+
   it('have unpredictable names of chartwright\'s own pattern, and a link at the old predictable name is left alone', async () => {
     const dir = workspace();
     const outside = join(tempDir(), 'victim.txt');
@@ -117,13 +139,28 @@ describe('stale temporaries of a killed run (kill -9 left 5 of 59) are removed b
     expect(files(join(dir, 'out'))).toEqual([...keep, `.chartwright-77-${'d'.repeat(16)}.tmp`, `.chartwright-88-${'b'.repeat(16)}.tmp`, 'piers.svg'].sort());
   });
 
+  it('the bin removes the temporary of a process killed with kill -9', async () => {
+    const dir = workspace();
+    mkdirSync(join(dir, 'out'));
+    // A stand-in writer: creates a temporary of chartwright's pattern under its own pid, then hangs until killed.
+    const script = "const fs = require('node:fs'); fs.writeFileSync(`out/.chartwright-${process.pid}-${'e'.repeat(16)}.tmp`, 'half'); console.log('ready'); setInterval(() => {}, 1000);";
+    const child = spawn(process.execPath, ['-e', script], { cwd: dir, stdio: ['ignore', 'pipe', 'ignore'] });
+    await new Promise((resolve) => child.stdout!.once('data', resolve));
+    child.kill('SIGKILL');
+    await new Promise((resolve) => child.once('exit', resolve));
+    const temp = join(dir, 'out', `.chartwright-${child.pid}-${'e'.repeat(16)}.tmp`);
+    old(temp, 20_000);
+    execFileSync(process.execPath, [join(root, 'bin', 'chartwright.js'), 'render', 'piers.yaml', '-o', 'out'], { cwd: dir, stdio: 'pipe' });
+    expect(files(join(dir, 'out'))).toEqual(['piers.svg']);
+  });
+
   it('judges staleness by the documented rule', () => {
     const gone = { alive: () => false, now: () => 0 };
     const running = { alive: () => true, now: () => 0 };
     const tmp = `.chartwright-123-${'0'.repeat(16)}.tmp`;
-    expect(isStale(tmp, 59_000, gone)).toBe(false);
-    expect(isStale(tmp, 60_000, gone)).toBe(true);
-    expect(isStale(tmp, 60_000, running)).toBe(false);
+    expect(isStale(tmp, 9_999, gone)).toBe(false);
+    expect(isStale(tmp, 10_000, gone)).toBe(true);
+    expect(isStale(tmp, 10_000, running)).toBe(false);
     expect(isStale(tmp, ABANDONED_AFTER_MS, running)).toBe(true);
     expect(isStale('piers.svg.123.tmp', ABANDONED_AFTER_MS, gone)).toBe(false);
   });
