@@ -2,6 +2,7 @@ import { readdirSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { describeBytes, INPUT_LIMITS, readBounded } from '../io/bounded-read.js';
+import { canonicalPath } from './outputs.js';
 
 /** One brief of a run: its file, or what is wrong with the path that should have given briefs. */
 export interface BriefEntry {
@@ -29,13 +30,20 @@ function folderEntries(full: string, list: (dir: string) => string[]): BriefEntr
  * Brief paths from the command line: a folder stands for the briefs in it (.yaml and .yml
  * files, and .brief.json; plain .json is left out, as it may be data), sorted by name. A folder
  * that cannot be read, or holds no briefs, is one failed entry; the rest of the run goes on.
+ * A brief reached twice is listed once.
  */
 export function expandBriefs(paths: string[], cwd: string, list: (dir: string) => string[] = readdirSync): BriefEntry[] {
-  return paths.flatMap((p) => {
+  const entries = paths.flatMap((p) => {
     const full = resolve(cwd, p);
     let isDir = false;
     try { isDir = statSync(full).isDirectory(); } catch { /* a missing path is reported as brief.not-found */ }
     return isDir ? folderEntries(full, list) : [{ file: full }];
+  });
+  // A brief named twice (`briefs/*.yaml briefs/`) is rendered once, not refused as colliding with itself.
+  const seen = new Set<string>();
+  return entries.filter((e) => {
+    const key = canonicalPath(e.file);
+    return !seen.has(key) && !!seen.add(key);
   });
 }
 

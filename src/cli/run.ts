@@ -76,7 +76,7 @@ function progress(io: CliIo, count: number, quiet: boolean): { step: (done: numb
 function printBrief(io: CliIo, r: BriefReport, quiet: boolean): void {
   report(io, r.diagnostics, quiet);
   for (const w of r.written) io.stdout(`${shown(io, w)}\n`);
-  if (r.timings) io.stderr(`${shown(io, r.brief)}: ${r.timings.map((t) => `${t.stage} ${t.ms.toFixed(2)} ms`).join(', ')}\n`);
+  if (r.timings && !quiet) io.stderr(`${shown(io, r.brief)}: ${r.timings.map((t) => `${t.stage} ${t.ms.toFixed(2)} ms`).join(', ')}\n`);
 }
 
 async function writeReport(io: CliIo, reports: BriefReport[], opts: BatchOptions, path: string): Promise<boolean> {
@@ -136,7 +136,7 @@ function chartwrightVersion(): string {
 const withCommonFlags = (c: Command) => c
   .option('--strict', 'treat warnings as errors')
   .option('--lenient', 'draw the nearest honest form, with a warning, instead of failing on a hard rule')
-  .option('-q, --quiet', 'print only errors on stderr (no warnings, progress or notes)')
+  .option('-q, --quiet', 'print only errors on stderr (no warnings, progress or timings)')
   .option('--allow-outside', 'let `output:` write outside the brief\'s folder (or -o DIR), absolute paths included');
 
 const withRenderFlags = (c: Command) => withCommonFlags(c)

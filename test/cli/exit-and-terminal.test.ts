@@ -127,11 +127,12 @@ describe('results as each brief finishes, and -q/--quiet', () => {
     const dir = workspace();
     const t = io(dir);
     t.io.isTTY = true;
-    expect(await runCli(['render', 'warn.yaml', 'typo.yaml', '-q'], t.io)).toBe(EXIT.FAILED);
+    expect(await runCli(['render', 'warn.yaml', 'typo.yaml', '-q', '--timings'], t.io)).toBe(EXIT.FAILED);
     expect(t.out()).toBe('warn.svg\n');
     expect(t.err()).toContain('typo.yaml: \u001b[31merror\u001b[0m[brief.unknown-column]');
     expect(t.err()).not.toContain('warning');
     expect(t.err()).not.toContain('[1/2]');
+    expect(t.err()).not.toContain(' ms');
     const c = io(dir);
     expect(await runCli(['check', 'warn.yaml', '--quiet'], c.io)).toBe(EXIT.OK);
     expect(c.err()).toBe('');

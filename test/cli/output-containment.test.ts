@@ -94,6 +94,14 @@ describe('collisions are refused before anything is written', () => {
     expect(t.out()).toBe('piers.svg\n');
   });
 
+  it('a brief named twice (once directly, once by its folder) is rendered once, not refused as colliding with itself', async () => {
+    const dir = workspace();
+    const t = io(dir);
+    expect(await runCli(['render', 'piers.yaml', './piers.yaml', '.'], t.io)).toBe(EXIT.FAILED);
+    expect(t.out()).toBe('piers.svg\nwarn.svg\n');
+    expect(t.err()).not.toContain('output.collision');
+  });
+
   it('--report pointed at a brief or data file of the run, or at one of its outputs, is a usage error and writes nothing', async () => {
     for (const [target, code] of [['piers.yaml', 'output.overwrites-input'], ['piers.csv', 'output.overwrites-input'], ['piers.svg', 'output.collision']]) {
       const dir = workspace();
