@@ -1,6 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { constants } from 'node:fs';
-import { lstat, mkdir, open, readdir, rename, rm } from 'node:fs/promises';
+import { link, lstat, mkdir, open, readdir, rename, rm } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 
 /** The file operations a commit needs; tests inject failing ones (a full disk). */
@@ -13,6 +13,10 @@ export interface OutputFs {
   list(dir: string): Promise<string[]>;
   /** Modification time in ms of a regular file (links and other kinds: undefined). */
   fileMtime(path: string): Promise<number | undefined>;
+  /** What is at a path, without following a link. */
+  kind(path: string): Promise<'none' | 'folder' | 'other'>;
+  /** A second name (hard link) for an existing file, to restore it if a commit is rolled back. */
+  link(existing: string, path: string): Promise<void>;
 }
 
 // O_EXCL: fail on anything already there, even a dangling link or a FIFO; O_NOFOLLOW also
@@ -38,6 +42,15 @@ export const nodeOutputFs: OutputFs = {
     const s = await lstat(path);
     return s.isFile() ? s.mtimeMs : undefined;
   },
+  async kind(path) {
+    try {
+      return (await lstat(path)).isDirectory() ? 'folder' : 'other';
+    } catch (e) {
+      if ((e as NodeJS.ErrnoException).code === 'ENOENT') return 'none';
+      throw e;
+    }
+  },
+  link: (existing, path) => link(existing, path),
 };
 
 /**
@@ -105,29 +118,69 @@ async function writeTemp(fs: OutputFs, temp: string, data: string | Buffer): Pro
   }
 }
 
+const tempName = (dir: string, owner: string) => join(dir, `.chartwright-${owner}-${randomBytes(8).toString('hex')}.tmp`);
+
+/** A hard link to the file a commit will replace, to put it back on a rollback; none where links fail. */
+async function keepOld(path: string, backup: string, fs: OutputFs): Promise<string | undefined> {
+  if ((await fs.kind(path)) === 'none') return undefined;
+  try {
+    await fs.link(path, backup);
+    return backup;
+  } catch {
+    return undefined;
+  }
+}
+
+interface Temp { temp: string; path: string }
+
+/**
+ * Renames complete temporaries into place. A folder in the way fails before anything is renamed;
+ * should a rename still fail, the files already renamed are put back as they were (from hard
+ * links kept for the purpose) or removed when they are new.
+ */
+async function publish(temps: Temp[], fs: OutputFs, owner: string): Promise<void> {
+  for (const t of temps) {
+    if ((await fs.kind(t.path)) === 'folder') throw Object.assign(new Error(`EISDIR: a folder is in the way of ${t.path}`), { code: 'EISDIR' });
+  }
+  const done: { path: string; backup?: string }[] = [];
+  const backups: string[] = [];
+  try {
+    for (const t of temps) {
+      const backup = await keepOld(t.path, tempName(dirname(t.path), owner), fs);
+      if (backup) backups.push(backup);
+      await fs.rename(t.temp, t.path);
+      t.temp = '';
+      done.push({ path: t.path, backup });
+    }
+  } catch (e) {
+    for (const d of done.reverse()) await (d.backup ? fs.rename(d.backup, d.path) : fs.remove(d.path)).catch(() => {});
+    throw e;
+  } finally {
+    await Promise.all(backups.map((b) => fs.remove(b).catch(() => {})));
+  }
+}
+
 /**
  * Writes one brief's files all together or not at all: every file goes to a temporary first
- * (created exclusively, synced); only when all are complete are they renamed into place. On any
- * failure the temporaries are removed, so no new SVG is left beside a PNG that failed. The first
- * write into a folder in a run sweeps that folder's stale temporaries.
+ * (created exclusively, synced); only when all are complete are they renamed into place, and a
+ * failed rename puts back what was there. On any failure the temporaries are removed, so no new
+ * SVG is left beside a PNG that failed. The first write into a folder in a run sweeps that
+ * folder's stale temporaries.
  */
 export function createCommitter(owner: string, world: Housekeeping, fs: OutputFs = nodeOutputFs): (files: FileContent[]) => Promise<void> {
   const swept = new Set<string>();
   return async (files) => {
-    const temps: { temp: string; path: string }[] = [];
+    const temps: Temp[] = [];
     try {
       for (const f of files) {
         const dir = dirname(f.path);
         await fs.mkdir(dir);
         if (!swept.has(dir)) { swept.add(dir); await sweep(dir, fs, world); }
-        const temp = join(dir, `.chartwright-${owner}-${randomBytes(8).toString('hex')}.tmp`);
+        const temp = tempName(dir, owner);
         await writeTemp(fs, temp, f.data);
         temps.push({ temp, path: f.path });
       }
-      for (const [i, t] of temps.entries()) {
-        await fs.rename(t.temp, t.path);
-        temps[i] = { temp: '', path: t.path };
-      }
+      await publish(temps, fs, owner);
     } catch (e) {
       await Promise.all(temps.filter((t) => t.temp).map((t) => fs.remove(t.temp).catch(() => {})));
       throw e;

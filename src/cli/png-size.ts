@@ -18,7 +18,7 @@ export function pngSizeProblem(width: number, height: number, scale: number, fil
   }
   if (w < 1 || h < 1) {
     return diagnostic('output.png-too-small', `the PNG would be under 1 pixel on a side (${width} × ${height} at scale ${scale})`, {
-      file, found: `scale ${scale}`, expected: `a scale of at least ${1 / Math.min(width, height)}`, hint: 'use --scale 1 or 2 (the default)',
+      file, found: `scale ${scale}`, expected: `a scale of at least ${Math.ceil(1e4 / Math.min(width, height)) / 1e4}`, hint: 'use --scale 1 or 2 (the default)',
     });
   }
   return undefined;

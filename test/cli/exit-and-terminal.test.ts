@@ -62,6 +62,7 @@ describe('--scale is checked against the pixels it makes (1e-300 once failed as 
     const t = io(dir);
     expect(await runCli(['render', 'piers.yaml', '--png', '--scale', '1e-300'], t.io)).toBe(EXIT.FAILED);
     expect(t.err()).toContain('error[output.png-too-small]');
+    expect(t.err()).toContain('expected: a scale of at least 0.0023');
     expect(t.err()).not.toContain('render.internal');
     expect(existsSync(join(dir, 'piers.svg'))).toBe(false);
   });

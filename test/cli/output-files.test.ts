@@ -49,6 +49,30 @@ describe('a brief\'s outputs are committed together or not at all (a past full d
     expect(files(dir).filter((f) => /\.(svg|png|json)$|\.tmp$/.test(f))).toEqual([]);
   });
 
+  it('when a rename fails after another succeeded, the file already renamed is put back as it was', async () => {
+    const dir = workspace();
+    writeFileSync(join(dir, 'piers.svg'), 'the old chart');
+    let renames = 0;
+    const fs: OutputFs = { ...nodeOutputFs, rename: async (from, to) => {
+      renames += 1;
+      if (renames === 2 && to.endsWith('.png')) throw Object.assign(new Error('EACCES: permission denied, rename'), { code: 'EACCES' });
+      return nodeOutputFs.rename(from, to);
+    } };
+    const [report] = await renderBatch([join(dir, 'piers.yaml')], env, { ...batch, fs }, dir);
+    expect(report!.diagnostics.map((d) => d.code)).toEqual(['output.write-failed']);
+    expect(readFileSync(join(dir, 'piers.svg'), 'utf8')).toBe('the old chart');
+    expect(files(dir)).toEqual(['gaps.csv', 'piers.csv', 'piers.svg', 'piers.yaml', 'typo.yaml', 'warn.yaml']);
+  });
+
+  it('a folder in the way of one output (a --scene folder for one brief) fails before any file is renamed', async () => {
+    const dir = workspace();
+    mkdirSync(join(dir, 'scenes'));
+    const t = io(dir);
+    expect(await runCli(['render', 'piers.yaml', '--scene', 'scenes'], t.io)).toBe(EXIT.FAILED);
+    expect(t.err()).toContain('error[output.write-failed]');
+    expect(files(dir)).toEqual(['gaps.csv', 'piers.csv', 'piers.yaml', 'scenes', 'typo.yaml', 'warn.yaml']);
+  });
+
   it('the CLI reports the failed brief and goes on with the next', async () => {
     const dir = workspace();
     writeFileSync(join(dir, 'second.yaml'), pierBrief());
