@@ -102,6 +102,13 @@ describe('control characters never reach the terminal (ESC and BEL in a column n
     expect(raw).not.toMatch(/[\u0000-\u0009\u000b-\u001f\u007f-\u009f]/);
   });
 
+  it('command-line errors echo the typed text escaped', async () => {
+    const t = io(workspace());
+    expect(await runCli(['render', 'piers.yaml', '--sc\u001b]0;x\u0007ale'], t.io)).toBe(EXIT.USAGE);
+    expect(t.err()).toContain('--sc\\u001b]0;x\\u0007ale');
+    expect(t.err()).not.toMatch(/[\u001b\u0007]/);
+  });
+
   it('explain --json escapes DEL and C1 too, and stays JSON that reads back the same', async () => {
     const dir = workspace();
     writeFileSync(join(dir, 'c1.csv'), 'pier,n\u009b\u007f\nNorth,1\n');
