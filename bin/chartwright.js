@@ -31,12 +31,26 @@ async function loadCli() {
 }
 
 const cli = await loadCli();
-// A reader that stops early (`chartwright render … | head`) closes the pipe: stop quietly.
+// A reader that stops early (`chartwright render … | head`) closes the pipe: stop quietly. Any
+// other failure to write our own output (`--version > /dev/full`: ENOSPC; EIO) ends the run with
+// one line on stderr and exit 1, never a stack trace.
 for (const stream of [process.stdout, process.stderr]) {
   stream.on('error', (e) => {
     if (e.code === 'EPIPE') process.exit(process.exitCode ?? 0);
-    throw e;
+    if (stream === process.stdout) {
+      try { process.stderr.write(`chartwright: cannot write to stdout (${e.code ?? e.message})\n`); } catch { /* stderr is gone too */ }
+    }
+    process.exit(1);
   });
+}
+/** Whether a process runs on this machine (EPERM: it does, under another user). */
+function alive(pid) {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (e) {
+    return e.code === 'EPERM';
+  }
 }
 process.exitCode = await cli.runCli(process.argv.slice(2), {
   stdout: (text) => process.stdout.write(text),
@@ -46,4 +60,6 @@ process.exitCode = await cli.runCli(process.argv.slice(2), {
   isTTY: Boolean(process.stderr.isTTY),
   pid: process.pid,
   clock: () => performance.now(),
+  alive,
+  now: () => Date.now(),
 });

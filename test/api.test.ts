@@ -29,7 +29,7 @@ describe('library API', () => {
 
   it('every catalogued code has a severity, and codes are namespaced by stage', () => {
     for (const [code, severity] of Object.entries(api.CATALOGUE)) {
-      expect(code).toMatch(/^(brief|table|fields|choice|derive|layout|output|render)\.[a-z-]+$/);
+      expect(code).toMatch(/^(brief|table|fields|choice|derive|layout|output|render|cli)\.[a-z-]+$/);
       expect(['error', 'warning', 'info']).toContain(severity);
     }
   });

@@ -1,29 +1,30 @@
-import { readFile } from 'node:fs/promises';
-import { basename, extname, join, resolve } from 'node:path';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { RenderEnv } from '../pipeline/env.js';
 import { outlineSvg, renderBrief, type RenderResult, type StageTiming } from '../pipeline/render.js';
 import { rasterize } from '../raster/rasterize.js';
 import { dumpScene } from '../scene/dump.js';
 import type { Scene } from '../scene/types.js';
-import { plannedOutputs, writeAtomic, type PlannedFile } from './outputs.js';
+import { readBriefFile } from './briefs.js';
+import { createCommitter, type FileContent, type Housekeeping, type OutputFs } from './commit.js';
+import { pngSizeProblem } from './png-size.js';
+import { planRun, type BriefPlan, type PlanOptions } from './plan.js';
 
 /** Options shared by render and demo. */
-export interface BatchOptions {
-  outDir?: string;
-  png: boolean;
+export interface BatchOptions extends PlanOptions {
   scale: number;
-  /** A file (one brief) or a folder (several) for scene dumps. */
-  scene?: string;
   strict: boolean;
   lenient: boolean;
   debug: boolean;
-  /** Distinguishes this process's temporary files from another's writing the same folder. */
+  /** Names this process's temporary files (its pid), apart from another's writing the same folder. */
   tempTag: string;
   /** Write the SVG file with text as glyph outlines, for viewers without the font (--outline-text). */
   outlineText: boolean;
   /** When given, each stage is timed with it (--timings). */
   clock?: () => number;
+  /** The file system outputs are written through. Default: the real one. */
+  fs?: OutputFs;
+  /** To judge stale temporaries. Default: no process is known gone; ages by the wall clock. */
+  housekeeping?: Housekeeping;
 }
 
 /** What happened to one brief. */
@@ -37,41 +38,37 @@ export interface BriefReport {
 }
 
 /** Reads a brief file and renders it; a missing file or unexpected failure becomes a diagnostic. */
-export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock'>): Promise<RenderResult> {
-  let text: string;
+export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes'>): Promise<RenderResult> {
+  const read = readBriefFile(file, opts.maxBriefBytes);
+  if ('problem' in read) return { ok: false, rationale: [], diagnostics: [read.problem] };
   try {
-    text = await readFile(file, 'utf8');
-  } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    return { ok: false, rationale: [], diagnostics: [diagnostic('brief.not-found', code === 'ENOENT' ? 'the brief file does not exist' : `the brief file cannot be read (${code})`, { file, hint: 'check the path; briefs are .yaml, .yml or .json files' })] };
-  }
-  try {
-    return await renderBrief({ brief: text, file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock }, env);
+    return await renderBrief({ brief: read.text, file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock }, env);
   } catch (e) {
     const detail = opts.debug ? `\n${(e as Error).stack}` : '';
     return { ok: false, rationale: [], diagnostics: [diagnostic('render.internal', `chartwright failed unexpectedly: ${(e as Error).message}${detail}`, { file, hint: 'rerun with --debug and report it with the brief and data' })] };
   }
 }
 
-function sceneTarget(scene: string | undefined, brief: string, many: boolean, cwd: string): string | undefined {
-  if (!scene) return undefined;
-  if (!many) return resolve(cwd, scene);
-  return join(resolve(cwd, scene), `${basename(brief, extname(brief))}.scene.json`);
+/** Renders a planned brief without writing: its own diagnostics, then the problems with where it would write. */
+export async function renderPlan(plan: BriefPlan, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes'>): Promise<RenderResult> {
+  if (plan.failed) return { ok: false, rationale: [], diagnostics: [plan.failed] };
+  const result = await renderFile(plan.file, env, opts);
+  if (!plan.problems.length) return result;
+  return { ...result, ok: false, diagnostics: [...result.diagnostics, ...plan.problems] };
 }
 
 /** Yields to the event loop so resvg's native memory is reclaimed between renders (a tight loop grows it fast). */
 const breathe = () => new Promise<void>((r) => setImmediate(r));
 
-/** The bytes of each planned file; a PNG is drawn from the outline SVG, written once and reused. */
-async function produceFiles(result: RenderResult & { svg: string; scene: Scene }, planned: PlannedFile[], env: RenderEnv, opts: BatchOptions, report: BriefReport): Promise<{ path: string; data: string | Buffer }[]> {
+/** The bytes of each planned file; a PNG is drawn from the outline SVG, made once and reused. */
+async function produceFiles(result: RenderResult & { svg: string; scene: Scene }, plan: BriefPlan, env: RenderEnv, opts: BatchOptions, report: BriefReport): Promise<FileContent[]> {
   let outlines: string | undefined;
   const outlined = () => (outlines ??= outlineSvg(result.scene, env));
-  const files: { path: string; data: string | Buffer }[] = [];
-  for (const p of planned) {
-    if (p.kind === 'svg') {
-      files.push({ path: p.path, data: opts.outlineText ? outlined() : result.svg });
-      continue;
-    }
+  const files: FileContent[] = [];
+  for (const p of plan.files) {
+    if (p.kind === 'svg') files.push({ path: p.path, data: opts.outlineText ? outlined() : result.svg });
+    if (p.kind === 'scene') files.push({ path: p.path, data: `${JSON.stringify(dumpScene(result.scene), null, 2)}\n` });
+    if (p.kind !== 'png') continue;
     const started = opts.clock?.();
     files.push({ path: p.path, data: rasterize(outlined(), { scale: opts.scale, fontFiles: [] }) });
     if (started !== undefined) report.timings?.push({ stage: 'png', ms: opts.clock!() - started });
@@ -80,37 +77,56 @@ async function produceFiles(result: RenderResult & { svg: string; scene: Scene }
   return files;
 }
 
+type Commit = (files: FileContent[]) => Promise<void>;
+
+/** Renders one planned brief and, when it succeeded, commits all its files together. */
+async function renderAndWrite(plan: BriefPlan, env: RenderEnv, opts: BatchOptions, commit: Commit): Promise<BriefReport> {
+  const result = await renderPlan(plan, env, opts);
+  const report: BriefReport = { brief: plan.file, ok: result.ok, written: [], diagnostics: result.diagnostics, ...(result.timings ? { timings: result.timings } : {}) };
+  if (!result.ok || result.svg === undefined || !result.scene) return report;
+  const tooBig = plan.files.some((f) => f.kind === 'png') ? pngSizeProblem(result.scene.width, result.scene.height, opts.scale, plan.file) : undefined;
+  if (tooBig) return { ...report, ok: false, diagnostics: [...report.diagnostics, tooBig] };
+  let contents: FileContent[];
+  try {
+    contents = await produceFiles({ ...result, svg: result.svg, scene: result.scene }, plan, env, opts, report);
+  } catch (e) {
+    report.diagnostics.push(diagnostic('output.raster-failed', `could not draw the PNG: ${(e as Error).message}`, { file: plan.file, hint: 'rerun with --debug and report it with the brief and data' }));
+    return { ...report, ok: false };
+  }
+  try {
+    await commit(contents);
+    report.written = contents.map((c) => c.path);
+  } catch (e) {
+    report.diagnostics.push(diagnostic('output.write-failed', `could not write the output, so none of this brief's files were written: ${(e as Error).message}`, { file: plan.file, hint: 'check that the output folder is writable and has space' }));
+    report.ok = false;
+  }
+  return report;
+}
+
+/** Called as a batch goes: before each brief, and with each brief's report as it finishes. */
+export interface BatchHooks {
+  start?(done: number, total: number, file: string): void;
+  finish?(report: BriefReport): void;
+}
+
 /**
- * Renders briefs one after another. Each brief's files are all produced in memory first and
- * written only if it succeeded, atomically; one bad brief never stops the others.
+ * Renders planned briefs one after another. Each brief's files are all produced in memory
+ * first and committed together only if it succeeded; one bad brief never stops the others.
  */
-export async function renderBatch(files: string[], env: RenderEnv, opts: BatchOptions, cwd: string, onBrief?: (done: number, total: number, file: string) => void): Promise<BriefReport[]> {
+export async function renderPlanned(plans: BriefPlan[], env: RenderEnv, opts: BatchOptions, hooks: BatchHooks = {}): Promise<BriefReport[]> {
+  const world = opts.housekeeping ?? { alive: () => true, now: () => Date.now() };
+  const commit = createCommitter(opts.tempTag, world, opts.fs);
   const reports: BriefReport[] = [];
-  for (const [i, file] of files.entries()) {
-    onBrief?.(i, files.length, file);
-    const result = await renderFile(file, env, opts);
-    const report: BriefReport = { brief: file, ok: result.ok, written: [], diagnostics: result.diagnostics, ...(result.timings ? { timings: result.timings } : {}) };
+  for (const [i, plan] of plans.entries()) {
+    hooks.start?.(i, plans.length, plan.file);
+    const report = await renderAndWrite(plan, env, opts, commit);
     reports.push(report);
-    if (!result.ok || result.svg === undefined || !result.scene || !result.brief) continue;
-    let contents: { path: string; data: string | Buffer }[];
-    try {
-      contents = await produceFiles({ ...result, svg: result.svg, scene: result.scene }, plannedOutputs(file, result.brief.output, opts.outDir, opts.png), env, opts, report);
-    } catch (e) {
-      report.ok = false;
-      report.diagnostics.push(diagnostic('output.raster-failed', `could not draw the PNG: ${(e as Error).message}`, { file, hint: 'rerun with --debug and report it with the brief and data' }));
-      continue;
-    }
-    const scenePath = sceneTarget(opts.scene, file, files.length > 1, cwd);
-    if (scenePath) contents.push({ path: scenePath, data: `${JSON.stringify(dumpScene(result.scene), null, 2)}\n` });
-    try {
-      for (const c of contents) {
-        await writeAtomic(c.path, c.data, opts.tempTag);
-        report.written.push(c.path);
-      }
-    } catch (e) {
-      report.ok = false;
-      report.diagnostics.push(diagnostic('output.write-failed', `could not write the output: ${(e as Error).message}`, { file, hint: 'check that the output folder is writable' }));
-    }
+    hooks.finish?.(report);
   }
   return reports;
+}
+
+/** Plans and renders brief files (the library-level batch; the CLI also checks its run report's path). */
+export async function renderBatch(files: string[], env: RenderEnv, opts: BatchOptions, cwd: string, hooks: BatchHooks = {}): Promise<BriefReport[]> {
+  return renderPlanned(planRun(files.map((file) => ({ file })), opts, cwd).plans, env, opts, hooks);
 }

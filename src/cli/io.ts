@@ -10,4 +10,12 @@ export interface CliIo {
   pid: number;
   /** A clock in ms for --timings; never read by rendering itself. */
   clock: () => number;
+  /**
+   * Whether a process id is running on this machine, to tell a stale temporary left by a
+   * killed run from one being written. Default: every process counts as running (then only
+   * age makes a temporary stale).
+   */
+  alive?: (pid: number) => boolean;
+  /** Wall-clock time in ms, to age temporaries. Default: Date.now. */
+  now?: () => number;
 }

@@ -71,6 +71,19 @@ export const CATALOGUE = {
   // output
   'output.write-failed': 'error',
   'output.raster-failed': 'error',
+  // output: where files may go and how large a PNG may be (checked before anything is written)
+  'output.bad-name': 'error',
+  'output.bad-extension': 'error',
+  'output.outside': 'error',
+  'output.collision': 'error',
+  'output.overwrites-input': 'error',
+  'output.png-too-large': 'error',
+  'output.png-too-small': 'error',
+  // cli: the command line's briefs and input size limits
+  'cli.folder-unreadable': 'error',
+  'cli.no-briefs': 'error',
+  'cli.brief-too-large': 'error',
+  'cli.style-too-large': 'error',
   // a defect in chartwright itself, never the user's fault
   'render.internal': 'error',
 } as const;

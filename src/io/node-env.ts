@@ -12,6 +12,7 @@ import { resolveStyle } from '../style/resolve.js';
 import type { Style, Weight } from '../style/types.js';
 import type { OutlineSet } from '../svg/glyphs.js';
 import type { TableEnv } from '../table/load.js';
+import { describeBytes, INPUT_LIMITS, readBounded } from './bounded-read.js';
 import { packageRoot } from './package-root.js';
 
 /** Style presets shipped in templates/styles. */
@@ -28,7 +29,14 @@ async function readAllStdin(): Promise<string> {
   return Buffer.concat(chunks).toString('utf8');
 }
 
-function loadStyle(root: string, name: string, briefFile: string | undefined): Outcome<Style> {
+function styleTooLarge(name: string, file: string, limit: number) {
+  return failure<Style>([diagnostic('cli.style-too-large', `the style file \`${name}\` is larger than ${describeBytes(limit)}`, {
+    path: '/style', found: file, expected: `at most ${describeBytes(limit)}`,
+    hint: `a style is a small JSON file; check the path, or raise the limit with ${INPUT_LIMITS.style.variable}=<bytes>`,
+  })]);
+}
+
+function loadStyle(root: string, name: string, briefFile: string | undefined, maxBytes: number): Outcome<Style> {
   const isPath = name.includes('/') || name.endsWith('.json');
   const file = isPath ? (isAbsolute(name) || !briefFile ? resolve(name) : resolve(dirname(briefFile), name)) : join(root, 'templates', 'styles', `${name}.json`);
   if (!isPath && !(STYLE_PRESETS as readonly string[]).includes(name)) {
@@ -36,7 +44,10 @@ function loadStyle(root: string, name: string, briefFile: string | undefined): O
   }
   let value: unknown;
   try {
-    value = readJson(file);
+    // Read at most the limit (plus one byte to notice more): `style: /dev/zero` must not fill memory.
+    const read = readBounded(file, maxBytes);
+    if (!read.ok) return styleTooLarge(name, file, maxBytes);
+    value = JSON.parse(read.text);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
     return failure([diagnostic(code === 'ENOENT' ? 'brief.style-not-found' : 'brief.bad-style', code === 'ENOENT' ? `the style file \`${name}\` does not exist` : `the style file \`${name}\` is not valid JSON`, { path: '/style', found: file, hint: 'style paths are relative to the brief; presets are named without .json' })]);
@@ -50,11 +61,17 @@ function readPalettes(root: string): PaletteFile[] {
   return readdirSync(dir).filter((f) => f.endsWith('.json')).sort().map((f) => readJson<PaletteFile>(join(dir, f)));
 }
 
+/** Options of a Node environment. */
+export interface NodeEnvOptions {
+  /** The largest style file read, in bytes. Default: 256 KiB (`INPUT_LIMITS.style`). */
+  maxStyleBytes?: number;
+}
+
 /**
  * The environment a Node process renders in: files are read here and nowhere below. Fonts
  * and styles are read once per environment (once per process for the CLI), not per chart.
  */
-export function createNodeEnv(root: string = packageRoot()): RenderEnv {
+export function createNodeEnv(root: string = packageRoot(), options: NodeEnvOptions = {}): RenderEnv {
   const fonts = join(root, 'templates', 'fonts');
   const faces: Record<Weight, FontMetrics> = {
     regular: readJson(join(fonts, 'source-sans-3-regular.metrics.json')),
@@ -71,7 +88,7 @@ export function createNodeEnv(root: string = packageRoot()): RenderEnv {
     table,
     style(name, briefFile) {
       const key = `${name}\u0000${briefFile ?? ''}`;
-      if (!styles.has(key)) styles.set(key, loadStyle(root, name, briefFile));
+      if (!styles.has(key)) styles.set(key, loadStyle(root, name, briefFile, options.maxStyleBytes ?? INPUT_LIMITS.style.bytes));
       return styles.get(key)!;
     },
     outlines() {

@@ -1,31 +1,11 @@
-import { existsSync, mkdirSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { EXIT } from '../../src/cli/exit-codes.js';
 import { colourAllowed, formatDiagnostic } from '../../src/cli/format.js';
-import type { CliIo } from '../../src/cli/io.js';
 import { runCli } from '../../src/cli/run.js';
 import { tempDir } from '../helpers.js';
-
-function io(cwd: string) {
-  const out: string[] = [];
-  const err: string[] = [];
-  let now = 0;
-  const value: CliIo = { stdout: (s) => out.push(s), stderr: (s) => err.push(s), cwd, env: {}, isTTY: false, pid: 4242, clock: () => (now += 1.5) };
-  return { io: value, out: () => out.join(''), err: () => err.join('') };
-}
-
-function workspace(): string {
-  const dir = tempDir();
-  writeFileSync(join(dir, 'piers.csv'), 'pier,crossings\nNorth,212\nSouth,64\nEast,131\n');
-  writeFileSync(join(dir, 'piers.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossings\ntitle: Piers\nfields: { crossings: { unit: crossings } }\n');
-  writeFileSync(join(dir, 'typo.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossing\n');
-  writeFileSync(join(dir, 'warn.yaml'), 'data: gaps.csv\nintent: compare\nkeys: pier\nvalues: crossings\nfields: { crossings: { unit: crossings } }\n');
-  writeFileSync(join(dir, 'gaps.csv'), 'pier,crossings\nNorth,212\nSouth,NA\n');
-  return dir;
-}
-
-const files = (dir: string) => readdirSync(dir).sort();
+import { files, io, workspace } from './cli-helpers.js';
 
 describe('chartwright render', () => {
   it('writes the SVG beside the brief, named after it, and lists it on stdout', async () => {
