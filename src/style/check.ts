@@ -1,6 +1,7 @@
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
-import { VISIONS } from '../color/cvd.js';
-import { deltaE } from '../color/distinct.js';
+import { seen, VISIONS, type Vision } from '../color/cvd.js';
+import { ciede2000, rgbToLab, type Lab } from '../color/lab.js';
+import { hexToRgb } from '../color/srgb.js';
 import { contrastRatio, MARK_CONTRAST, TEXT_CONTRAST } from './contrast.js';
 import type { Style } from './types.js';
 
@@ -66,10 +67,13 @@ function pairsOf(list: readonly Named[]): [Named, Named][] {
  * Warns where two of a style's fills come closer than DISTINCT_DE00, for normal vision or under a
  * simulated colour-vision deficiency (Machado et al. 2009, severity 1.0): the bar fills (primary,
  * negative, others), the categorical colours among themselves, and each categorical colour
- * against the reserved negative and others fills.
+ * against the reserved negative and others fills. A derived palette whose file records that it
+ * keeps those distances (`categoricalVerified`; test/color/palette-file.test.ts re-derives and
+ * re-measures the file) is not measured again at every process start.
  */
-export function distinctnessWarnings(style: Style, file: string): Diagnostic[] {
+export function distinctnessWarnings(style: Style, file: string, categoricalVerified = false): Diagnostic[] {
   const fills: Named[] = [['primary', style.palette.primary], ['negative', style.palette.negative], ['others', style.palette.others]];
+  if (categoricalVerified) return pairWarnings(pairsOf(fills), file);
   const categorical: Named[] = style.palette.categorical.map((c, i) => [`categorical/${i}`, c]);
   const reserved = categorical.flatMap((c) => fills.slice(1).map((f): [Named, Named] => [f, c]));
   return pairWarnings([...pairsOf(fills), ...pairsOf(categorical), ...reserved], file);
@@ -77,6 +81,14 @@ export function distinctnessWarnings(style: Style, file: string): Diagnostic[] {
 
 /** One warning per pair closer than DISTINCT_DE00 for some reader (the first such vision named). */
 function pairWarnings(pairs: readonly [Named, Named][], file: string): Diagnostic[] {
+  // Each colour is converted once per vision, not once per pair (this runs at every process start).
+  const labs = new Map<string, Lab>();
+  const lab = (c: string, v: Vision) => {
+    const key = `${c}${v}`;
+    if (!labs.has(key)) labs.set(key, rgbToLab(seen(hexToRgb(c), v)));
+    return labs.get(key)!;
+  };
+  const deltaE = (a: string, b: string, v: Vision) => ciede2000(lab(a, v), lab(b, v));
   return pairs.flatMap(([[na, a], [nb, b]]) => {
     const vision = VISIONS.find((v) => deltaE(a, b, v) < DISTINCT_DE00);
     if (vision === undefined) return [];

@@ -3,7 +3,7 @@ import { divergingRamp, sequentialRamp, type PaletteFile } from '../color/palett
 import { publishedPalette } from '../color/published.js';
 import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import { suggestionHint } from '../diagnostics/suggest.js';
-import { checkStyle, contrastWarnings, distinctnessWarnings } from './check.js';
+import { checkStyle, contrastWarnings, DISTINCT_DE00, distinctnessWarnings } from './check.js';
 import { STYLE_SCHEMA } from './schema.js';
 import type { Style } from './types.js';
 
@@ -11,6 +11,20 @@ import type { Style } from './types.js';
 export const DEFAULT_PALETTE = 'tidewater';
 
 type PaletteKind = 'categorical' | 'sequential' | 'diverging';
+
+/**
+ * Whether a palette file's own measurements show its categorical colours distinct from each
+ * other and from a style's reserved fills, for every reader.
+ */
+function verifiedBy(file: PaletteFile | undefined, style: Style): boolean {
+  if (!file) return false;
+  const { recipe, measured } = file.derivation;
+  const reserved = recipe.categorical.reserved;
+  const all = measured.categorical.minDeltaE00ByPrefix[measured.categorical.minDeltaE00ByPrefix.length - 1];
+  const atLeast = (v: Record<string, number> | undefined) => v !== undefined && Object.values(v).every((x) => typeof x !== 'number' || x >= DISTINCT_DE00);
+  return reserved.includes(style.palette.negative) && reserved.includes(style.palette.others) && atLeast(all) && atLeast(measured.categorical.minDeltaE00ToReserved)
+    && style.palette.categorical.every((c, i) => file.categorical[i] === c);
+}
 
 /** A palette reference resolved to colours: a list as given, a palette (or published palette) name, or `<palette>/<ramp>`. */
 function resolveRef(kind: PaletteKind, ref: unknown, palettes: readonly PaletteFile[], file: string): { colours?: string[]; problem?: Diagnostic } {
@@ -31,9 +45,10 @@ function resolveRef(kind: PaletteKind, ref: unknown, palettes: readonly PaletteF
 /**
  * A style document → a resolved `Style`: checked against the style schema (types, ranges, no
  * unknown keys), its colours checked, its palette references resolved to colours from the palette
- * files, and warnings where its colours fall short for some readers.
+ * files, and warnings where its colours fall short for some readers (not for a `trusted` style:
+ * a shipped preset, whose colours the test suite checks).
  */
-export function resolveStyle(value: unknown, file: string, palettes: readonly PaletteFile[]): Outcome<Style> {
+export function resolveStyle(value: unknown, file: string, palettes: readonly PaletteFile[], options: { trusted?: boolean } = {}): Outcome<Style> {
   // A style's problems are all `brief.bad-style`, each with the path into the style file.
   const schemaProblems = validateAgainstSchema(value, STYLE_SCHEMA).map((d): Diagnostic => ({ ...d, code: 'brief.bad-style', severity: 'error', message: `the style file: ${d.message}`, file }));
   if (schemaProblems.length) {
@@ -51,5 +66,7 @@ export function resolveStyle(value: unknown, file: string, palettes: readonly Pa
   const style = { ...raw, palette: { ...raw.palette, ...resolved } } as Style;
   problems.push(...checkStyle(style, file));
   if (problems.length) return failure(problems);
-  return success(style, [...contrastWarnings(style, file), ...distinctnessWarnings(style, file)]);
+  if (options.trusted) return success(style);
+  const named = typeof raw.palette.categorical === 'string' || raw.palette.categorical === undefined ? palettes.find((p) => p.name === (raw.palette.categorical ?? DEFAULT_PALETTE)) : undefined;
+  return success(style, [...contrastWarnings(style, file), ...distinctnessWarnings(style, file, verifiedBy(named, style))]);
 }

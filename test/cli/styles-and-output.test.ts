@@ -56,9 +56,16 @@ describe('style colours for every reader', () => {
     expect(warnings[0]!.message).toMatch(/protanopia|deuteranopia/);
   });
 
-  it('raises no colour warnings for the default style', async () => {
-    const r = await renderBrief({ brief: brief({}) }, env);
-    expect(r.diagnostics).toEqual([]);
+  // The presets are trusted at run time (not re-measured at every start), so this test is their check.
+  it('raises no colour warnings for any shipped preset, measured as a user style would be', async () => {
+    const { resolveStyle } = await import('../../src/style/resolve.js');
+    const palettes = readdirSync(join(root, 'templates', 'palettes')).map((f) => JSON.parse(readFileSync(join(root, 'templates', 'palettes', f), 'utf8')));
+    for (const preset of readdirSync(join(root, 'templates', 'styles'))) {
+      const r = resolveStyle(JSON.parse(readFileSync(join(root, 'templates', 'styles', preset), 'utf8')), preset, palettes);
+      expect(r.ok).toBe(true);
+      expect(r.diagnostics).toEqual([]);
+    }
+    expect((await renderBrief({ brief: brief({}) }, env)).diagnostics).toEqual([]);
   });
 });
 
