@@ -9,16 +9,17 @@ import { rasterize } from './raster/rasterize.js';
 import { dumpScene } from './scene/dump.js';
 
 export { readBrief, checkBriefValue, resolveBrief } from './brief/resolve.js';
-export { BRIEF_SCHEMA } from './brief/schema.js';
+export { BRIEF_SCHEMA } from './pipeline/vocabulary.js';
 export { readTable } from './table/load.js';
 export { inferFields } from './fields/infer.js';
 export { choose } from './choose/choose.js';
 export { deriveBars } from './derive/bars.js';
-export { layoutBar } from './forms/bar.js';
+export { FORMS } from './forms/registry.js';
+export { layoutCartesian } from './layout/compose.js';
 export { writeSvg } from './svg/write.js';
 export { rasterize } from './raster/rasterize.js';
 export { dumpScene } from './scene/dump.js';
-export { renderBrief, outlineSvg } from './pipeline/render.js';
+export { renderBrief, outlineSvg, loadInputs, renderInputs } from './pipeline/render.js';
 export { createNodeEnv } from './io/node-env.js';
 export { runCli } from './cli/run.js';
 export { formatDiagnostic } from './cli/format.js';
@@ -28,7 +29,8 @@ export type { ResolvedBrief } from './brief/types.js';
 export type { Scene, SceneNode } from './scene/types.js';
 export type { SceneDump } from './scene/dump.js';
 export type { RenderEnv } from './pipeline/env.js';
-export type { RenderRequest, RenderResult } from './pipeline/render.js';
+export type { RenderRequest, RenderResult, RenderInputs } from './pipeline/render.js';
+export type { FormDef } from './forms/types.js';
 
 /** Options of `render`. */
 export interface RenderOptions {

@@ -5,9 +5,9 @@ import { env } from './helpers.js';
 describe('library API', () => {
   it('exports exactly the documented names', () => {
     expect(Object.keys(api).sort()).toEqual([
-      'BRIEF_SCHEMA', 'CATALOGUE', 'RenderError', 'checkBriefValue', 'choose', 'createNodeEnv', 'deriveBars', 'dumpScene',
-      'formatDiagnostic', 'inferFields', 'layoutBar', 'outlineSvg', 'rasterize', 'readBrief', 'readTable', 'render', 'renderBrief',
-      'resolveBrief', 'runCli', 'writeSvg',
+      'BRIEF_SCHEMA', 'CATALOGUE', 'FORMS', 'RenderError', 'checkBriefValue', 'choose', 'createNodeEnv', 'deriveBars', 'dumpScene',
+      'formatDiagnostic', 'inferFields', 'layoutCartesian', 'loadInputs', 'outlineSvg', 'rasterize', 'readBrief', 'readTable', 'render',
+      'renderBrief', 'renderInputs', 'resolveBrief', 'runCli', 'writeSvg',
     ]);
   });
 

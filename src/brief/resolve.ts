@@ -1,7 +1,7 @@
 import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import { parseBriefText, type ParsedBrief } from './parse.js';
-import { BRIEF_SCHEMA } from './schema.js';
-import type { DataSource, FieldHint, ResolvedBrief } from './types.js';
+import { briefSchema } from './schema.js';
+import { FORM_NAMES, INTENTS, type BriefVocabulary, type DataSource, type FieldHint, type ResolvedBrief } from './types.js';
 import { validateAgainstSchema } from './validate.js';
 
 /** Frame size when the brief gives none, in CSS pixels. */
@@ -38,7 +38,37 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     style: (raw.style ?? 'report') as string,
     size: { width: size.width ?? DEFAULT_SIZE.width, height: size.height ?? DEFAULT_SIZE.height },
     output: asList(raw.output),
+    index: raw.index as ResolvedBrief['index'],
+    start: raw.start as string | undefined,
+    end: raw.end as string | undefined,
+    color: raw.color as string | undefined,
+    shape: raw.shape as string | undefined,
+    area: raw.area as string | undefined,
   };
+}
+
+/** Every intent and form of chartwright's design: what a brief may name, drawn or not. */
+export const BRIEF_LANGUAGE: BriefVocabulary = { intents: INTENTS, forms: FORM_NAMES };
+
+/**
+ * An intent or form of the design that this build does not answer or draw yet is told so
+ * (choice.*-not-supported), rather than called "not an option"; what it offers instead is only
+ * what the vocabulary holds.
+ */
+function notSupportedYet(d: Diagnostic, vocabulary: BriefVocabulary): Diagnostic {
+  if (d.code !== 'brief.bad-value' || (d.path !== '/intent' && d.path !== '/form')) return d;
+  const found = d.found === undefined ? undefined : (JSON.parse(d.found) as unknown);
+  if (d.path === '/intent' && (INTENTS as readonly unknown[]).includes(found)) {
+    return diagnostic('choice.intent-not-supported', `the intent \`${found}\` is not supported yet`, {
+      path: d.path, line: d.line, column: d.column, found: String(found), expected: vocabulary.intents.join(', '), hint: `use one of the intents answered today: ${vocabulary.intents.join(', ')}`,
+    });
+  }
+  if (d.path === '/form' && (FORM_NAMES as readonly unknown[]).includes(found)) {
+    return diagnostic('choice.form-not-supported', `the form \`${found}\` is not drawn yet`, {
+      path: d.path, line: d.line, column: d.column, found: String(found), expected: vocabulary.forms.join(', '), hint: `remove \`form:\` to let the rules choose, or pin one of: ${vocabulary.forms.join(', ')}`,
+    });
+  }
+  return d;
 }
 
 /**
@@ -68,15 +98,18 @@ function checkDataSource(raw: Record<string, unknown>): Diagnostic[] {
  * The brief stage: text of a JSON or YAML brief → a `ResolvedBrief`, or diagnostics with paths
  * into the document (and line/column where the text has them).
  */
-export function readBrief(text: string, parsedBrief?: ParsedBrief): Outcome<{ brief: ResolvedBrief; parsed: ParsedBrief }> {
+export function readBrief(text: string, parsedBrief?: ParsedBrief, vocabulary: BriefVocabulary = BRIEF_LANGUAGE): Outcome<{ brief: ResolvedBrief; parsed: ParsedBrief }> {
   const parsedOutcome = parsedBrief ? success(parsedBrief) : parseBriefText(text);
   if (!parsedOutcome.ok) return failure(parsedOutcome.diagnostics);
   const parsed = parsedOutcome.value;
-  return checkBriefValue(parsed.value, parsed);
+  return checkBriefValue(parsed.value, parsed, vocabulary);
 }
 
-/** The same checks for a brief that is already a JavaScript value (the library API). */
-export function checkBriefValue(value: unknown, parsed?: ParsedBrief): Outcome<{ brief: ResolvedBrief; parsed: ParsedBrief }> {
+/**
+ * The same checks for a brief that is already a JavaScript value (the library API). The
+ * vocabulary is what may be named; by default every intent and form of the design.
+ */
+export function checkBriefValue(value: unknown, parsed?: ParsedBrief, vocabulary: BriefVocabulary = BRIEF_LANGUAGE): Outcome<{ brief: ResolvedBrief; parsed: ParsedBrief }> {
   const located: ParsedBrief = parsed ?? { value, locate: () => undefined };
   if (value === null || typeof value !== 'object' || Array.isArray(value)) {
     return failure([diagnostic('brief.not-an-object', 'a brief must be a mapping of options', {
@@ -84,7 +117,7 @@ export function checkBriefValue(value: unknown, parsed?: ParsedBrief): Outcome<{
     })]);
   }
   const raw = value as Record<string, unknown>;
-  const problems = [...validateAgainstSchema(raw, BRIEF_SCHEMA), ...checkDataSource(raw)];
+  const problems = [...validateAgainstSchema(raw, briefSchema(vocabulary)).map((d) => notSupportedYet(d, vocabulary)), ...checkDataSource(raw)];
   const diagnostics = withPositions(problems, located);
   if (hasErrors(diagnostics)) return failure(diagnostics);
   return success({ brief: resolveBrief(raw), parsed: located }, diagnostics);

@@ -1,4 +1,4 @@
-import { AGGREGATES, FIELD_TYPES, FORM_NAMES, INTENTS, ORDERS } from './types.js';
+import { AGGREGATES, FIELD_TYPES, ORDERS, type BriefVocabulary } from './types.js';
 
 /** The subset of JSON Schema the brief schema uses, and `validateAgainstSchema` understands. */
 export interface SchemaNode {
@@ -37,52 +37,61 @@ const fieldHint: SchemaNode = {
   },
 };
 
-/** The JSON Schema of a brief, as printed by `chartwright schema`. */
-export const BRIEF_SCHEMA: SchemaNode & { $schema: string; $id: string; title: string } = {
-  $schema: 'https://json-schema.org/draft/2020-12/schema',
-  $id: 'https://chartwright.invalid/brief.schema.json',
-  title: 'chartwright brief',
-  type: 'object',
-  additionalProperties: false,
-  required: ['intent'],
-  properties: {
-    data: { type: 'string', minLength: 1, description: 'Path to a CSV, TSV, JSON or NDJSON file, relative to the brief; "-" for stdin.' },
-    rows: { type: 'array', items: { type: 'object' }, description: 'Inline rows, as objects keyed by column name.' },
-    intent: { type: 'string', enum: INTENTS, description: 'What the reader must see.' },
-    keys: { ...columnList, description: 'Key column(s).' },
-    values: { ...columnList, description: 'Value column(s).' },
-    title: { type: 'string', description: 'Chart title.' },
-    subtitle: { type: 'string', description: 'Line under the title.' },
-    source: { type: 'string', description: 'Source line at the foot of the chart.' },
-    description: { type: 'string', description: 'Text for screen readers; replaces the generated summary.' },
-    fields: { type: 'object', additionalProperties: fieldHint, description: 'Per-column hints, keyed by column name.' },
-    form: { type: 'string', enum: FORM_NAMES, description: 'Pin a chart form; the hard rules still apply.' },
-    order: { type: 'string', enum: ORDERS, default: 'auto', description: 'Order of bars or rows.' },
-    baseline: { type: 'string', enum: ['zero', 'fit'], default: 'zero', description: 'Value-axis baseline; never fit for length-coded marks.' },
-    aggregate: { type: 'string', enum: AGGREGATES, default: 'sum', description: 'How rows sharing a key are combined.' },
-    style: { type: 'string', minLength: 1, default: 'report', description: 'Style preset name or path to a style file.' },
-    size: {
-      type: 'object',
-      additionalProperties: false,
-      description: 'Frame size in CSS pixels.',
-      properties: {
-        width: { type: 'integer', minimum: 160, maximum: 4000 },
-        height: { type: 'integer', minimum: 120, maximum: 4000 },
+/** A brief's JSON Schema with its root metadata. */
+export type BriefSchema = SchemaNode & { $schema: string; $id: string; title: string };
+
+/**
+ * The JSON Schema of a brief over a vocabulary of intents and forms (the ones chartwright can
+ * answer and draw), as printed by `chartwright schema`.
+ */
+export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabulary): BriefSchema {
+  return {
+    $schema: 'https://json-schema.org/draft/2020-12/schema',
+    $id: 'https://chartwright.invalid/brief.schema.json',
+    title: 'chartwright brief',
+    type: 'object',
+    additionalProperties: false,
+    required: ['intent'],
+    properties: {
+      data: { type: 'string', minLength: 1, description: 'Path to a CSV, TSV, JSON or NDJSON file, relative to the brief; "-" for stdin.' },
+      rows: { type: 'array', items: { type: 'object' }, description: 'Inline rows, as objects keyed by column name.' },
+      intent: { type: 'string', enum: INTENTS, description: 'What the reader must see.' },
+      keys: { ...columnList, description: 'Key column(s).' },
+      values: { ...columnList, description: 'Value column(s).' },
+      title: { type: 'string', description: 'Chart title.' },
+      subtitle: { type: 'string', description: 'Line under the title.' },
+      source: { type: 'string', description: 'Source line at the foot of the chart.' },
+      description: { type: 'string', description: 'Text for screen readers; replaces the generated summary.' },
+      fields: { type: 'object', additionalProperties: fieldHint, description: 'Per-column hints, keyed by column name.' },
+      form: { type: 'string', enum: FORM_NAMES, description: 'Pin a chart form; the hard rules still apply.' },
+      order: { type: 'string', enum: ORDERS, default: 'auto', description: 'Order of bars or rows.' },
+      baseline: { type: 'string', enum: ['zero', 'fit'], default: 'zero', description: 'Value-axis baseline; never fit for length-coded marks.' },
+      aggregate: { type: 'string', enum: AGGREGATES, default: 'sum', description: 'How rows sharing a key are combined.' },
+      style: { type: 'string', minLength: 1, default: 'report', description: 'Style preset name or path to a style file.' },
+      size: {
+        type: 'object',
+        additionalProperties: false,
+        description: 'Frame size in CSS pixels.',
+        properties: {
+          width: { type: 'integer', minimum: 160, maximum: 4000 },
+          height: { type: 'integer', minimum: 120, maximum: 4000 },
+        },
       },
+      output: {
+        description: 'Output file(s): .svg and/or .png, relative to the brief.',
+        anyOf: [{ type: 'string', minLength: 1 }, { type: 'array', items: { type: 'string', minLength: 1 }, minItems: 1 }],
+      },
+      index: {
+        type: 'object',
+        additionalProperties: false,
+        description: 'For intent change: the base of the index.',
+        properties: { base: { anyOf: [{ type: 'string' }, { type: 'number' }] } },
+      },
+      start: { type: 'string', minLength: 1, description: 'For intent schedule: the start column.' },
+      end: { type: 'string', minLength: 1, description: 'For intent schedule: the end column.' },
+      color: { type: 'string', minLength: 1, description: 'For intent correlation: the column coded by colour.' },
+      shape: { type: 'string', minLength: 1, description: 'For intent correlation: the column coded by shape.' },
+      area: { type: 'string', minLength: 1, description: 'For intent correlation: the column whose value each circle\'s area shows (`size` is the frame).' },
     },
-    output: {
-      description: 'Output file(s): .svg and/or .png, relative to the brief.',
-      anyOf: [{ type: 'string', minLength: 1 }, { type: 'array', items: { type: 'string', minLength: 1 }, minItems: 1 }],
-    },
-    index: {
-      type: 'object',
-      additionalProperties: false,
-      description: 'For intent change: the base of the index.',
-      properties: { base: { anyOf: [{ type: 'string' }, { type: 'number' }] } },
-    },
-    start: { type: 'string', description: 'For intent schedule: the start column.' },
-    end: { type: 'string', description: 'For intent schedule: the end column.' },
-    color: { type: 'string', description: 'For intent correlation: the column coded by colour.' },
-    shape: { type: 'string', description: 'For intent correlation: the column coded by shape.' },
-  },
-};
+  };
+}

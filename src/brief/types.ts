@@ -5,7 +5,11 @@ export const INTENTS = [
 ] as const;
 export type Intent = (typeof INTENTS)[number];
 
-/** Chart forms a brief may pin with `form:`. Only some are drawn today; see `src/forms/registry.ts`. */
+/**
+ * The chart forms of chartwright's design, by name. Only those in the registry (src/forms/registry.ts)
+ * are drawn, and only those are offered by the schema and in hints; a brief pinning one of the
+ * others is told it is not drawn yet.
+ */
 export const FORM_NAMES = [
   'bar', 'grouped-bar', 'stacked-bar', 'normalized-bar', 'line', 'index-line', 'slope', 'gantt',
   'scatter', 'histogram', 'strip', 'box', 'heatmap', 'scatter-matrix', 'parallel', 'stream', 'radial-bar', 'donut',
@@ -79,4 +83,22 @@ export interface ResolvedBrief {
   size: { width: number; height: number };
   /** Output files, relative to the brief (or -o DIR). Default: [] (the brief's name with .svg). */
   output: string[];
+  /** For intent change: the base of the index. Default: undefined. */
+  index: { base?: string | number } | undefined;
+  /** For intent schedule: the columns of each task's start and end. Default: undefined. */
+  start: string | undefined;
+  end: string | undefined;
+  /** For intent correlation: the columns coded by colour, shape and circle area. Default: undefined. */
+  color: string | undefined;
+  shape: string | undefined;
+  area: string | undefined;
 }
+
+/** The intents and forms a brief may name: those the rule table answers and the registry draws. */
+export interface BriefVocabulary {
+  intents: readonly Intent[];
+  forms: readonly FormName[];
+}
+
+/** Intent-specific options that name a column of the data. */
+export const COLUMN_OPTIONS = ['start', 'end', 'color', 'shape', 'area'] as const;

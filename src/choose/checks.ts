@@ -1,13 +1,9 @@
-import type { ResolvedBrief } from '../brief/types.js';
+import type { Intent, ResolvedBrief } from '../brief/types.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
-import type { Decision } from './types.js';
-
-/** The intents whose rules are written; the rest answer with `choice.intent-not-supported`. */
-export const SUPPORTED_INTENTS = ['compare'] as const;
-
-/** The forms that can be drawn today. */
-export const SUPPORTED_FORMS = ['bar'] as const;
+import { applyHardRules } from './hard-rules.js';
+import { formsForIntent } from './rules.js';
+import type { Candidate, Decision } from './types.js';
 
 function columnsOfType(fields: Fields, types: string[]): string[] {
   return fields.all.filter((f) => types.includes(f.type)).map((f) => f.name);
@@ -34,12 +30,6 @@ export function checkCompareShape(fields: Fields, brief: ResolvedBrief): Diagnos
       path: '/values', expected: 'one numeric column', hint: numeric.length ? `add \`values: ${numeric[0]}\`, or \`aggregate: count\` to count rows` : 'add `values:`, or `aggregate: count` to count rows',
     }));
   }
-  if (fields.values.length > 1) {
-    problems.push(diagnostic('choice.too-many-values', `${fields.values.length} values on one value axis: a chart shows one value per axis`, {
-      path: '/values', found: fields.values.map((v) => v.name).join(', '), expected: 'one value column',
-      hint: 'write one brief per value and show them as aligned panels, or index them to a common base (intent: change)',
-    }));
-  }
   for (const value of fields.values) {
     if (value.type !== 'quantitative') {
       problems.push(diagnostic('choice.value-not-quantitative', `the value \`${value.name}\` is ${value.type}, but bar lengths need numbers`, {
@@ -51,49 +41,29 @@ export function checkCompareShape(fields: Fields, brief: ResolvedBrief): Diagnos
   return problems;
 }
 
-/**
- * The hard rule on baselines: bars encode values by length, so their axis starts at zero. A
- * brief asking for `baseline: fit` is refused, or with `lenient` drawn at zero with a warning.
- */
-export function checkBaseline(brief: ResolvedBrief, lenient: boolean): { problems: Diagnostic[]; decision: Decision } {
-  const decision: Decision = {
-    decision: 'the value axis starts at zero',
-    rule: 'hard rule: length-coded marks start at zero; a bar read from a cut axis exaggerates differences (Correll, Bertini & Franconeri, CHI 2020)',
-  };
-  if (brief.baseline !== 'fit') return { problems: [], decision };
-  const refusal = 'bars encode values by their length, so a bar axis that does not start at zero makes small differences look large';
-  if (lenient) {
-    return { problems: [diagnostic('choice.lenient-fallback', `\`baseline: fit\` was not honoured: ${refusal}; drawn from zero instead`, { path: '/baseline', found: 'fit', expected: 'zero', hint: 'remove `baseline: fit`, or use intent trend for a line that may leave zero out' })], decision };
-  }
-  return {
-    problems: [diagnostic('choice.baseline-fit-refused', `\`baseline: fit\` is refused for bars: ${refusal}`, {
-      path: '/baseline', found: 'fit', expected: 'zero', hint: 'remove `baseline: fit`; to show change over time from a non-zero base, use a line (intent: trend or change)',
-    })],
-    decision,
-  };
-}
+/** The data-shape check of each intent that has rules. */
+export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: ResolvedBrief) => Diagnostic[]>> = {
+  compare: checkCompareShape,
+};
 
-/** A pinned form must be one chartwright can draw, and one that suits the intent. */
-export function checkPinnedForm(brief: ResolvedBrief): Diagnostic[] {
-  if (brief.form === undefined || (SUPPORTED_FORMS as readonly string[]).includes(brief.form)) return [];
-  return [diagnostic('choice.form-not-supported', `the form \`${brief.form}\` is not drawn yet`, {
-    path: '/form', found: brief.form, expected: SUPPORTED_FORMS.join(', '), hint: 'remove `form:` to let the rules choose, or pin `form: bar`',
-  })];
-}
+/** Brief options that belong to some intents only, and the intents that use them. */
+export const INTENT_OPTIONS = {
+  index: ['change'],
+  start: ['schedule'],
+  end: ['schedule'],
+  color: ['correlation'],
+  shape: ['correlation'],
+  area: ['correlation'],
+} as const satisfies Partial<Record<keyof ResolvedBrief, readonly Intent[]>>;
 
-/**
- * The rules that need only the brief: a supported intent, a drawable pinned form, an honest
- * baseline. Run before the data is read too, so one `check` reports them with data problems.
- */
-export function checkBriefRules(brief: ResolvedBrief, lenient: boolean): { problems: Diagnostic[]; baseline: Decision } {
-  const baseline = checkBaseline(brief, lenient);
-  if (!(SUPPORTED_INTENTS as readonly string[]).includes(brief.intent)) {
-    const problems = [diagnostic('choice.intent-not-supported', `the intent \`${brief.intent}\` is not supported yet`, {
-      path: '/intent', found: brief.intent, expected: SUPPORTED_INTENTS.join(', '), hint: 'use `intent: compare` for bars of one value per key',
+/** An intent-specific option given to an intent that does not use it is refused, not silently dropped. */
+export function checkIntentOptions(brief: ResolvedBrief): Diagnostic[] {
+  return Object.entries(INTENT_OPTIONS).flatMap(([option, intents]) => {
+    if (brief[option as keyof typeof INTENT_OPTIONS] === undefined || (intents as readonly Intent[]).includes(brief.intent)) return [];
+    return [diagnostic('brief.option-not-used', `\`${option}\` is not used by intent ${brief.intent}: it belongs to intent ${intents.join(' or ')}`, {
+      path: `/${option}`, found: option, expected: `an option of intent ${brief.intent}`, hint: `remove \`${option}:\`, or use \`intent: ${intents[0]}\``,
     })];
-    return { problems, baseline: baseline.decision };
-  }
-  return { problems: [...checkPinnedForm(brief), ...baseline.problems], baseline: baseline.decision };
+  });
 }
 
 /**
@@ -107,4 +77,18 @@ export function checkValueUnit(fields: Fields): Diagnostic[] {
     path: `/fields/${value.name}/unit`, field: value.name, expected: 'a unit such as "crossings per day", "€" or "%"',
     hint: `add \`fields: { ${value.name}: { unit: … } }\``,
   })];
+}
+
+/**
+ * The rules that need only the brief: intent options, and the hard rules every form the brief may
+ * get would break (a pinned form, or every form the intent's rules lead to). Run before the data
+ * is read too, so one `check` reports them with data problems.
+ */
+export function checkBriefRules(brief: ResolvedBrief, candidates: readonly Candidate[], lenient: boolean): { problems: Diagnostic[]; decisions: Decision[] } {
+  const names = brief.form ? [brief.form] : formsForIntent(brief.intent);
+  const forms = candidates.filter((c) => names.includes(c.name));
+  const checked = forms.map((f) => applyHardRules({ traits: f.traits, form: f.name, brief, fields: undefined }, lenient, (r) => r.briefOnly));
+  // A brief-only rule is refused early only when every form the brief may get breaks it.
+  const shared = checked.length ? checked[0]!.problems.filter((p) => checked.every((c) => c.problems.some((q) => q.code === p.code))) : [];
+  return { problems: [...checkIntentOptions(brief), ...shared], decisions: checked[0]?.decisions ?? [] };
 }

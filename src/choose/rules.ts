@@ -14,7 +14,7 @@ export interface Rule {
 
 /**
  * The rule table, as data: the first rule whose intent and data shape match chooses the form.
- * Adding a form means adding a row here and one file in src/forms/.
+ * Adding a form means adding a row here, one file in src/forms/ and its registry line.
  */
 export const RULES: readonly Rule[] = [
   {
@@ -36,4 +36,14 @@ export const RULES: readonly Rule[] = [
 /** The first rule that matches the intent and the fields. */
 export function matchRule(intent: Intent, fields: Fields): Rule | undefined {
   return RULES.find((r) => r.intent === intent && r.applies(fields));
+}
+
+/** The intents the rule table answers, in table order. */
+export function supportedIntents(): Intent[] {
+  return [...new Set(RULES.map((r) => r.intent))];
+}
+
+/** The forms the rules may lead an intent to. */
+export function formsForIntent(intent: Intent): FormName[] {
+  return [...new Set(RULES.filter((r) => r.intent === intent).map((r) => r.form))];
 }

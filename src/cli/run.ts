@@ -1,7 +1,7 @@
 import { Command, CommanderError, InvalidArgumentError } from 'commander';
 import { readFileSync, readdirSync, statSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
-import { BRIEF_SCHEMA } from '../brief/schema.js';
+import { BRIEF_SCHEMA } from '../pipeline/vocabulary.js';
 import { diagnostic, hasErrors, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { createNodeEnv } from '../io/node-env.js';
 import { packageRoot } from '../io/package-root.js';

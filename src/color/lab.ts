@@ -1,28 +1,24 @@
-import { toLinear, type Rgb } from './srgb.js';
+import { convertRgbToLab65, differenceCiede2000 } from 'culori/fn';
+import type { Rgb } from './srgb.js';
 
-/** CIELAB coordinates, D65 white. */
+/** CIELAB coordinates [L*, a*, b*], D65 white. */
 export type Lab = [number, number, number];
 
-/**
- * Linear sRGB → XYZ (D65), derived from the sRGB primaries and the D65 chromaticity
- * (0.3127, 0.3290) at full precision, as colorjs.io and culori do; the 7-digit matrix printed in
- * IEC 61966-2-1 moves L* by about 0.004.
- */
-const M = [
-  [0.41239079926595934, 0.357584339383878, 0.1804807884018343],
-  [0.21263900587151027, 0.715168678767756, 0.07219231536073371],
-  [0.01933081871559182, 0.11919477979462598, 0.9505321522496606],
-] as const;
-const WHITE = [0.3127 / 0.329, 1, (1 - 0.3127 - 0.329) / 0.329] as const;
-
-function f(t: number): number {
-  const d = 6 / 29;
-  return t > d ** 3 ? Math.cbrt(t) : t / (3 * d * d) + 4 / 29;
+/** sRGB channels in [0, 1] → CIELAB (D65), through culori's `lab65` conversion. */
+export function rgbToLab([r, g, b]: Rgb): Lab {
+  const c = convertRgbToLab65({ r, g, b });
+  return [c.l, c.a, c.b];
 }
 
-/** sRGB channels in [0, 1] → CIELAB (D65). */
-export function rgbToLab(rgb: Rgb): Lab {
-  const lin = rgb.map(toLinear);
-  const [x, y, z] = M.map((row, i) => (row[0] * lin[0]! + row[1] * lin[1]! + row[2] * lin[2]!) / WHITE[i]!) as [number, number, number];
-  return [116 * f(y) - 16, 500 * (f(x) - f(y)), 200 * (f(y) - f(z))];
+// Built once: culori's difference functions are factories. Both colours are given in `lab65`,
+// the space ΔE00 is computed in, so culori converts nothing (a `lab` colour would be D50 and
+// be converted first, which moves Sharma pair 1 from 2.0425 to 1.8566).
+const de00 = differenceCiede2000();
+
+/**
+ * CIEDE2000 colour difference with kL = kC = kH = 1 (CIE 142-2001; Sharma, Wu & Dalal, Color
+ * Res. Appl. 30(1), 2005), computed by culori on CIELAB D65 coordinates.
+ */
+export function ciede2000([L1, a1, b1]: Lab, [L2, a2, b2]: Lab): number {
+  return de00({ mode: 'lab65', l: L1, a: a1, b: b1 }, { mode: 'lab65', l: L2, a: a2, b: b2 });
 }

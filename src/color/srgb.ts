@@ -1,23 +1,28 @@
-/** A colour as three channels in [0, 1]. */
+import { convertLrgbToRgb, convertRgbToLrgb, formatHex, parseHex } from 'culori/fn';
+
+/** A colour as three sRGB channels, nominally in [0, 1]. */
 export type Rgb = [number, number, number];
 
-/** #rrggbb → sRGB channels in [0, 1]. */
+/** #rrggbb → sRGB channels in [0, 1]. Throws on anything that is not a hex colour. */
 export function hexToRgb(hex: string): Rgb {
-  const n = Number.parseInt(hex.slice(1), 16);
-  return [((n >> 16) & 255) / 255, ((n >> 8) & 255) / 255, (n & 255) / 255];
+  const c = parseHex(hex);
+  if (!c) throw new TypeError(`not a hex colour: ${hex}`);
+  return [c.r, c.g, c.b];
 }
 
-/** sRGB channels in [0, 1] (clamped) → #rrggbb. */
-export function rgbToHex(rgb: Rgb): string {
-  return `#${rgb.map((c) => Math.round(Math.min(1, Math.max(0, c)) * 255).toString(16).padStart(2, '0')).join('')}`;
+/** sRGB channels (clamped to [0, 1]) → #rrggbb. */
+export function rgbToHex([r, g, b]: Rgb): string {
+  return formatHex({ mode: 'rgb', r, g, b });
 }
 
-/** The sRGB transfer function undone (IEC 61966-2-1). */
-export function toLinear(c: number): number {
-  return c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
+/** The sRGB transfer function undone on each channel (IEC 61966-2-1): linear-light RGB. */
+export function toLinearRgb([r, g, b]: Rgb): Rgb {
+  const c = convertRgbToLrgb({ r, g, b });
+  return [c.r, c.g, c.b];
 }
 
-/** The sRGB transfer function applied. */
-export function fromLinear(c: number): number {
-  return c <= 0.0031308 ? c * 12.92 : 1.055 * c ** (1 / 2.4) - 0.055;
+/** The sRGB transfer function applied to each linear-light channel. */
+export function fromLinearRgb([r, g, b]: Rgb): Rgb {
+  const c = convertLrgbToRgb({ r, g, b });
+  return [c.r, c.g, c.b];
 }

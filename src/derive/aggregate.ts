@@ -1,19 +1,24 @@
-import { max, min } from 'd3-array';
+import { fsum, max, mean, min } from 'd3-array';
 import type { Aggregate } from '../brief/types.js';
 
-/** Combines the values of rows that share a key. `count` counts rows, whatever their values. */
-export function aggregateValues(values: readonly number[], how: Aggregate): number {
-  switch (how) {
-    case 'sum': return values.reduce((a, b) => a + b, 0);
-    case 'mean': return values.reduce((a, b) => a + b, 0) / values.length;
-    case 'count': return values.length;
-    // d3-array loops; spreading a long list into Math.max overflows the stack.
-    case 'max': return max(values)!;
-    case 'min': return min(values)!;
-  }
+/** How rows that share a key are combined: the arithmetic, the word for messages, and whether results add up. */
+export interface Aggregator {
+  combine(values: readonly number[]): number;
+  /** Past tense for messages: "summed", "averaged", … */
+  verb: string;
+  /** Whether combined values can be added again (into an "Others" bar, a stack, a total). */
+  additive: boolean;
 }
 
-/** Past tense for messages: "summed", "averaged", … */
-export const AGGREGATE_VERB: Record<Aggregate, string> = {
-  sum: 'summed', mean: 'averaged', count: 'counted', max: 'reduced to their maximum', min: 'reduced to their minimum',
+/**
+ * The aggregators by name. Sums and means use compensated (Neumaier) summation through
+ * d3-array's `fsum`, so a long column does not drift; `max` and `min` loop (spreading a long
+ * list into Math.max overflows the stack).
+ */
+export const AGGREGATORS: Record<Aggregate, Aggregator> = {
+  sum: { combine: (v) => fsum(v), verb: 'summed', additive: true },
+  mean: { combine: (v) => mean(v)!, verb: 'averaged', additive: false },
+  count: { combine: (v) => v.length, verb: 'counted', additive: true },
+  max: { combine: (v) => max(v)!, verb: 'reduced to their maximum', additive: false },
+  min: { combine: (v) => min(v)!, verb: 'reduced to their minimum', additive: false },
 };

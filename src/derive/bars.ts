@@ -1,10 +1,21 @@
-import type { BarPlan } from '../choose/types.js';
-import { describeRows, diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
-import { keyText } from '../fields/labels.js';
+import type { Aggregate } from '../brief/types.js';
+import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import type { FieldRef } from '../fields/types.js';
 import type { Table } from '../table/types.js';
-import { AGGREGATE_VERB, aggregateValues } from './aggregate.js';
+import { AGGREGATORS } from './aggregate.js';
 import { firstUnevenStep } from './dates.js';
+import { groupRows, type RowGroup } from './group.js';
 import { compareNatural, compareText } from './order.js';
+
+/** What the bar derivation needs from the plan. */
+export interface BarQuery {
+  key: FieldRef;
+  /** The value field; undefined when bars count rows (`aggregate: count` with no value). */
+  value: FieldRef | undefined;
+  /** value: largest first; label: A→Z; data: as the rows give them; key: the key's own order. */
+  order: 'value' | 'label' | 'data' | 'key';
+  aggregate: Aggregate;
+}
 
 /** One bar: its label, the value it shows, and the rows behind it. */
 export interface BarDatum {
@@ -18,67 +29,44 @@ export interface BarDatum {
   folds?: number;
 }
 
-/** The numbers a bar chart draws. */
-export interface DerivedBars {
-  plan: BarPlan;
+/**
+ * How folded keys were combined: into an "Others" bar; left out (mean, min, max cannot be
+ * added); or left out with their total stated, because an "Others" bar longer than every bar
+ * shown would squash the bars the chart is for.
+ */
+export type FoldMode = 'others' | 'dropped' | 'stated' | 'none';
+
+/** What a fold left out, as the note under the chart states it. */
+export interface FoldSummary {
+  mode: FoldMode;
+  /** How many keys were folded. */
+  count: number;
+  /** Their total, for "others" and "stated". */
+  total?: number;
+}
+
+/** The numbers a bar chart draws, with the query (or the plan holding it) they came from. */
+export interface DerivedBars<Q extends BarQuery = BarQuery> {
+  query: Q;
   bars: BarDatum[];
   /** Name of the value in data terms: the value column, or "count". */
   valueName: string;
-  /** The keys folded into "Others", largest first. */
+  /** The keys folded into "Others" or left out, largest first. */
   foldedKeys: string[];
-  /**
-   * How folded keys were combined: into an "Others" bar; left out (mean, min, max cannot be
-   * added); or left out with their total stated, because an "Others" bar longer than every
-   * bar shown would squash the bars the chart is for.
-   */
-  foldMode: 'others' | 'dropped' | 'stated' | 'none';
+  foldMode: FoldMode;
   /** The total of the folded keys, for "others" and "stated". */
   foldedTotal?: number;
+  /** How many bars the plot holds at the narrowest band drawn. */
+  capacity: number;
 }
 
-interface Group { label: string; sortKey: number; values: number[]; rows: number[] }
+/**
+ * How many bars the plot holds, given what a fold would leave out (its note takes room from the
+ * plot). Supplied by the bar form, which measures the frame; a plain number in tests.
+ */
+export type CapacityFor = (fold: FoldSummary | undefined, bars: readonly BarDatum[]) => number;
 
-/** Where a row's key sits in the key's own order: time, number, or level index (levels looked up by Map, not indexOf). */
-function keyOrderOf(plan: BarPlan): (row: number) => number {
-  const { column, levels } = plan.key;
-  const index = new Map(levels.map((level, i) => [level, i]));
-  return (row) => {
-    const v = column.values[row];
-    if (typeof v === 'number') return v;
-    return index.get(column.text[row] ?? '') ?? Number.MAX_SAFE_INTEGER;
-  };
-}
-
-function groupRows(table: Table, plan: BarPlan, problems: Diagnostic[]): Group[] {
-  const groups = new Map<string, Group>();
-  const missingValue: number[] = [];
-  const missingKey: number[] = [];
-  const keyOrder = keyOrderOf(plan);
-  for (let i = 0; i < table.rowCount; i++) {
-    const label = keyText(plan.key.column, i);
-    const raw = plan.value ? plan.value.column.values[i] : 1;
-    if (label === null) { missingKey.push(table.rowPositions[i]!); continue; }
-    if (typeof raw !== 'number') { missingValue.push(table.rowPositions[i]!); continue; }
-    let g = groups.get(label);
-    if (!g) { g = { label, sortKey: keyOrder(i), values: [], rows: [] }; groups.set(label, g); }
-    g.values.push(raw);
-    g.rows.push(table.rowPositions[i]!);
-  }
-  const noun = table.positionNoun;
-  if (missingValue.length) {
-    problems.push(diagnostic('derive.missing-values', `${describeRows(missingValue, noun)} ha${missingValue.length === 1 ? 's' : 've'} no usable \`${plan.value!.name}\` (missing or not finite) and ${missingValue.length === 1 ? 'is' : 'are'} left out, not drawn as zero`, {
-      file: table.origin.file, field: plan.value!.name, rows: missingValue, hint: 'fill in the values, or remove those rows if they are not data',
-    }));
-  }
-  if (missingKey.length) {
-    problems.push(diagnostic('derive.missing-values', `${describeRows(missingKey, noun)} ha${missingKey.length === 1 ? 's' : 've'} no \`${plan.key.name}\` and ${missingKey.length === 1 ? 'is' : 'are'} left out`, {
-      file: table.origin.file, field: plan.key.name, rows: missingKey, hint: 'give every row a key',
-    }));
-  }
-  return [...groups.values()];
-}
-
-function sortBars(bars: BarDatum[], keyOf: Map<string, number>, order: BarPlan['order']): BarDatum[] {
+function sortBars(bars: BarDatum[], keyOf: Map<string, number>, order: BarQuery['order']): BarDatum[] {
   const byValue = (a: BarDatum, b: BarDatum) => b.value - a.value || compareText(a.label, b.label);
   if (order === 'value') return [...bars].sort(byValue);
   if (order === 'label') return [...bars].sort((a, b) => compareNatural(a.label, b.label));
@@ -86,38 +74,53 @@ function sortBars(bars: BarDatum[], keyOf: Map<string, number>, order: BarPlan['
   return bars;
 }
 
-function fold(bars: BarDatum[], plan: BarPlan, valueName: string, problems: Diagnostic[]): Pick<DerivedBars, 'bars' | 'foldedKeys' | 'foldMode' | 'foldedTotal'> | undefined {
-  if (bars.length <= plan.capacity) return { bars, foldedKeys: [], foldMode: 'none' };
-  if (plan.order === 'key') {
-    problems.push(diagnostic('derive.too-many-ordered-bars', `${bars.length} bars in key order do not fit: the plot holds ${plan.capacity} at 3 px each, and folding an ordered key into "Others" would break its order`, {
-      field: plan.key.name, found: `${bars.length} bars`, expected: `at most ${plan.capacity}`, hint: 'use intent: trend for a line, aggregate to a coarser key (e.g. months instead of days), or make the chart larger with `size:`',
-    }));
-    return undefined;
-  }
-  const additive = plan.aggregate === 'sum' || plan.aggregate === 'count';
+type Folded = Pick<DerivedBars, 'bars' | 'foldedKeys' | 'foldMode' | 'foldedTotal'>;
+
+/** The bars kept at a capacity: the largest, plus an "Others" bar, or with the rest stated or dropped. */
+function foldAt(bars: BarDatum[], query: BarQuery, capacity: number): Folded {
+  const { additive } = AGGREGATORS[query.aggregate];
   const ranked = [...bars].sort((a, b) => b.value - a.value || compareText(a.label, b.label));
   const restTotal = (keep: number) => ranked.slice(keep).reduce((s, b) => s + b.value, 0);
   const largestShown = (keep: number) => Math.max(...ranked.slice(0, keep).map((b) => Math.abs(b.value)));
   // An "Others" bar longer than every bar kept would squash them all on the shared scale.
-  const stated = additive && Math.abs(restTotal(plan.capacity - 1)) > largestShown(plan.capacity - 1);
-  const keep = additive && !stated ? plan.capacity - 1 : plan.capacity;
+  const stated = additive && Math.abs(restTotal(capacity - 1)) > largestShown(capacity - 1);
+  const keep = additive && !stated ? capacity - 1 : capacity;
   const kept = new Set(ranked.slice(0, keep).map((b) => b.label));
   const rest = ranked.slice(keep);
   const total = restTotal(keep);
   const shown = bars.filter((b) => kept.has(b.label));
-  const mode: DerivedBars['foldMode'] = !additive ? 'dropped' : stated ? 'stated' : 'others';
+  const mode: FoldMode = !additive ? 'dropped' : stated ? 'stated' : 'others';
   if (mode === 'others') {
     shown.push({ label: `Others (${rest.length})`, value: total, count: rest.reduce((s, b) => s + b.count, 0), rows: rest.flatMap((b) => b.rows), folds: rest.length });
   }
-  const why = {
-    others: `the ${rest.length} smallest are folded into one "Others" bar carrying their total ${valueName}`,
-    stated: `the ${rest.length} smallest are left out and their total ${valueName} is stated in a note, because an "Others" bar of it would be longer than every bar shown and squash them`,
-    dropped: `the ${rest.length} smallest are left out, because ${plan.aggregate} values cannot be added into an "Others" bar`,
-  }[mode];
-  problems.push(diagnostic('derive.others-folded', `${bars.length} bars do not fit at 3 px each; ${why}`, {
-    field: plan.key.name, found: `${bars.length} bars`, expected: `at most ${plan.capacity}`, hint: 'make the chart larger with `size:`, or filter the table to the keys that matter',
-  }));
   return { bars: shown, foldedKeys: rest.map((b) => b.label), foldMode: mode, ...(additive ? { foldedTotal: total } : {}) };
+}
+
+/**
+ * The largest capacity the plot keeps once the fold's own note takes its room: each try folds at
+ * the capacity found so far, measures again with that fold's note, and stops when the note fits.
+ */
+function settleCapacity(bars: BarDatum[], query: BarQuery, capacityFor: CapacityFor): { capacity: number; folded: Folded } {
+  let capacity = Math.max(1, capacityFor(undefined, bars));
+  for (;;) {
+    const folded = foldAt(bars, query, capacity);
+    const room = Math.max(1, capacityFor({ mode: folded.foldMode, count: folded.foldedKeys.length, total: folded.foldedTotal }, folded.bars));
+    if (room >= capacity || capacity === 1) return { capacity, folded };
+    capacity = room;
+  }
+}
+
+function foldDiagnostic(total: number, query: BarQuery, folded: Folded, capacity: number, valueName: string): Diagnostic {
+  const n = folded.foldedKeys.length;
+  const why = {
+    others: `the ${n} smallest are folded into one "Others" bar carrying their total ${valueName}`,
+    stated: `the ${n} smallest are left out and their total ${valueName} is stated in a note, because an "Others" bar of it would be longer than every bar shown and squash them`,
+    dropped: `the ${n} smallest are left out, because ${query.aggregate} values cannot be added into an "Others" bar`,
+    none: '',
+  }[folded.foldMode];
+  return diagnostic('derive.others-folded', `${total} bars do not fit at 3 px each; ${why}`, {
+    field: query.key.name, found: `${total} bars`, expected: `at most ${capacity}`, hint: 'make the chart larger with `size:`, or filter the table to the keys that matter',
+  });
 }
 
 const GRAIN_WORD = { year: 'years', month: 'months', day: 'days', minute: 'ms', second: 'ms' } as const;
@@ -126,43 +129,62 @@ const GRAIN_WORD = { year: 'years', month: 'months', day: 'days', minute: 'ms', 
  * Bars stand evenly apart, so a date key with gaps (a missing month) would look like one step:
  * warned about, naming the first gap.
  */
-function unevenDates(bars: BarDatum[], keyOf: Map<string, number>, plan: BarPlan): Diagnostic[] {
-  const { column } = plan.key;
-  if (plan.key.type !== 'temporal' || plan.order !== 'key' || column.type !== 'date') return [];
+function unevenDates(bars: BarDatum[], keyOf: Map<string, number>, query: BarQuery, table: Table): Diagnostic[] {
+  const column = table.columns.find((c) => c.name === query.key.name)!;
+  if (query.key.type !== 'temporal' || query.order !== 'key' || column.type !== 'date') return [];
   const grain = column.grain ?? 'day';
   const gap = firstUnevenStep(bars.map((b) => keyOf.get(b.label)!), grain);
   if (!gap) return [];
   const after = bars.find((b) => keyOf.get(b.label) === gap.after)!.label;
-  return [diagnostic('derive.uneven-dates', `the dates of \`${plan.key.name}\` are not evenly spaced: after ${after} comes a step of ${gap.step} ${GRAIN_WORD[grain]} where the others are ${gap.usual}; bars stand evenly apart, so the gap does not show`, {
-    field: plan.key.name, hint: 'add rows for the missing dates (NA leaves a visible empty slot), or chart time to scale with a line (intent: trend)',
+  return [diagnostic('derive.uneven-dates', `the dates of \`${query.key.name}\` are not evenly spaced: after ${after} comes a step of ${gap.step} ${GRAIN_WORD[grain]} where the others are ${gap.usual}; bars stand evenly apart, so the gap does not show`, {
+    field: query.key.name, hint: 'add rows for the missing dates (NA leaves a visible empty slot), or chart time to scale with a line (intent: trend)',
   })];
 }
 
+function combineGroups(groups: RowGroup[], query: BarQuery, problems: Diagnostic[]): BarDatum[] | undefined {
+  const aggregator = AGGREGATORS[query.aggregate];
+  const combined = groups.filter((g) => g.values.length > 1);
+  if (combined.length && query.value) {
+    problems.push(diagnostic('derive.aggregated', `${combined.length} key${combined.length === 1 ? '' : 's'} ha${combined.length === 1 ? 's' : 've'} several rows (first: ${JSON.stringify(combined[0]!.labels[0])}, ${combined[0]!.values.length} rows); their values are ${aggregator.verb} (aggregate: ${query.aggregate})`, {
+      field: query.key.name, hint: 'set `aggregate:` to sum, mean, count, max or min',
+    }));
+  }
+  const bars = groups.map((g) => ({ label: g.labels[0]!, value: aggregator.combine(g.values), count: g.values.length, rows: g.rows }));
+  const overflow = bars.find((b) => !Number.isFinite(b.value));
+  if (!overflow) return bars;
+  problems.push(diagnostic('derive.not-finite', `the ${aggregator.verb} \`${query.value?.name ?? 'count'}\` of ${JSON.stringify(overflow.label)} is beyond the range of numbers (${overflow.value})`, {
+    field: query.key.name, found: String(overflow.value), expected: 'a finite number (below about 1.8e308 in size)', hint: 'rescale the values (e.g. to thousands or millions) before charting',
+  }));
+  return undefined;
+}
+
 /**
- * The derive stage for bars: rows → one bar per key, combined by the brief's aggregate, in the
- * chosen order, folded to what the plot can show. Missing values are left out, never drawn as 0.
+ * The derive stage for bars: rows → one bar per key, combined by the aggregate, in the chosen
+ * order, folded to what the plot can show. Missing values are left out, never drawn as 0.
  */
-export function deriveBars(table: Table, plan: BarPlan): Outcome<DerivedBars> {
-  const problems: Diagnostic[] = [];
-  const groups = groupRows(table, plan, problems);
-  const valueName = plan.value?.name ?? 'count';
+export function deriveBars<Q extends BarQuery>(table: Table, query: Q, capacityFor: CapacityFor): Outcome<DerivedBars<Q>> {
+  const { groups, diagnostics: problems } = groupRows(table, { keys: [query.key], value: query.value });
+  const valueName = query.value?.name ?? 'count';
   if (groups.length === 0) {
     problems.push(diagnostic('derive.no-rows', 'no row has both a key and a usable value, so there is nothing to draw', {
       file: table.origin.file, hint: 'check that the key and value columns are the ones you meant', expected: 'at least one complete row',
     }));
     return failure(problems);
   }
-  const combined = groups.filter((g) => g.values.length > 1);
-  if (combined.length && plan.value) {
-    problems.push(diagnostic('derive.aggregated', `${combined.length} key${combined.length === 1 ? '' : 's'} ha${combined.length === 1 ? 's' : 've'} several rows (first: ${JSON.stringify(combined[0]!.label)}, ${combined[0]!.values.length} rows); their values are ${AGGREGATE_VERB[plan.aggregate]} (aggregate: ${plan.aggregate})`, {
-      field: plan.key.name, hint: 'set `aggregate:` to sum, mean, count, max or min',
+  const bars = combineGroups(groups, query, problems);
+  if (!bars) return failure(problems);
+  const keyOf = new Map(groups.map((g) => [g.labels[0]!, g.sortKeys[0]!]));
+  const sorted = sortBars(bars, keyOf, query.order);
+  problems.push(...unevenDates(sorted, keyOf, query, table));
+  const fits = Math.max(1, capacityFor(undefined, sorted));
+  if (sorted.length <= fits) return success({ query, valueName, bars: sorted, foldedKeys: [], foldMode: 'none', capacity: fits }, problems);
+  if (query.order === 'key') {
+    problems.push(diagnostic('derive.too-many-ordered-bars', `${sorted.length} bars in key order do not fit: the plot holds ${fits} at 3 px each, and folding an ordered key into "Others" would break its order`, {
+      field: query.key.name, found: `${sorted.length} bars`, expected: `at most ${fits}`, hint: 'use intent: trend for a line, aggregate to a coarser key (e.g. months instead of days), or make the chart larger with `size:`',
     }));
+    return failure(problems);
   }
-  const bars = groups.map((g) => ({ label: g.label, value: aggregateValues(g.values, plan.aggregate), count: g.values.length, rows: g.rows }));
-  const keyOf = new Map(groups.map((g) => [g.label, g.sortKey]));
-  const sorted = sortBars(bars, keyOf, plan.order);
-  problems.push(...unevenDates(sorted, keyOf, plan));
-  const folded = fold(sorted, plan, valueName, problems);
-  if (!folded) return failure(problems);
-  return success({ plan, valueName, ...folded }, problems);
+  const { capacity, folded } = settleCapacity(sorted, query, capacityFor);
+  problems.push(foldDiagnostic(sorted.length, query, folded, capacity, valueName));
+  return success({ query, valueName, capacity, ...folded }, problems);
 }

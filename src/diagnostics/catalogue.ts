@@ -18,6 +18,7 @@ export const CATALOGUE = {
   'brief.bad-style': 'error',
   'brief.low-contrast': 'warning',
   'brief.indistinct-colours': 'warning',
+  'brief.option-not-used': 'error',
   // table: reading and typing the data
   'table.not-found': 'error',
   'table.unreadable': 'error',
@@ -48,6 +49,10 @@ export const CATALOGUE = {
   'choice.order-not-applicable': 'error',
   'choice.lenient-fallback': 'warning',
   'choice.unit-missing': 'warning',
+  'choice.no-rule': 'error',
+  'choice.line-on-categorical': 'error',
+  'choice.radial-not-cyclic': 'error',
+  'choice.too-many-colours': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -55,11 +60,14 @@ export const CATALOGUE = {
   'derive.no-rows': 'error',
   'derive.too-many-ordered-bars': 'error',
   'derive.uneven-dates': 'warning',
+  'derive.not-finite': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',
   'layout.missing-glyphs': 'warning',
   'layout.frame-too-small': 'error',
+  'layout.text-off-canvas': 'warning',
+  'layout.text-overlap': 'warning',
   // output
   'output.write-failed': 'error',
   'output.raster-failed': 'error',

@@ -1,4 +1,4 @@
-import type { FieldHint, FieldType, ResolvedBrief } from '../brief/types.js';
+import { COLUMN_OPTIONS, type FieldHint, type FieldType, type ResolvedBrief } from '../brief/types.js';
 import { pointer } from '../brief/validate.js';
 import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import { suggestionHint } from '../diagnostics/suggest.js';
@@ -65,6 +65,7 @@ export function inferFields(table: Table, brief: ResolvedBrief): Outcome<Fields>
     ...checkNames(brief.keys, '/keys', table, brief.keys.length > 1),
     ...checkNames(brief.values, '/values', table, brief.values.length > 1),
     ...Object.keys(brief.fields).flatMap((name) => checkNames([name], pointer('/fields', name), table, false)),
+    ...COLUMN_OPTIONS.flatMap((option) => (brief[option] === undefined ? [] : checkNames([brief[option]!], `/${option}`, table, false))),
   ];
   if (hasErrors(problems)) return failure(problems);
   const all = table.columns.map((column): Field => {

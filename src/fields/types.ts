@@ -18,6 +18,14 @@ export interface Field {
   column: Column;
 }
 
+/** A field as plans refer to it: its name and presentation, never its column of data. */
+export type FieldRef = Pick<Field, 'name' | 'label' | 'type' | 'unit' | 'format' | 'levels'>;
+
+/** The reference to a field that a plan keeps. */
+export function refOf(field: Field): FieldRef {
+  return { name: field.name, label: field.label, type: field.type, unit: field.unit, format: field.format, levels: field.levels };
+}
+
 /** The fields of a brief: its keys and values in brief order, then every other column. */
 export interface Fields {
   keys: Field[];

@@ -1,15 +1,11 @@
 import type { FormName } from '../brief/types.js';
-import type { DerivedBars } from '../derive/bars.js';
-import { layoutBar } from './bar.js';
-import type { FormContext, FormResult } from './types.js';
+import { BAR } from './bar.js';
+import type { AnyForm } from './types.js';
 
-/** A chart form: lays out its derived data as a scene. */
-export interface Form<D> {
-  name: FormName;
-  layout(derived: D, ctx: FormContext): FormResult;
+/** The forms chartwright draws: one entry per form file in src/forms/. */
+export const FORMS: readonly AnyForm[] = [BAR];
+
+/** The form of a name, if it is drawn. */
+export function formNamed(name: FormName | string): AnyForm | undefined {
+  return FORMS.find((f) => f.name === name);
 }
-
-/** The forms chartwright draws, by name: one entry per file in src/forms/. */
-export const FORMS = {
-  bar: { name: 'bar', layout: layoutBar } satisfies Form<DerivedBars>,
-} as const;

@@ -1,13 +1,14 @@
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
 import { dirname, isAbsolute, join, resolve } from 'node:path';
-import { diagnostic, failure, success, type Outcome } from '../diagnostics/diagnostic.js';
+import { diagnostic, failure, type Outcome } from '../diagnostics/diagnostic.js';
 import { suggestionHint } from '../diagnostics/suggest.js';
 import { createMeasurer, type TextMeasurer } from '../font/measurer.js';
 import type { FontMetrics, GlyphOutlines } from '../font/metrics.js';
 import type { RenderEnv } from '../pipeline/env.js';
-import { checkStyle, contrastWarnings, distinctnessWarnings } from '../style/check.js';
+import type { PaletteFile } from '../color/palette.js';
+import { resolveStyle } from '../style/resolve.js';
 import type { Style, Weight } from '../style/types.js';
 import type { OutlineSet } from '../svg/glyphs.js';
 import type { TableEnv } from '../table/load.js';
@@ -40,8 +41,13 @@ function loadStyle(root: string, name: string, briefFile: string | undefined): O
     const code = (e as NodeJS.ErrnoException).code;
     return failure([diagnostic(code === 'ENOENT' ? 'brief.style-not-found' : 'brief.bad-style', code === 'ENOENT' ? `the style file \`${name}\` does not exist` : `the style file \`${name}\` is not valid JSON`, { path: '/style', found: file, hint: 'style paths are relative to the brief; presets are named without .json' })]);
   }
-  const problems = checkStyle(value, file);
-  return problems.length ? failure(problems) : success(value as Style, [...contrastWarnings(value as Style, file), ...distinctnessWarnings(value as Style, file)]);
+  return resolveStyle(value, file, readPalettes(root));
+}
+
+/** The palette files shipped in templates/palettes. */
+function readPalettes(root: string): PaletteFile[] {
+  const dir = join(root, 'templates', 'palettes');
+  return readdirSync(dir).filter((f) => f.endsWith('.json')).sort().map((f) => readJson<PaletteFile>(join(dir, f)));
 }
 
 /**

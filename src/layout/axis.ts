@@ -1,5 +1,5 @@
 import type { TextMeasurer } from '../font/measurer.js';
-import type { Field } from '../fields/types.js';
+import type { FieldRef } from '../fields/types.js';
 import type { TextStyle } from '../style/types.js';
 import { tickFormatter } from './number-format.js';
 import { niceTicks } from './ticks.js';
@@ -8,7 +8,7 @@ import { niceTicks } from './ticks.js';
 const PX_PER_TICK = { vertical: 50, horizontal: 90 } as const;
 
 /** The title of an axis: the field's readable name, with its unit in brackets unless the name already says it. */
-export function axisTitle(field: Field | undefined, fallback: string): string {
+export function axisTitle(field: FieldRef | undefined, fallback: string): string {
   if (!field) return fallback;
   const unit = field.unit?.trim();
   if (!unit || field.label.toLowerCase().includes(unit.toLowerCase())) return field.label;

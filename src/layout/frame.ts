@@ -1,5 +1,5 @@
 import type { TextMeasurer } from '../font/measurer.js';
-import type { Box, TextNode } from '../scene/types.js';
+import type { Box, Role, TextNode } from '../scene/types.js';
 import type { Style, TextStyle } from '../style/types.js';
 import { lineHeight, textNode, wrapText } from './text.js';
 
@@ -18,7 +18,7 @@ export interface FrameLayout {
   body: Box;
 }
 
-function block(measure: TextMeasurer, role: string, text: string, style: TextStyle, x: number, top: number, width: number, lh: number): TextNode[] {
+function block(measure: TextMeasurer, role: Role, text: string, style: TextStyle, x: number, top: number, width: number, lh: number): TextNode[] {
   return wrapText(measure, text, style, width).map((line, i) => textNode(measure, { id: `${role}-${i + 1}`, role, text: line, style, x, top: top + i * lh }));
 }
 
@@ -46,9 +46,9 @@ export function layoutFrame(texts: FrameTexts, style: Style, size: { width: numb
   }
   if (texts.title || texts.subtitle) top += blockGap;
 
-  const footer: { role: string; text: string; style: TextStyle }[] = [
-    ...texts.notes.map((n) => ({ role: 'note', text: n, style: style.text.note })),
-    ...(texts.source ? [{ role: 'source', text: texts.source, style: style.text.source }] : []),
+  const footer: { role: Role; text: string; style: TextStyle }[] = [
+    ...texts.notes.map((n) => ({ role: 'note' as const, text: n, style: style.text.note })),
+    ...(texts.source ? [{ role: 'source' as const, text: texts.source, style: style.text.source }] : []),
   ];
   const footerLines = footer.flatMap((f) => wrapText(measure, f.text, f.style, width).map((line) => ({ ...f, text: line })));
   let bottom = size.height - padding;

@@ -1,5 +1,5 @@
 import type { TextMeasurer, TextRuler } from '../font/measurer.js';
-import type { TextNode } from '../scene/types.js';
+import type { Role, TextNode } from '../scene/types.js';
 import type { TextStyle } from '../style/types.js';
 
 /** Height of one line of text in a style, in px. */
@@ -12,7 +12,7 @@ export function lineHeight(style: TextStyle, lineHeightFactor: number): number {
  * at top + ascent, so boxes of consecutive lines stack without overlap.
  */
 export function textNode(measure: TextMeasurer, spec: {
-  id: string; role: string; text: string; style: TextStyle; x: number; top: number; anchor?: TextNode['anchor'];
+  id: string; role: Role; text: string; style: TextStyle; x: number; top: number; anchor?: TextNode['anchor'];
 }): TextNode {
   const { style } = spec;
   const anchor = spec.anchor ?? 'start';

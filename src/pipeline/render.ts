@@ -1,16 +1,23 @@
 import { checkBriefValue, readBrief, withPositions } from '../brief/resolve.js';
+import type { ParsedBrief } from '../brief/parse.js';
 import type { ResolvedBrief } from '../brief/types.js';
 import { checkBriefRules } from '../choose/checks.js';
 import { choose } from '../choose/choose.js';
 import type { Choice, Decision } from '../choose/types.js';
-import { deriveBars } from '../derive/bars.js';
 import { diagnostic, hasErrors, inFile, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { inferFields } from '../fields/infer.js';
-import { FORMS } from '../forms/registry.js';
+import type { TextMeasurer } from '../font/measurer.js';
+import { FORMS, formNamed } from '../forms/registry.js';
+import { layoutCartesian } from '../layout/compose.js';
+import type { LayoutContext } from '../layout/kit-types.js';
+import { idMaker } from '../scene/ids.js';
 import type { Scene } from '../scene/types.js';
+import type { Style } from '../style/types.js';
 import { writeSvg } from '../svg/write.js';
 import { readTable } from '../table/load.js';
+import type { Table } from '../table/types.js';
 import type { RenderEnv } from './env.js';
+import { VOCABULARY } from './vocabulary.js';
 
 /** One render: a brief as text or value, where it lives, and how strict to be. */
 export interface RenderRequest {
@@ -51,15 +58,108 @@ export interface RenderResult {
   timings?: StageTiming[];
 }
 
+/** Everything a render reads from outside: the brief, its style and its table. */
+export interface RenderInputs {
+  brief: ResolvedBrief;
+  parsed: ParsedBrief;
+  style: Style;
+  table: Table;
+  /** Path of the brief file, for messages. */
+  file?: string;
+}
+
+/** Per-stage timing with an injected clock (never read by rendering itself). */
+function stopwatch(clock: (() => number) | undefined) {
+  const timings: StageTiming[] = [];
+  let last = clock?.() ?? 0;
+  return {
+    timings,
+    lap(stage: string) {
+      if (!clock) return;
+      const now = clock();
+      timings.push({ stage, ms: now - last });
+      last = now;
+    },
+  };
+}
+
 function strictly(diagnostics: Diagnostic[], strict: boolean | undefined): Diagnostic[] {
   if (!strict) return diagnostics;
   return diagnostics.map((d) => (d.severity === 'warning' ? { ...d, severity: 'error', message: `${d.message} (a warning, raised to an error by --strict)` } : d));
 }
 
 function briefStage(req: RenderRequest) {
-  if (typeof req.brief === 'string') return readBrief(req.brief);
+  if (typeof req.brief === 'string') return readBrief(req.brief, undefined, VOCABULARY);
   const value = req.rows && req.brief.data === undefined && req.brief.rows === undefined ? { ...req.brief, rows: req.rows } : req.brief;
-  return checkBriefValue(value);
+  return checkBriefValue(value, undefined, VOCABULARY);
+}
+
+/**
+ * Reads what a render needs from outside (the only I/O of a render): the brief, its style and its
+ * table. When the data cannot be read, the rules that need only the brief are still reported.
+ */
+export async function loadInputs(req: RenderRequest, env: RenderEnv, lap: (stage: string) => void = () => {}): Promise<{ inputs?: RenderInputs; brief?: ResolvedBrief; diagnostics: Diagnostic[] }> {
+  const briefOutcome = briefStage(req);
+  const diagnostics = inFile(briefOutcome.diagnostics, req.file);
+  lap('brief');
+  if (!briefOutcome.ok) return { diagnostics };
+  const { brief, parsed } = briefOutcome.value;
+  const locate = (ds: Diagnostic[]) => inFile(withPositions(ds, parsed), req.file);
+  const style = env.style(brief.style, req.file);
+  diagnostics.push(...locate(style.diagnostics));
+  const table = await readTable(brief.data, brief.fields, req.file, env.table);
+  diagnostics.push(...locate(table.diagnostics));
+  lap('table');
+  if (!style.ok || !table.ok) {
+    diagnostics.push(...locate(checkBriefRules(brief, FORMS, req.lenient ?? false).problems));
+    return { brief, diagnostics };
+  }
+  return { inputs: { brief, parsed, style: style.value, table: table.value, file: req.file }, brief, diagnostics };
+}
+
+/**
+ * The pure core of a render: inputs → fields → choice → derived → scene → SVG, synchronous, with
+ * output that depends on its inputs alone. Never throws for bad input: every problem is a
+ * diagnostic on the result.
+ */
+export function renderInputs(inputs: RenderInputs, measure: TextMeasurer, opts: { lenient?: boolean } = {}, lap: (stage: string) => void = () => {}): Omit<RenderResult, 'ok' | 'timings'> {
+  const { brief, parsed, style, table, file } = inputs;
+  const all: Diagnostic[] = [];
+  const locate = (ds: Diagnostic[]) => inFile(withPositions(ds, parsed), file);
+  const lenient = opts.lenient ?? false;
+  const fields = inferFields(table, brief);
+  all.push(...locate(fields.diagnostics));
+  lap('fields');
+  if (!fields.ok) {
+    all.push(...locate(checkBriefRules(brief, FORMS, lenient).problems));
+    return { brief, rationale: [], diagnostics: all };
+  }
+  const choice = choose(fields.value, brief, { style, measure, lenient, forms: FORMS });
+  all.push(...locate(choice.diagnostics));
+  lap('choose');
+  if (!choice.ok) return { brief, rationale: [], diagnostics: all };
+  const { rationale } = choice.value;
+  const form = formNamed(choice.value.form)!;
+  const ctx: LayoutContext = { brief, style, measure, id: idMaker() };
+  const derived = form.derive(table, choice.value.plan, ctx);
+  all.push(...locate(derived.diagnostics));
+  lap('derive');
+  if (!derived.ok) return { brief, choice: choice.value, rationale, diagnostics: all };
+  const laid = layoutCartesian(form, derived.value, ctx);
+  all.push(...locate(laid.diagnostics));
+  lap('layout');
+  return { brief, choice: choice.value, rationale, scene: laid.scene, diagnostics: all };
+}
+
+/** The SVG of a finished scene, or the coded defect that stopped it (a bad coordinate is never written). */
+function svgOf(scene: Scene, family: string, file: string | undefined): { svg?: string; diagnostics: Diagnostic[] } {
+  try {
+    return { svg: writeSvg(scene, { kind: 'live', family }), diagnostics: [] };
+  } catch (e) {
+    // fmt refuses non-finite and absurd coordinates: a layout defect, reported, never written.
+    if (!(e instanceof RangeError)) throw e;
+    return { diagnostics: [diagnostic('render.internal', `the layout produced a bad coordinate (${e.message}); this is a defect in chartwright`, { file, hint: 'please report it with the brief and data' })] };
+  }
 }
 
 /**
@@ -67,60 +167,19 @@ function briefStage(req: RenderRequest) {
  * Never throws for bad input: every problem is a diagnostic on the result.
  */
 export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<RenderResult> {
-  const all: Diagnostic[] = [];
-  const timings: StageTiming[] = [];
-  let last = req.clock?.() ?? 0;
-  const lap = (stage: string) => {
-    if (!req.clock) return;
-    const now = req.clock();
-    timings.push({ stage, ms: now - last });
-    last = now;
+  const watch = stopwatch(req.clock);
+  const loaded = await loadInputs(req, env, watch.lap);
+  const finish = (result: Omit<RenderResult, 'ok' | 'timings'>): RenderResult => {
+    const diagnostics = strictly(result.diagnostics, req.strict);
+    return { ...result, ok: !hasErrors(diagnostics) && result.svg !== undefined, diagnostics, ...(req.clock ? { timings: watch.timings } : {}) };
   };
-  const done = (extra: Partial<RenderResult> = {}): RenderResult => {
-    const diagnostics = strictly(all, req.strict);
-    return { ok: !hasErrors(diagnostics) && extra.svg !== undefined, rationale: [], ...extra, diagnostics, ...(req.clock ? { timings } : {}) };
-  };
-  const briefOutcome = briefStage(req);
-  all.push(...inFile(briefOutcome.diagnostics, req.file));
-  lap('brief');
-  if (!briefOutcome.ok) return done();
-  const { brief, parsed } = briefOutcome.value;
-  const locate = (ds: Diagnostic[]) => inFile(withPositions(ds, parsed), req.file);
-  // When the data cannot be charted, the rules that need only the brief are still reported.
-  const earlyRules = () => locate(checkBriefRules(brief, req.lenient ?? false).problems);
-  const style = env.style(brief.style, req.file);
-  all.push(...locate(style.diagnostics));
-  const table = await readTable(brief.data, brief.fields, req.file, env.table);
-  all.push(...locate(table.diagnostics));
-  lap('table');
-  if (!style.ok || !table.ok) { all.push(...earlyRules()); return done({ brief }); }
-  const fields = inferFields(table.value, brief);
-  all.push(...locate(fields.diagnostics));
-  lap('fields');
-  if (!fields.ok) { all.push(...earlyRules()); return done({ brief }); }
-  const choice = choose(fields.value, brief, { style: style.value, measure: env.measure, lenient: req.lenient ?? false });
-  all.push(...locate(choice.diagnostics));
-  lap('choose');
-  if (!choice.ok) return done({ brief });
-  const rationale = choice.value.rationale;
-  const derived = deriveBars(table.value, choice.value.bar);
-  all.push(...locate(derived.diagnostics));
-  lap('derive');
-  if (!derived.ok) return done({ brief, choice: choice.value, rationale });
-  const laid = FORMS.bar.layout(derived.value, { brief, style: style.value, measure: env.measure });
-  all.push(...locate(laid.diagnostics));
-  lap('layout');
-  if (hasErrors(strictly(all, req.strict))) return done({ brief, choice: choice.value, rationale, scene: laid.scene });
-  try {
-    const svg = writeSvg(laid.scene, { kind: 'live', family: style.value.font.family });
-    lap('svg');
-    return done({ brief, choice: choice.value, rationale, scene: laid.scene, svg });
-  } catch (e) {
-    // fmt refuses non-finite and absurd coordinates: a layout defect, reported, never written.
-    if (!(e instanceof RangeError)) throw e;
-    all.push(diagnostic('render.internal', `the layout produced a bad coordinate (${e.message}); this is a defect in chartwright`, { file: req.file, hint: 'please report it with the brief and data' }));
-    return done({ brief, choice: choice.value, rationale, scene: laid.scene });
-  }
+  if (!loaded.inputs) return finish({ ...(loaded.brief ? { brief: loaded.brief } : {}), rationale: [], diagnostics: loaded.diagnostics });
+  const result = renderInputs(loaded.inputs, env.measure, { lenient: req.lenient }, watch.lap);
+  const diagnostics = [...loaded.diagnostics, ...result.diagnostics];
+  if (!result.scene || hasErrors(strictly(diagnostics, req.strict))) return finish({ ...result, diagnostics });
+  const svg = svgOf(result.scene, loaded.inputs.style.font.family, req.file);
+  watch.lap('svg');
+  return finish({ ...result, ...(svg.svg !== undefined ? { svg: svg.svg } : {}), diagnostics: [...diagnostics, ...svg.diagnostics] });
 }
 
 /** The SVG of a scene with text as glyph outlines, as the raster stage draws it. */

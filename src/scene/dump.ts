@@ -1,31 +1,44 @@
-import type { Box, Datum, Scene, SceneNode, TextNode } from './types.js';
+import { pathData } from '../svg/path.js';
+import type { AxisInfo, Box, Datum, LegendInfo, PanelInfo, PathPoint, Role, Scene, SceneNode, TextNode } from './types.js';
 
-/** A mark in the scene dump: role, pixel geometry, fill, and the datum it encodes. */
+/** A mark in the scene dump: role, pixel geometry, paint, and the datum it encodes. */
 export interface DumpMark {
-  role: string;
+  role: Role;
   kind: 'rect' | 'path' | 'circle' | 'image';
   x?: number; y?: number; width?: number; height?: number;
   cx?: number; cy?: number; r?: number;
   d?: string;
   fill?: string;
   stroke?: string;
+  strokeWidth?: number;
+  dash?: number[];
+  opacity?: number;
   datum?: Datum;
+  /** The data points a line passes through, in px, each with its datum. */
+  points?: PathPoint[];
+  /** The series a line belongs to. */
+  series?: Datum;
+  /** For rasters: the grid of data cells drawn. */
+  grid?: { columns: number; rows: number };
 }
 
 /** A text in the scene dump: its measured box (top-left, width, height). */
 export interface DumpText extends Box {
-  role: string;
+  role: Role;
   text: string;
   fill: string;
   anchor: TextNode['anchor'];
   size: number;
+  /** Rotation in degrees, when the text is rotated. */
+  rotate?: number;
 }
 
 /**
  * The scene as the documented JSON contract (`--scene FILE`): form, size, background, marks,
- * axes and texts. Checked by tests outside the project: extend it, never rename its keys.
+ * axes and texts, and since the form engine, panels and legends. Checked by tests outside the
+ * project: extend it, never rename its keys.
  */
-export interface SceneDump extends Pick<Scene, 'form' | 'width' | 'height' | 'background' | 'title' | 'description' | 'plot' | 'axes'> {
+export interface SceneDump extends Pick<Scene, 'form' | 'width' | 'height' | 'background' | 'title' | 'description' | 'plot' | 'axes' | 'panels' | 'legends'> {
   marks: DumpMark[];
   texts: DumpText[];
 }
@@ -36,15 +49,41 @@ function roundBox(b: Box): Box {
   return { x: round(b.x), y: round(b.y), width: round(b.width), height: round(b.height) };
 }
 
+/** Stroke, width, dash and opacity, as far as a mark sets them. */
+function paintOf(node: { stroke?: string; strokeWidth?: number; dash?: number[]; opacity?: number }): Partial<DumpMark> {
+  return {
+    ...(node.stroke ? { stroke: node.stroke, strokeWidth: node.strokeWidth ?? 1 } : {}),
+    ...(node.dash?.length ? { dash: node.dash } : {}),
+    ...(node.opacity !== undefined ? { opacity: node.opacity } : {}),
+  };
+}
+
 function flatten(node: SceneNode, marks: DumpMark[], texts: DumpText[]): void {
+  const datum = node.datum ? { datum: node.datum } : {};
   switch (node.kind) {
     case 'group': node.children.forEach((c) => flatten(c, marks, texts)); return;
-    case 'text': texts.push({ role: node.role, text: node.text, ...roundBox(node.box), fill: node.fill, anchor: node.anchor, size: node.size }); return;
-    case 'rect': marks.push({ role: node.role, kind: 'rect', ...roundBox(node), fill: node.fill, ...(node.datum ? { datum: node.datum } : {}) }); return;
-    case 'path': marks.push({ role: node.role, kind: 'path', d: node.d, ...(node.fill ? { fill: node.fill } : {}), ...(node.stroke ? { stroke: node.stroke } : {}), ...(node.datum ? { datum: node.datum } : {}) }); return;
-    case 'circle': marks.push({ role: node.role, kind: 'circle', cx: round(node.cx), cy: round(node.cy), r: round(node.r), fill: node.fill, ...(node.datum ? { datum: node.datum } : {}) }); return;
-    case 'image': marks.push({ role: node.role, kind: 'image', ...roundBox(node) }); return;
+    case 'text': texts.push({ role: node.role, text: node.text, ...roundBox(node.box), fill: node.fill, anchor: node.anchor, size: node.size, ...(node.rotate ? { rotate: node.rotate } : {}) }); return;
+    case 'rect': marks.push({ role: node.role, kind: 'rect', ...roundBox(node), fill: node.fill, ...paintOf(node), ...datum }); return;
+    case 'path': marks.push({
+      role: node.role, kind: 'path', d: pathData(node.commands), ...(node.fill ? { fill: node.fill } : {}), ...paintOf(node), ...datum,
+      ...(node.points ? { points: node.points.map((p) => ({ x: round(p.x), y: round(p.y), ...(p.datum ? { datum: p.datum } : {}) })) } : {}),
+      ...(node.series ? { series: node.series } : {}),
+    }); return;
+    case 'circle': marks.push({ role: node.role, kind: 'circle', cx: round(node.cx), cy: round(node.cy), r: round(node.r), fill: node.fill, ...paintOf(node), ...datum }); return;
+    case 'image': marks.push({ role: node.role, kind: 'image', ...roundBox(node), ...(node.grid ? { grid: node.grid } : {}) }); return;
   }
+}
+
+function roundAxis(a: AxisInfo): AxisInfo {
+  return { ...a, tickPositions: a.tickPositions.map(round), range: [round(a.range[0]), round(a.range[1])] };
+}
+
+function roundPanel(p: PanelInfo): PanelInfo {
+  return { ...p, plot: roundBox(p.plot), axes: p.axes.map(roundAxis) };
+}
+
+function roundLegend(l: LegendInfo): LegendInfo {
+  return { ...l, box: roundBox(l.box), entries: l.entries.map((e) => (e.r !== undefined ? { ...e, r: round(e.r) } : e)) };
 }
 
 /** Flattens a scene into the dump contract; numbers rounded to 1/1000 px. */
@@ -55,7 +94,9 @@ export function dumpScene(scene: Scene): SceneDump {
   return {
     form: scene.form, width: scene.width, height: scene.height, background: scene.background,
     title: scene.title, description: scene.description, plot: roundBox(scene.plot), marks,
-    axes: scene.axes.map((a) => ({ ...a, tickPositions: a.tickPositions.map(round), range: [round(a.range[0]), round(a.range[1])] as [number, number] })),
+    axes: scene.axes.map(roundAxis),
     texts,
+    panels: scene.panels.map(roundPanel),
+    legends: scene.legends.map(roundLegend),
   };
 }

@@ -3,11 +3,36 @@ import type { Weight } from '../style/types.js';
 /** The datum a mark encodes: column name → value, as in the data. */
 export type Datum = Record<string, string | number | boolean | null>;
 
+/**
+ * What a node is in the chart. A closed list: the scene dump, the SVG classes and the tests
+ * all read it. Extend it when a form needs a new kind of mark; never rename a role.
+ */
+export type Role =
+  | 'chart' | 'panel' | 'panel-title'
+  // marks
+  | 'bar' | 'segment' | 'line' | 'point' | 'task' | 'dependency' | 'bin' | 'box' | 'cell'
+  | 'dendrogram' | 'layer' | 'raster' | 'area'
+  // guides
+  | 'gridline' | 'zero-line' | 'reference' | 'tick' | 'tick-mark' | 'axis-line' | 'axis-title'
+  | 'legend' | 'legend-title' | 'legend-swatch' | 'legend-label'
+  // words
+  | 'label' | 'leader' | 'title' | 'subtitle' | 'note' | 'source';
+
+/** How a mark is painted. Absent parts are not written (SVG defaults apply). */
+export interface Paint {
+  fill?: string;
+  stroke?: string;
+  strokeWidth?: number;
+  /** Dash pattern in px, e.g. [4, 3]. */
+  dash?: number[];
+  /** 0–1; 1 when absent. */
+  opacity?: number;
+}
+
 interface NodeBase {
   /** Stable id, derived from the data the node draws (never from a counter shared across charts). */
   id: string;
-  /** What the node is in the chart: "bar", "gridline", "tick", "title", … */
-  role: string;
+  role: Role;
   datum?: Datum;
 }
 
@@ -24,21 +49,36 @@ export interface GroupNode extends NodeBase {
   children: SceneNode[];
 }
 
-export interface RectNode extends NodeBase, Box {
+export interface RectNode extends NodeBase, Box, Paint {
   kind: 'rect';
   fill: string;
 }
 
-export interface PathNode extends NodeBase {
-  kind: 'path';
-  /** Path data in absolute pixel coordinates. */
-  d: string;
-  fill: string | undefined;
-  stroke: string | undefined;
-  strokeWidth: number;
+/** One command of a path, in absolute pixel coordinates. */
+export type PathCommand =
+  | { op: 'M' | 'L'; x: number; y: number }
+  | { op: 'C'; x1: number; y1: number; x2: number; y2: number; x: number; y: number }
+  | { op: 'A'; rx: number; ry: number; rotation: number; large: boolean; sweep: boolean; x: number; y: number }
+  | { op: 'Z' };
+
+/** A point a path passes through, with the datum it draws (kept for the scene dump and tests). */
+export interface PathPoint {
+  x: number;
+  y: number;
+  datum?: Datum;
 }
 
-export interface CircleNode extends NodeBase {
+export interface PathNode extends NodeBase, Paint {
+  kind: 'path';
+  /** The outline, written through the one number formatter. */
+  commands: PathCommand[];
+  /** The data points of a line or polyline, when the path draws data. */
+  points?: PathPoint[];
+  /** The series (or item) a line belongs to. */
+  series?: Datum;
+}
+
+export interface CircleNode extends NodeBase, Paint {
   kind: 'circle';
   cx: number;
   cy: number;
@@ -56,17 +96,26 @@ export interface TextNode extends NodeBase {
   size: number;
   weight: Weight;
   fill: string;
-  /** The measured box of the text: from ascender to descender, advance width wide. */
+  /** Rotation in degrees, clockwise, about the anchor point. Default: 0. */
+  rotate?: number;
+  /** The measured box of the text: from ascender to descender, advance width wide (axis-aligned, after rotation). */
   box: Box;
+  /** The full text when `text` was shortened to fit (written as the SVG title). */
+  full?: string;
 }
 
 export interface ImageNode extends NodeBase, Box {
   kind: 'image';
   href: string;
+  /** For a raster of data cells: the grid it draws. */
+  grid?: { columns: number; rows: number };
 }
 
 /** The closed set of scene nodes; the SVG writer switches over `kind` exhaustively. */
 export type SceneNode = GroupNode | RectNode | PathNode | CircleNode | TextNode | ImageNode;
+
+/** The kind of scale behind an axis. */
+export type ScaleKind = 'linear' | 'band' | 'time' | 'log';
 
 /** What an axis shows, for the scene dump and for tests. */
 export interface AxisInfo {
@@ -80,6 +129,39 @@ export interface AxisInfo {
   tickPositions: number[];
   /** Pixel range of the axis: [start, end] in its direction. */
   range: [number, number];
+  /** The kind of scale. */
+  scale: ScaleKind;
+}
+
+/** One panel of a chart: its plot box, its axes, and the facet level it shows (if faceted). */
+export interface PanelInfo {
+  id: string;
+  facet?: Datum;
+  plot: Box;
+  axes: AxisInfo[];
+}
+
+/** One entry of a legend: a label and how its marks look. */
+export interface LegendEntry {
+  label: string;
+  fill?: string;
+  stroke?: string;
+  shape?: string;
+  /** For size legends: the radius drawn, and the value it stands for. */
+  r?: number;
+  value?: number;
+  /** For binned legends: the class boundaries. */
+  from?: number;
+  to?: number;
+}
+
+/** A legend: what it encodes, its entries, and where it is drawn. */
+export interface LegendInfo {
+  kind: 'categorical' | 'binned' | 'size' | 'shape';
+  field: string;
+  title: string;
+  entries: LegendEntry[];
+  box: Box;
 }
 
 /** A finished chart in pixels: everything the SVG writer needs and nothing it must decide. */
@@ -92,7 +174,10 @@ export interface Scene {
   title: string;
   description: string;
   root: GroupNode;
+  /** The first panel's axes (every panel's are in `panels`). */
   axes: AxisInfo[];
-  /** The plot area: where data marks may be. */
+  /** The first panel's plot area: where data marks may be. */
   plot: Box;
+  panels: PanelInfo[];
+  legends: LegendInfo[];
 }

@@ -1,8 +1,6 @@
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
-import { ciede2000 } from '../color/ciede2000.js';
-import { DEFICIENCIES, simulate } from '../color/cvd.js';
-import { rgbToLab } from '../color/lab.js';
-import { hexToRgb } from '../color/srgb.js';
+import { VISIONS } from '../color/cvd.js';
+import { deltaE } from '../color/distinct.js';
 import { contrastRatio, MARK_CONTRAST, TEXT_CONTRAST } from './contrast.js';
 import type { Style } from './types.js';
 
@@ -23,6 +21,12 @@ export function checkStyle(value: unknown, file: string): Diagnostic[] {
     need(!!t && typeof t.size === 'number' && t.size > 0 && HEX.test(t.color) && (t.weight === 'regular' || t.weight === 'semibold'), `text.${key} (size, weight, colour)`, `/text/${key}`);
   }
   for (const key of ['primary', 'negative', 'others'] as const) need(HEX.test(String(s.palette?.[key])), `palette.${key} colour`, `/palette/${key}`);
+  for (const key of ['categorical', 'sequential', 'diverging'] as const) {
+    const list = s.palette?.[key];
+    if (Array.isArray(list)) list.forEach((c, i) => need(HEX.test(String(c)), `palette.${key} colour`, `/palette/${key}/${i}`));
+  }
+  // The family is written into the SVG's font-family attribute: printable text only.
+  need(typeof s.font?.family === 'string' && /^[\p{L}\p{N} ._-]{1,64}$/u.test(s.font.family), 'font.family (letters, digits, spaces, dots, hyphens; up to 64)', '/font/family');
   for (const key of ['axis', 'grid', 'zero'] as const) need(HEX.test(String(s.lines?.[key])), `lines.${key} colour`, `/lines/${key}`);
   need(!!s.spacing && Object.values(s.spacing).every((v) => typeof v === 'number' && Number.isFinite(v) && v >= 0), 'spacing (non-negative numbers)', '/spacing');
   return problems;
@@ -51,26 +55,34 @@ export function contrastWarnings(style: Style, file: string): Diagnostic[] {
  */
 export const DISTINCT_DE00 = 10;
 
+type Named = [name: string, colour: string];
+
+/** Every pair of a list, in order. */
+function pairsOf(list: readonly Named[]): [Named, Named][] {
+  return list.flatMap((a, i) => list.slice(i + 1).map((b): [Named, Named] => [a, b]));
+}
+
 /**
- * Warns where two of a style's bar fills (primary, negative, others) come closer than
- * DISTINCT_DE00, for normal vision or under a simulated colour-vision deficiency
- * (Machado et al. 2009, severity 1.0).
+ * Warns where two of a style's fills come closer than DISTINCT_DE00, for normal vision or under a
+ * simulated colour-vision deficiency (Machado et al. 2009, severity 1.0): the bar fills (primary,
+ * negative, others), the categorical colours among themselves, and each categorical colour
+ * against the reserved negative and others fills.
  */
 export function distinctnessWarnings(style: Style, file: string): Diagnostic[] {
-  const fills = [['primary', style.palette.primary], ['negative', style.palette.negative], ['others', style.palette.others]] as const;
-  const problems: Diagnostic[] = [];
-  for (let i = 0; i < fills.length; i++) {
-    for (let j = i + 1; j < fills.length; j++) {
-      const [[na, a], [nb, b]] = [fills[i]!, fills[j]!];
-      for (const vision of [undefined, ...DEFICIENCIES]) {
-        const de = ciede2000(rgbToLab(vision ? simulate(hexToRgb(a), vision) : hexToRgb(a)), rgbToLab(vision ? simulate(hexToRgb(b), vision) : hexToRgb(b)));
-        if (de >= DISTINCT_DE00) continue;
-        problems.push(diagnostic('brief.indistinct-colours', `palette.${na} ${a} and palette.${nb} ${b} differ by only ΔE00 ${de.toFixed(1)}${vision ? ` for a reader with ${vision}` : ''}`, {
-          file, path: `/palette/${nb}`, found: `ΔE00 ${de.toFixed(1)}`, expected: `at least ${DISTINCT_DE00}`, hint: 'change lightness as well as hue, so the fills differ for every reader',
-        }));
-        break;
-      }
-    }
-  }
-  return problems;
+  const fills: Named[] = [['primary', style.palette.primary], ['negative', style.palette.negative], ['others', style.palette.others]];
+  const categorical: Named[] = style.palette.categorical.map((c, i) => [`categorical/${i}`, c]);
+  const reserved = categorical.flatMap((c) => fills.slice(1).map((f): [Named, Named] => [f, c]));
+  return pairWarnings([...pairsOf(fills), ...pairsOf(categorical), ...reserved], file);
+}
+
+/** One warning per pair closer than DISTINCT_DE00 for some reader (the first such vision named). */
+function pairWarnings(pairs: readonly [Named, Named][], file: string): Diagnostic[] {
+  return pairs.flatMap(([[na, a], [nb, b]]) => {
+    const vision = VISIONS.find((v) => deltaE(a, b, v) < DISTINCT_DE00);
+    if (vision === undefined) return [];
+    const de = deltaE(a, b, vision);
+    return [diagnostic('brief.indistinct-colours', `palette.${na} ${a} and palette.${nb} ${b} differ by only ΔE00 ${de.toFixed(1)}${vision === 'normal' ? '' : ` for a reader with ${vision}`}`, {
+      file, path: `/palette/${nb}`, found: `ΔE00 ${de.toFixed(1)}`, expected: `at least ${DISTINCT_DE00}`, hint: 'change lightness as well as hue, so the fills differ for every reader',
+    })];
+  });
 }

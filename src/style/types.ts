@@ -15,7 +15,18 @@ export interface Style {
   background: string;
   font: { family: string; regular: string; semibold: string };
   text: Record<'title' | 'subtitle' | 'source' | 'tick' | 'axisTitle' | 'label' | 'note', TextStyle>;
-  palette: { name: string; primary: string; negative: string; others: string };
+  palette: {
+    name: string;
+    primary: string;
+    negative: string;
+    others: string;
+    /** Colours for categories, in order (each prefix as distinct as the palette allows). */
+    categorical: string[];
+    /** A sequential ramp, lightest first. */
+    sequential: string[];
+    /** A diverging ramp, low end first, with a neutral middle. */
+    diverging: string[];
+  };
   lines: { axis: string; grid: string; zero: string; axisWidth: number; gridWidth: number; zeroWidth: number };
   spacing: {
     /** Space between the frame edge and any content. */

@@ -36,7 +36,7 @@ export class GlyphDefs {
 }
 
 /** A text node drawn as glyph outlines: one group scaled from font units, a <use> per glyph. */
-export function outlineText(node: TextNode, measure: TextMeasurer, defs: GlyphDefs, aria: string): string {
+export function outlineText(node: TextNode, measure: TextMeasurer, defs: GlyphDefs, aria: string, rotation = '', title = ''): string {
   const { glyphs, unitsPerEm } = measure.run(node.text, node.weight);
   const scale = node.size / unitsPerEm;
   const uses = glyphs.flatMap((g) => {
@@ -44,5 +44,6 @@ export function outlineText(node: TextNode, measure: TextMeasurer, defs: GlyphDe
     return id ? [`<use href="#${id}"${g.x ? ` x="${fmt(g.x)}"` : ''}/>`] : [];
   });
   const transform = `translate(${fmt(node.box.x)} ${fmt(node.y)}) scale(${Number(scale.toPrecision(6))} ${-Number(scale.toPrecision(6))})`;
-  return `<g${aria} fill="${node.fill}" transform="${transform}">${uses.join('')}</g>`;
+  const glyphGroup = `<g${aria} fill="${node.fill}" transform="${transform}">${title}${uses.join('')}</g>`;
+  return rotation ? `<g${rotation}>${glyphGroup}</g>` : glyphGroup;
 }

@@ -1,9 +1,10 @@
 import type { TextMeasurer } from '../font/measurer.js';
 import { contentHash } from '../scene/ids.js';
-import type { Datum, Scene, SceneNode, TextNode } from '../scene/types.js';
+import type { Datum, Paint, Scene, SceneNode, TextNode } from '../scene/types.js';
 import { escapeXml } from './escape.js';
-import { fmt, fmtPath } from './fmt.js';
+import { fmt } from './fmt.js';
 import { GlyphDefs, outlineText, type OutlineSet } from './glyphs.js';
+import { pathData } from './path.js';
 
 /** How text is written: live `<text>` (selectable, accessible) or glyph outlines (no font needed to draw). */
 export type TextMode = { kind: 'live'; family: string } | { kind: 'outlines'; set: OutlineSet; measure: TextMeasurer };
@@ -16,10 +17,34 @@ function datumTitle(datum: Datum | undefined): string {
   return `<title>${escapeXml(text)}</title>`;
 }
 
+/** Stroke, dash and opacity attributes, written only where set (fill is written by each node kind). */
+function paintAttributes(p: Paint): string {
+  let out = '';
+  if (p.stroke) out += ` stroke="${p.stroke}" stroke-width="${fmt(p.strokeWidth ?? 1)}"`;
+  if (p.stroke && p.dash?.length) out += ` stroke-dasharray="${p.dash.map(fmt).join(' ')}"`;
+  if (p.opacity !== undefined && p.opacity < 1) out += ` opacity="${fmt(p.opacity)}"`;
+  return out;
+}
+
+/** A rotation about the text's anchor point, when it has one. */
+function rotation(node: TextNode): string {
+  return node.rotate ? ` transform="rotate(${fmt(node.rotate)} ${fmt(node.x)} ${fmt(node.y)})"` : '';
+}
+
+/** The full text of a shortened label, as a tooltip. */
+function fullTitle(node: TextNode): string {
+  return node.full !== undefined ? `<title>${escapeXml(node.full)}</title>` : '';
+}
+
 function liveText(node: TextNode, cls: string): string {
   const anchor = node.anchor === 'start' ? '' : ` text-anchor="${node.anchor}"`;
   const weight = node.weight === 'regular' ? '' : ` font-weight="${WEIGHT_NUMBER[node.weight]}"`;
-  return `<text${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" font-size="${fmt(node.size)}"${weight}${anchor} fill="${node.fill}">${escapeXml(node.text)}</text>`;
+  return `<text${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" font-size="${fmt(node.size)}"${weight}${anchor} fill="${node.fill}"${rotation(node)}>${fullTitle(node)}${escapeXml(node.text)}</text>`;
+}
+
+/** An element with the datum it draws as its tooltip, or self-closed without one. */
+function withDatum(open: string, tag: string, datum: Datum | undefined): string {
+  return datum ? `${open}>${datumTitle(datum)}</${tag}>` : `${open}/>`;
 }
 
 function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined): string {
@@ -27,22 +52,16 @@ function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined)
   switch (node.kind) {
     case 'group':
       return `<g${cls}>${node.children.map((c) => writeNode(c, mode, defs)).join('')}</g>`;
-    case 'rect': {
-      const body = `<rect${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" fill="${node.fill}"`;
-      return node.datum ? `${body}>${datumTitle(node.datum)}</rect>` : `${body}/>`;
-    }
-    case 'path': {
-      const stroke = node.stroke ? ` stroke="${node.stroke}" stroke-width="${fmt(node.strokeWidth)}"` : '';
-      return `<path${cls} d="${fmtPath(node.d)}" fill="${node.fill ?? 'none'}"${stroke}/>`;
-    }
-    case 'circle': {
-      const body = `<circle${cls} cx="${fmt(node.cx)}" cy="${fmt(node.cy)}" r="${fmt(node.r)}" fill="${node.fill}"`;
-      return node.datum ? `${body}>${datumTitle(node.datum)}</circle>` : `${body}/>`;
-    }
+    case 'rect':
+      return withDatum(`<rect${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" fill="${node.fill}"${paintAttributes(node)}`, 'rect', node.datum);
+    case 'path':
+      return withDatum(`<path${cls} d="${pathData(node.commands)}" fill="${node.fill ?? 'none'}"${paintAttributes(node)}`, 'path', node.datum);
+    case 'circle':
+      return withDatum(`<circle${cls} cx="${fmt(node.cx)}" cy="${fmt(node.cy)}" r="${fmt(node.r)}" fill="${node.fill}"${paintAttributes(node)}`, 'circle', node.datum);
     case 'text':
-      return mode.kind === 'live' ? liveText(node, cls) : outlineText(node, mode.measure, defs!, cls);
+      return mode.kind === 'live' ? liveText(node, cls) : outlineText(node, mode.measure, defs!, cls, rotation(node), fullTitle(node));
     case 'image':
-      return `<image${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" href="${escapeXml(node.href)}"/>`;
+      return `<image${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" href="${escapeXml(node.href)}"${node.grid ? ' preserveAspectRatio="none" image-rendering="pixelated"' : ''}/>`;
   }
 }
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { Ajv2020 } from 'ajv/dist/2020.js';
 import { readBrief, checkBriefValue } from '../../src/brief/resolve.js';
-import { BRIEF_SCHEMA } from '../../src/brief/schema.js';
+import { BRIEF_SCHEMA } from '../../src/pipeline/vocabulary.js';
 
 const ok = (text: string) => {
   const r = readBrief(text);

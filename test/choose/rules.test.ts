@@ -1,3 +1,4 @@
+import type { BarPlan } from '../../src/forms/bar-plan.js';
 import { describe, expect, it } from 'vitest';
 import { codes, renderRows } from '../helpers.js';
 
@@ -6,7 +7,7 @@ const piers = [{ pier: 'North', n: 5 }, { pier: 'South', n: 9 }, { pier: 'East',
 describe('rules for the compare intent', () => {
   it('a categorical key gets bars sorted by value, and the rationale says why', async () => {
     const r = await renderRows({ intent: 'compare', keys: 'pier', values: 'n' }, piers);
-    expect(r.choice).toMatchObject({ form: 'bar', bar: { order: 'value' } });
+    expect(r.choice).toMatchObject({ form: 'bar', plan: { order: 'value' } });
     expect(r.rationale.map((d) => d.decision)).toContain('bar chart');
     expect(r.rationale.find((d) => d.decision === 'bar chart')!.rule).toMatch(/^compare\.categorical-key/);
     expect(r.rationale.some((d) => d.decision.startsWith('bars sorted by value'))).toBe(true);
@@ -16,32 +17,32 @@ describe('rules for the compare intent', () => {
   it('a date key keeps its order and stands upright', async () => {
     const rows = [{ d: '2026-03-01', n: 1 }, { d: '2026-01-01', n: 9 }, { d: '2026-02-01', n: 4 }];
     const r = await renderRows({ intent: 'compare', keys: 'd', values: 'n' }, rows);
-    expect(r.choice!.bar).toMatchObject({ order: 'key', orientation: 'vertical' });
+    expect((r.choice!.plan as BarPlan)).toMatchObject({ order: 'key', orientation: 'vertical' });
     expect(r.choice!.rationale.find((d) => d.decision === 'bar chart')!.rule).toMatch(/^compare\.ordered-key/);
   });
 
   it('an ordinal key with a given order keeps that order', async () => {
     const rows = [{ s: 'high', n: 1 }, { s: 'low', n: 9 }, { s: 'mid', n: 4 }];
     const r = await renderRows({ intent: 'compare', keys: 's', values: 'n', fields: { s: { type: 'ordinal', order: ['low', 'mid', 'high'] } } }, rows);
-    expect(r.choice!.bar.order).toBe('key');
+    expect((r.choice!.plan as BarPlan).order).toBe('key');
   });
 
   it('long labels turn the bars horizontal, and the rationale gives the measured widths', async () => {
     const rows = ['Central Library and Reading Rooms', 'Old Town Children\'s Library', 'Westfield Library and Archive', 'University Quarter Branch', 'Hillcrest Community Library', 'Mobile Library (north routes)', 'Mobile Library (south routes)'].map((b, i) => ({ b, n: i + 1 }));
     const r = await renderRows({ intent: 'compare', keys: 'b', values: 'n' }, rows);
-    expect(r.choice!.bar.orientation).toBe('horizontal');
+    expect((r.choice!.plan as BarPlan).orientation).toBe('horizontal');
     expect(r.rationale.find((d) => d.decision === 'horizontal bars')!.rule).toMatch(/\d+ px/);
   });
 
   it('short labels in few bars stand upright', async () => {
     const r = await renderRows({ intent: 'compare', keys: 'pier', values: 'n' }, piers);
-    expect(r.choice!.bar.orientation).toBe('vertical');
+    expect((r.choice!.plan as BarPlan).orientation).toBe('vertical');
   });
 
   it('more bars than fit upright turn horizontal even with short labels', async () => {
     const rows = Array.from({ length: 60 }, (_, i) => ({ k: `K${i}`, n: i }));
     const r = await renderRows({ intent: 'compare', keys: 'k', values: 'n' }, rows);
-    expect(r.choice!.bar.orientation).toBe('horizontal');
+    expect((r.choice!.plan as BarPlan).orientation).toBe('horizontal');
   });
 
   it('many bars beyond the 3 px capacity are folded into top N and "Others", with a warning', async () => {
@@ -49,7 +50,7 @@ describe('rules for the compare intent', () => {
     const r = await renderRows({ intent: 'compare', keys: 'k', values: 'n' }, rows);
     expect(r.ok).toBe(true);
     expect(codes(r)).toContain('derive.others-folded');
-    expect(r.choice!.bar.capacity).toBeLessThan(300);
+    expect(r.scene!.root.children.filter((n) => n.role === 'bar').length).toBeLessThan(300);
   });
 
   it('chooses for a table of 200,000 rows and 100,000 keys without overflowing the stack', async () => {

@@ -1,3 +1,4 @@
+import type { BarPlan } from '../../src/forms/bar-plan.js';
 import { describe, expect, it } from 'vitest';
 import { bars, checkBarContracts } from './bar-contracts.js';
 import { demoBriefs, renderDemo, renderRows } from '../helpers.js';
@@ -6,7 +7,7 @@ describe('perceptual contracts on every gallery chart', () => {
   for (const file of demoBriefs()) {
     it(`${file.split('/').pop()} keeps the bar chart contracts`, async () => {
       const { result, dump } = await renderDemo(file);
-      const plan = result.choice!.bar;
+      const plan = (result.choice!.plan as BarPlan);
       checkBarContracts(dump, plan.value!.name, plan.key.name);
       const values = bars(dump).map((b) => b.datum![plan.value!.name] as number);
       if (plan.order === 'value') {

@@ -1,20 +1,23 @@
 import { describe, expect, it } from 'vitest';
 import { resolveBrief } from '../../src/brief/resolve.js';
-import type { BarPlan } from '../../src/choose/types.js';
+import type { BarPlan } from '../../src/forms/bar-plan.js';
+import { refOf } from '../../src/fields/types.js';
 import { deriveBars } from '../../src/derive/bars.js';
 import { compareNatural } from '../../src/derive/order.js';
 import { inferFields } from '../../src/fields/infer.js';
 import { readTable } from '../../src/table/load.js';
 import { memoryFiles } from '../helpers.js';
 
-async function derive(rows: Record<string, unknown>[], plan: Partial<BarPlan>, brief: Record<string, unknown> = {}) {
+async function derive(rows: Record<string, unknown>[], plan: Partial<BarPlan> & { capacity?: number }, brief: Record<string, unknown> = {}) {
   const resolved = resolveBrief({ intent: 'compare', rows, keys: 'k', values: 'v', ...brief });
   const t = await readTable(resolved.data, resolved.fields, undefined, memoryFiles({}));
   if (!t.ok) throw new Error('table');
   const f = inferFields(t.value, resolved);
   if (!f.ok) throw new Error('fields');
-  const full: BarPlan = { key: f.value.keys[0]!, value: f.value.values[0], orientation: 'vertical', order: 'value', aggregate: 'sum', capacity: 100, ...plan };
-  return deriveBars(t.value, full);
+  const { capacity = 100, ...rest } = plan;
+  const value = f.value.values[0];
+  const full: BarPlan = { key: refOf(f.value.keys[0]!), value: value && refOf(value), orientation: 'vertical', order: 'value', aggregate: 'sum', ...rest };
+  return deriveBars(t.value, full, () => capacity);
 }
 const bars = (r: Awaited<ReturnType<typeof derive>>) => (r.ok ? r.value.bars.map((b) => [b.label, b.value]) : r.diagnostics);
 

@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
+import { filterDeficiencyProt, formatHex } from 'culori';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { ciede2000 } from '../../src/color/ciede2000.js';
 import { DEFICIENCIES, simulate, type Deficiency } from '../../src/color/cvd.js';
-import { rgbToLab } from '../../src/color/lab.js';
+import { ciede2000, rgbToLab } from '../../src/color/lab.js';
 import { hexToRgb, rgbToHex } from '../../src/color/srgb.js';
 import { DISTINCT_DE00 } from '../../src/style/check.js';
 import type { Style } from '../../src/style/types.js';
@@ -22,6 +22,13 @@ describe('colour-vision-deficiency simulation', () => {
       for (const d of DEFICIENCIES) expect(rgbToHex(simulate(hexToRgb(input), d))).toBe(expected[d]);
     });
   }
+
+  it("is why culori's deficiency filters are not used: they apply the matrices to gamma-encoded sRGB", () => {
+    // culori 4.0.2 filterDeficiencyProt(1) turns #ff0000 into #271d00, not the published
+    // #6d5f00 (REFERENCES §3). If a culori upgrade moves to linear RGB, switch cvd.ts to it.
+    expect(formatHex(filterDeficiencyProt(1)({ mode: 'rgb', r: 1, g: 0, b: 0 }))).not.toBe('#6d5f00');
+    expect(rgbToHex(simulate(hexToRgb('#ff0000'), 'protanopia'))).toBe('#6d5f00');
+  });
 
   it('keeps greys grey (every matrix row sums to 1)', () => {
     for (const d of DEFICIENCIES) for (const g of ['#ffffff', '#808080', '#000000']) expect(rgbToHex(simulate(hexToRgb(g), d))).toBe(g);

@@ -12,7 +12,7 @@ function coordinates(n: SceneNode): number[] {
   switch (n.kind) {
     case 'rect': return [n.x, n.y, n.x + n.width, n.y + n.height];
     case 'text': return [n.box.x, n.box.y, n.box.x + n.box.width, n.box.y + n.box.height];
-    case 'path': return (n.d.match(/-?\d*\.?\d+(?:e[-+]?\d+)?/gi) ?? []).map(Number);
+    case 'path': return n.commands.flatMap((c) => (c.op === 'Z' ? [] : c.op === 'C' ? [c.x1, c.y1, c.x2, c.y2, c.x, c.y] : [c.x, c.y]));
     default: return [];
   }
 }

@@ -1,0 +1,72 @@
+import { describeRows, diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { keyText } from '../fields/labels.js';
+import type { FieldRef } from '../fields/types.js';
+import { columnOf, type Column, type Table } from '../table/types.js';
+
+/** What to group: the key fields (one or more) and the value field, if any (none counts rows). */
+export interface GroupQuery {
+  keys: FieldRef[];
+  value: FieldRef | undefined;
+}
+
+/** Rows that share one combination of key labels. */
+export interface RowGroup {
+  /** The key labels as a reader sees them, one per key field. */
+  labels: string[];
+  /** Where the first row's key sits in each key's own order (time, number, or level index). */
+  sortKeys: number[];
+  /** The values of the group's rows (1 per row when counting). */
+  values: number[];
+  /** Source positions of the rows. */
+  rows: number[];
+}
+
+/** Where a row's key sits in the key's own order: time, number, or level index (levels looked up by Map, not indexOf). */
+function keyOrderOf(ref: FieldRef, column: Column): (row: number) => number {
+  const index = new Map(ref.levels.map((level, i) => [level, i]));
+  return (row) => {
+    const v = column.values[row];
+    if (typeof v === 'number') return v;
+    return index.get(column.text[row] ?? '') ?? Number.MAX_SAFE_INTEGER;
+  };
+}
+
+function missingDiagnostic(rows: number[], noun: 'line' | 'row', what: string, table: Table, field: string, hint: string, notZero: boolean): Diagnostic {
+  const one = rows.length === 1;
+  return diagnostic('derive.missing-values', `${describeRows(rows, noun)} ha${one ? 's' : 've'} ${what} and ${one ? 'is' : 'are'} left out${notZero ? ', not drawn as zero' : ''}`, {
+    file: table.origin.file, field, rows, hint,
+  });
+}
+
+/**
+ * Groups a table's rows by their key labels, keeping each group's values and source rows, in
+ * order of first appearance. Rows with no key or no usable value are left out, each kind named
+ * in one diagnostic. Every form groups through here.
+ */
+export function groupRows(table: Table, query: GroupQuery): { groups: RowGroup[]; diagnostics: Diagnostic[] } {
+  const keyColumns = query.keys.map((k) => columnOf(table, k.name)!);
+  const valueColumn = query.value ? columnOf(table, query.value.name)! : undefined;
+  const orders = query.keys.map((k, i) => keyOrderOf(k, keyColumns[i]!));
+  const groups = new Map<string, RowGroup>();
+  const missingValue: number[] = [];
+  const missingKey: number[][] = query.keys.map(() => []);
+  for (let i = 0; i < table.rowCount; i++) {
+    const labels = keyColumns.map((c) => keyText(c, i));
+    const absent = labels.findIndex((l) => l === null);
+    if (absent >= 0) { missingKey[absent]!.push(table.rowPositions[i]!); continue; }
+    const raw = valueColumn ? valueColumn.values[i] : 1;
+    if (typeof raw !== 'number') { missingValue.push(table.rowPositions[i]!); continue; }
+    const id = labels.length === 1 ? labels[0]! : JSON.stringify(labels);
+    let g = groups.get(id);
+    if (!g) { g = { labels: labels as string[], sortKeys: orders.map((o) => o(i)), values: [], rows: [] }; groups.set(id, g); }
+    g.values.push(raw);
+    g.rows.push(table.rowPositions[i]!);
+  }
+  const noun = table.positionNoun;
+  const diagnostics: Diagnostic[] = [];
+  if (missingValue.length) diagnostics.push(missingDiagnostic(missingValue, noun, `no usable \`${query.value!.name}\` (missing or not finite)`, table, query.value!.name, 'fill in the values, or remove those rows if they are not data', true));
+  query.keys.forEach((k, i) => {
+    if (missingKey[i]!.length) diagnostics.push(missingDiagnostic(missingKey[i]!, noun, `no \`${k.name}\``, table, k.name, 'give every row a key', false));
+  });
+  return { groups: [...groups.values()], diagnostics };
+}

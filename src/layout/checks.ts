@@ -1,0 +1,74 @@
+import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import type { TextMeasurer } from '../font/measurer.js';
+import type { Box, SceneNode, TextNode } from '../scene/types.js';
+
+/** Smallest plot, in px either way, in which marks and ticks can still be read. */
+export const MIN_PLOT_PX = 40;
+
+/** A plot squeezed below MIN_PLOT_PX by titles, labels and axes is an error: nothing could be read in it. */
+export function frameTooSmall(plot: Box, size: { width: number; height: number }): Diagnostic[] {
+  if (plot.width >= MIN_PLOT_PX && plot.height >= MIN_PLOT_PX) return [];
+  return [diagnostic('layout.frame-too-small', `the plot area is only ${Math.round(plot.width)} × ${Math.round(plot.height)} px after titles, labels and axes`, {
+    path: '/size', found: `${size.width} × ${size.height}`, expected: `a plot area of at least ${MIN_PLOT_PX} × ${MIN_PLOT_PX} px`, hint: 'make `size:` larger, or shorten the title and labels',
+  })];
+}
+
+/** Characters of the chart's text that the font cannot draw (they would come out as empty boxes). */
+export function missingGlyphs(nodes: readonly SceneNode[], measure: TextMeasurer): Diagnostic[] {
+  const missing = new Set<string>();
+  for (const n of nodes) if (n.kind === 'text') for (const ch of measure.missing(n.text, n.weight)) missing.add(ch);
+  if (missing.size === 0) return [];
+  const list = [...missing].slice(0, 8).map((ch) => `U+${ch.codePointAt(0)!.toString(16).toUpperCase().padStart(4, '0')}`).join(', ');
+  return [diagnostic('layout.missing-glyphs', `the bundled font cannot draw ${missing.size} character${missing.size === 1 ? '' : 's'} in the chart's text (${list}); ${missing.size === 1 ? 'it is' : 'they are'} drawn as empty boxes`, {
+    hint: 'use Latin, Greek or Cyrillic text, or transliterate those labels',
+  })];
+}
+
+/** Texts whose box leaves the canvas (a layout defect the reader would see as cut-off words). */
+export function textsOffCanvas(texts: readonly TextNode[], size: { width: number; height: number }): TextNode[] {
+  const eps = 0.01;
+  return texts.filter((t) => t.box.x < -eps || t.box.y < -eps || t.box.x + t.box.width > size.width + eps || t.box.y + t.box.height > size.height + eps);
+}
+
+/** Pairs of texts whose boxes overlap (words drawn over words), in drawing order. */
+export function overlappingTexts(texts: readonly TextNode[]): [TextNode, TextNode][] {
+  const eps = 0.01;
+  const pairs: [TextNode, TextNode][] = [];
+  // Sorted by left edge, each text is compared only with those that start before it ends.
+  const sorted = [...texts].sort((a, b) => a.box.x - b.box.x);
+  for (let i = 0; i < sorted.length; i++) {
+    const a = sorted[i]!;
+    for (let j = i + 1; j < sorted.length && sorted[j]!.box.x < a.box.x + a.box.width - eps; j++) {
+      const b = sorted[j]!;
+      if (a.box.y < b.box.y + b.box.height - eps && b.box.y < a.box.y + a.box.height - eps) pairs.push([a, b]);
+    }
+  }
+  return pairs;
+}
+
+/**
+ * The checks run once on every finished scene: the plot is large enough, every character can be
+ * drawn, no text leaves the canvas and no two texts overlap. The last two are defects of
+ * layout, reported so that a figure is never silently cut or smudged.
+ */
+export function checkScene(nodes: readonly SceneNode[], plot: Box, size: { width: number; height: number }, measure: TextMeasurer): Diagnostic[] {
+  const texts = nodes.filter((n): n is TextNode => n.kind === 'text');
+  const tooSmall = frameTooSmall(plot, size);
+  const problems = [...tooSmall, ...missingGlyphs(nodes, measure)];
+  // In a frame too small for its words, every text is crowded: that error says it all.
+  if (tooSmall.length) return problems;
+  const off = textsOffCanvas(texts, size);
+  if (off.length) {
+    problems.push(diagnostic('layout.text-off-canvas', `${off.length} text${off.length === 1 ? '' : 's'} would reach past the edge of the chart (first: ${JSON.stringify(off[0]!.text)})`, {
+      found: off[0]!.text, hint: 'make `size:` larger, or shorten the title and labels',
+    }));
+  }
+  const overlaps = overlappingTexts(texts);
+  if (overlaps.length) {
+    const [a, b] = overlaps[0]!;
+    problems.push(diagnostic('layout.text-overlap', `${overlaps.length} pair${overlaps.length === 1 ? '' : 's'} of texts overlap (first: ${JSON.stringify(a.text)} and ${JSON.stringify(b.text)})`, {
+      found: `${a.role} and ${b.role}`, hint: 'make `size:` larger, or shorten the labels',
+    }));
+  }
+  return problems;
+}

@@ -1,0 +1,97 @@
+import type { ResolvedBrief } from '../brief/types.js';
+import type { Diagnostic } from '../diagnostics/diagnostic.js';
+import type { TextMeasurer } from '../font/measurer.js';
+import type { Box, SceneNode, TextNode } from '../scene/types.js';
+import type { Style } from '../style/types.js';
+import type { BandScale, LinearScale, Scale } from './scales.js';
+
+/** What every layout step receives: the brief, the style, the text measurer, and the chart's id maker. */
+export interface LayoutContext {
+  brief: ResolvedBrief;
+  style: Style;
+  measure: TextMeasurer;
+  /** Unique ids within one chart, derived from text (see scene/ids.ts). */
+  id: (prefix: string, text: string) => string;
+}
+
+/** A continuous channel: the data extent its axis must cover. */
+export interface LinearChannel {
+  kind: 'linear';
+  /** Stem of the axis's ids: `tick-<name>`, `axis-title-<name>`. */
+  name: string;
+  field: string;
+  title: string;
+  /** [lo, hi] the axis must cover (including zero where the form needs it). */
+  extent: [number, number];
+  /** The field's d3-format specifier, if any. */
+  format?: string;
+}
+
+/** A categorical channel: one band per category, in order. */
+export interface BandChannel {
+  kind: 'band';
+  name: string;
+  field: string;
+  title: string;
+  domain: string[];
+}
+
+/** What a channel of a form spans. */
+export type Channel = LinearChannel | BandChannel;
+
+/** The channels of a chart with a left and a bottom axis, as a form reports them. */
+export interface CartesianDomains {
+  left: Channel;
+  bottom: Channel;
+  /** Which axis is listed (and layered) first in the scene. */
+  first: 'left' | 'bottom';
+  /** Draw a zero line across the plot at 0 of this side's linear scale (length-coded marks). */
+  zeroLine?: 'left' | 'bottom';
+}
+
+/**
+ * Room a form's own labels need beyond the ends of its marks along a linear axis, in px, and
+ * whether they are shown at all. `low` is the end of smaller values, `high` of larger ones.
+ */
+export interface LabelRoom {
+  low: number;
+  high: number;
+  show: boolean;
+}
+
+/** A first look at the scales, before the form's label room is taken, for a form to measure against. */
+export interface ScaleProbe {
+  plot: Box;
+  /** The linear scale over the whole plot. */
+  linear: LinearScale;
+  band: BandScale | undefined;
+  /** Which side the linear scale is on. */
+  side: 'left' | 'bottom';
+}
+
+/** Where a form draws: the plot box, its scales, and the room its labels were given. */
+export interface PlotArea {
+  plot: Box;
+  /** The bottom axis's scale (horizontal position). */
+  x: Scale;
+  /** The left axis's scale (vertical position). */
+  y: Scale;
+  room: LabelRoom;
+}
+
+/** A form's marks and their labels; labels are drawn above every mark and guide. */
+export interface FormMarks {
+  marks: SceneNode[];
+  labels: TextNode[];
+  diagnostics: Diagnostic[];
+}
+
+/** The words a form contributes to the frame and to the accessible text. */
+export interface FormWords {
+  /** The title when the brief gives none. */
+  title: string;
+  /** One or two sentences for screen readers. */
+  description: string;
+  /** Notes printed under the chart: what was folded, combined or left out. */
+  notes: string[];
+}

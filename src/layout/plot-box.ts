@@ -1,0 +1,74 @@
+import { max } from 'd3-array';
+import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import type { Box } from '../scene/types.js';
+import { valueTicks, type ValueTicks } from './axis.js';
+import type { BandChannel, CartesianDomains, LayoutContext } from './kit-types.js';
+import { bandScale, type BandScale } from './scales.js';
+import { fitLabel, lineHeight, textBoxHeight } from './text.js';
+
+/** Longest share of the body the labels of a left band axis may take (wrapped, then shortened). */
+export const MAX_LABEL_SHARE = 0.4;
+
+/** A left band axis's labels, fitted to the label column. */
+export interface FittedBandLabels {
+  band: BandScale;
+  /** Each category's label as lines (wrapped onto two where the band allows). */
+  lines: string[][];
+  /** Which labels were shortened with an ellipsis. */
+  shortened: boolean[];
+  diagnostics: Diagnostic[];
+}
+
+/** How the left axis was measured: a probe of its ticks, or its fitted band labels. */
+export type LeftFit = { kind: 'linear'; probe: ValueTicks } | ({ kind: 'band' } & FittedBandLabels);
+
+/** The plot box and what was measured to find it. */
+export interface PlotBox {
+  plot: Box;
+  left: LeftFit;
+}
+
+/** Key labels of a left band axis, each fitted to the label column: wrapped onto two lines where the band allows. */
+function fitBandLabels(channel: BandChannel, band: BandScale, body: Box, ctx: LayoutContext): FittedBandLabels {
+  const { style, measure } = ctx;
+  const { tick } = style.text;
+  const maxLabel = body.width * MAX_LABEL_SHARE;
+  const twoLines = band.step >= 2 * lineHeight(tick, style.spacing.lineHeight);
+  // A long label wraps onto a second line where the band is tall enough, and is shortened only beyond that.
+  const fitted = channel.domain.map((label) => fitLabel(measure, label, tick, maxLabel, twoLines ? 2 : 1));
+  const truncated = fitted.filter((l) => l.shortened).length;
+  const diagnostics = truncated ? [diagnostic('layout.label-truncated', `${truncated} key label${truncated === 1 ? ' is' : 's are'} longer than ${Math.round(maxLabel)} px${twoLines ? ' on two lines' : ''} and shortened with "…"; the full text stays in the SVG title of each bar`, { field: channel.field, hint: 'use shorter labels, or a wider chart with `size:`' })] : [];
+  return { band, lines: fitted.map((f) => f.lines), shortened: fitted.map((f) => f.shortened), diagnostics };
+}
+
+/**
+ * The plot box of a chart with a left and a bottom axis: the body less the room the axes need.
+ * The only place the plot box is computed; planning (how many bars fit) and drawing both call it.
+ * The left axis's title sits above the plot, the bottom axis's title below its tick labels.
+ */
+export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext): PlotBox {
+  const { style, measure } = ctx;
+  const { tick, axisTitle } = style.text;
+  const { tickGap, lineHeight: factor } = style.spacing;
+  const tickBox = textBoxHeight(measure, tick);
+  // A linear left axis's top tick label is centred on the plot's top edge; a band label is centred in its band.
+  const top = domains.left.kind === 'linear'
+    ? body.y + lineHeight(axisTitle, factor) + tickGap + tickBox / 2
+    : body.y + lineHeight(axisTitle, factor) + Math.max(tickGap, tickBox / 2);
+  const bottom = body.y + body.height - (tickGap + lineHeight(tick, factor) + tickGap + lineHeight(axisTitle, factor));
+  let left: LeftFit;
+  let leftWidth: number;
+  if (domains.left.kind === 'linear') {
+    const [lo, hi] = domains.left.extent;
+    const probe = valueTicks(lo, hi, bottom - top, 'vertical', tick, measure, domains.left.format);
+    left = { kind: 'linear', probe };
+    leftWidth = max(probe.labels, (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
+  } else {
+    const fitted = fitBandLabels(domains.left, bandScale(domains.left.domain, [top, bottom], style.spacing.bandPadding), body, ctx);
+    left = { kind: 'band', ...fitted };
+    leftWidth = max(fitted.lines.flat(), (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
+  }
+  const x = body.x + leftWidth + tickGap;
+  const right = body.x + body.width;
+  return { plot: { x, y: top, width: right - x, height: bottom - top }, left };
+}

@@ -1,0 +1,51 @@
+import { scaleBand, scaleLinear } from 'd3-scale';
+import type { ValueTicks } from './axis.js';
+
+/** A continuous scale with its ticks: data value → px. */
+export interface LinearScale {
+  kind: 'linear';
+  domain: [number, number];
+  range: [number, number];
+  ticks: number[];
+  labels: string[];
+  /** Which tick labels are printed (in a cramped plot some keep only their gridline). */
+  shown: boolean[];
+  map(value: number): number;
+}
+
+/** A band scale: one equal band per category, in order. */
+export interface BandScale {
+  kind: 'band';
+  domain: string[];
+  range: [number, number];
+  /** Distance from one band's start to the next, in px. */
+  step: number;
+  /** Width of a band, in px (the step less the padding). */
+  bandwidth: number;
+  /** Start of a category's band, in px. */
+  start(category: string): number;
+  /** Middle of a category's band, in px. */
+  center(category: string): number;
+}
+
+/** Any scale an axis can draw. */
+export type Scale = LinearScale | BandScale;
+
+/** A linear scale over ticks chosen for it, mapping their domain onto `range`. */
+export function linearScale(ticks: ValueTicks, range: [number, number]): LinearScale {
+  const map = scaleLinear().domain(ticks.domain).range(range);
+  return { kind: 'linear', domain: ticks.domain, range, ticks: ticks.ticks, labels: ticks.labels, shown: ticks.shown, map: (v) => map(v) };
+}
+
+/**
+ * A band scale over categories with the style's padding: `padding` between bands and half of it
+ * outside the first and last, so the step is exactly the range divided by the count.
+ */
+export function bandScale(domain: readonly string[], range: [number, number], padding: number): BandScale {
+  const band = scaleBand<string>().domain(domain).range(range).paddingInner(padding).paddingOuter(padding / 2);
+  const width = band.bandwidth();
+  return {
+    kind: 'band', domain: band.domain(), range, step: band.step(), bandwidth: width,
+    start: (c) => band(c)!, center: (c) => band(c)! + width / 2,
+  };
+}

@@ -1,0 +1,127 @@
+import { tickStep } from 'd3-array';
+import { utcDay, utcHour, utcMinute, utcMonday, utcMonth, utcYear, type CountableTimeInterval, type TimeInterval } from 'd3-time';
+import { timeFormatLocale } from 'd3-time-format';
+
+/** The calendar unit a time axis is labelled in. */
+export type TimeGrain = 'minute' | 'hour' | 'day' | 'week' | 'month' | 'quarter' | 'year';
+
+/** A UTC time scale: epoch milliseconds to pixels, with calendar ticks and their labels. */
+export interface TimeScale {
+  kind: 'time';
+  domain: [number, number];
+  range: [number, number];
+  /** The pixel position of a time (epoch ms); linear, not clamped. */
+  map(t: number): number;
+  /** Tick times (epoch ms), ascending, inside the domain, on calendar boundaries in UTC. */
+  ticks: number[];
+  /** One label per tick, in the grain's format. */
+  labels: string[];
+  /** The unit the ticks step by. */
+  grain: TimeGrain;
+}
+
+/**
+ * English names, stated here rather than taken from d3-time-format's default locale, which
+ * is module state any library in the process may replace.
+ */
+const LOCALE = timeFormatLocale({
+  dateTime: '%a %e %b %Y %H:%M:%S', date: '%Y-%m-%d', time: '%H:%M:%S',
+  periods: ['AM', 'PM'],
+  days: ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'],
+  shortDays: ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'],
+  months: ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'],
+  shortMonths: ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'],
+});
+// Only utcFormat: a label must never depend on the zone of the machine drawing it.
+const formatYear = LOCALE.utcFormat('%Y');
+const formatMonth = LOCALE.utcFormat('%b');
+const formatMonthYear = LOCALE.utcFormat('%b %Y');
+const formatDay = LOCALE.utcFormat('%-d %b');
+const formatClock = LOCALE.utcFormat('%H:%M');
+
+const MINUTE = 60_000;
+const HOUR = 60 * MINUTE;
+const DAY = 24 * HOUR;
+const WEEK = 7 * DAY;
+// Nominal lengths, used only to pick the step nearest the wanted tick spacing (as d3-scale does).
+const MONTH = 30 * DAY;
+const YEAR = 365 * DAY;
+
+/** One calendar step: its grain, the d3-time interval that makes its ticks, and its nominal length in ms. */
+export interface TimeStep { grain: TimeGrain; interval: TimeInterval; duration: number }
+
+const step = (grain: TimeGrain, base: CountableTimeInterval, k: number, unit: number): TimeStep =>
+  ({ grain, interval: k === 1 ? base : base.every(k)!, duration: k * unit });
+
+/** The calendar steps a time axis may use, shortest first (the UTC intervals of d3-time). */
+const STEPS: readonly TimeStep[] = [
+  step('minute', utcMinute, 1, MINUTE), step('minute', utcMinute, 5, MINUTE),
+  step('minute', utcMinute, 15, MINUTE), step('minute', utcMinute, 30, MINUTE),
+  step('hour', utcHour, 1, HOUR), step('hour', utcHour, 3, HOUR),
+  step('hour', utcHour, 6, HOUR), step('hour', utcHour, 12, HOUR),
+  step('day', utcDay, 1, DAY), step('day', utcDay, 2, DAY),
+  // ISO 8601 weeks start on Monday.
+  step('week', utcMonday, 1, WEEK), step('week', utcMonday, 2, WEEK),
+  step('month', utcMonth, 1, MONTH), step('month', utcMonth, 2, MONTH),
+  step('quarter', utcMonth, 3, MONTH), step('month', utcMonth, 6, MONTH),
+  step('year', utcYear, 1, YEAR),
+];
+
+/**
+ * The calendar step whose length is nearest (by ratio) to span / approxTicks; beyond a year,
+ * a nice number of years (1, 2, 5 × 10ⁿ).
+ */
+export function timeStep(start: number, stop: number, approxTicks: number): TimeStep {
+  const target = Math.abs(stop - start) / Math.max(1, approxTicks);
+  const last = STEPS[STEPS.length - 1]!;
+  if (target > last.duration) {
+    const years = Math.max(1, tickStep(start / YEAR, stop / YEAR, Math.max(1, approxTicks)));
+    return step('year', utcYear, years, YEAR);
+  }
+  let best = STEPS[0]!;
+  for (const s of STEPS) {
+    if (Math.abs(Math.log(s.duration / target)) < Math.abs(Math.log(best.duration / target))) best = s;
+  }
+  return best;
+}
+
+/** Labels for ticks at a grain; months (and half years) print the year only where it changes. */
+export function timeLabels(ticks: readonly number[], grain: TimeGrain): string[] {
+  return ticks.map((t, i) => {
+    const d = new Date(t);
+    switch (grain) {
+      case 'year': return formatYear(d);
+      case 'quarter': return `Q${Math.floor(d.getUTCMonth() / 3) + 1} ${formatYear(d)}`;
+      case 'month': {
+        const yearChanged = i === 0 || new Date(ticks[i - 1]!).getUTCFullYear() !== d.getUTCFullYear();
+        return yearChanged ? formatMonthYear(d) : formatMonth(d);
+      }
+      case 'week': case 'day': return formatDay(d);
+      // A tick at midnight names its day, so a run of hours across days stays readable
+      // (common practice; d3-scale's multi-scale format does the same).
+      case 'hour': case 'minute': return utcDay.floor(d).getTime() === t ? formatDay(d) : formatClock(d);
+    }
+  });
+}
+
+/**
+ * A UTC time scale from `domain` (epoch ms) onto `range` (px), with about `approxTicks`
+ * ticks on calendar boundaries: minutes, hours, days, ISO weeks, months, quarters or years.
+ * Ticks are d3-time's own `interval.range`, so they never drift from the calendar; labels
+ * are formatted in UTC at the ticks' grain ("2025", "Q1 2025", "Jan 2025" / "Feb", "4 Oct",
+ * "06:00"). A domain given high-to-low maps high-to-low; ticks are always ascending. A
+ * non-finite domain gets no ticks.
+ */
+export function timeScale(domain: [number, number], range: [number, number], approxTicks: number): TimeScale {
+  const [d0, d1] = domain;
+  const [r0, r1] = range;
+  const map = (t: number) => (d1 === d0 ? (r0 + r1) / 2 : r0 + ((t - d0) / (d1 - d0)) * (r1 - r0));
+  const lo = Math.min(d0, d1);
+  const hi = Math.max(d0, d1);
+  const chosen = timeStep(lo, hi, approxTicks);
+  // interval.range stops before its end; + 1 ms lets a tick fall on the domain's last instant.
+  const ticks = Number.isFinite(lo) && Number.isFinite(hi)
+    ? chosen.interval.range(new Date(lo), new Date(hi + 1)).map((d) => d.getTime())
+    : [];
+  return { kind: 'time', domain: [d0, d1], range: [r0, r1], map, ticks, labels: timeLabels(ticks, chosen.grain), grain: chosen.grain };
+}
