@@ -1,4 +1,4 @@
-import type { TextMeasurer } from '../font/measurer.js';
+import type { TextMeasurer, TextRuler } from '../font/measurer.js';
 import type { Role, TextNode } from '../scene/types.js';
 import type { TextStyle } from '../style/types.js';
 
@@ -32,53 +32,131 @@ export function textBoxHeight(measure: TextMeasurer, style: TextStyle): number {
   return measure.ascent(style.size, style.weight) + measure.descent(style.size, style.weight);
 }
 
+/** Longest text, in code points, that layout fits: far beyond any line a chart can show. */
+export const MAX_LAYOUT_TEXT = 2000;
+
 /**
- * Greedy word wrap to a width in px, by measured text. A word wider than the width on its
- * own is broken at characters so no line overflows.
+ * A text cut to at most `limit` code points, the last an ellipsis, so no text makes layout
+ * slow; the full text belongs in the SVG `<title>` and the datum.
  */
-export function wrapText(measure: TextMeasurer, text: string, style: TextStyle, maxWidth: number): string[] {
-  const fits = (s: string) => measure.width(s, style.size, style.weight) <= maxWidth;
-  const lines: string[] = [];
-  for (const paragraph of text.split(/\r?\n/)) {
-    let line = '';
-    for (const word of paragraph.split(/\s+/).filter(Boolean)) {
-      const candidate = line ? `${line} ${word}` : word;
-      if (fits(candidate)) { line = candidate; continue; }
-      if (line) lines.push(line);
-      line = word;
-      // Break by code points, so a character outside the BMP is never split in two.
-      let chars = [...line];
-      while (!fits(line) && chars.length > 1) {
-        let cut = chars.length - 1;
-        while (cut > 1 && !fits(chars.slice(0, cut).join(''))) cut--;
-        lines.push(chars.slice(0, cut).join(''));
-        chars = chars.slice(cut);
-        line = chars.join('');
+export function capText(text: string, limit = MAX_LAYOUT_TEXT): string {
+  const max = Math.max(1, Math.floor(limit));
+  if (text.length <= max) return text;
+  let cut = 0;
+  for (let i = 0, n = 0; i < text.length; i++, n++) {
+    if (n === max - 1) cut = i;
+    if (n === max) return `${text.slice(0, cut).trimEnd()}…`;
+    if (text.codePointAt(i)! > 0xffff) i++;
+  }
+  return text;
+}
+
+/** Whether a code point is white space as `\s` (and so `trim`) reads it. */
+export function isWhiteSpace(cp: number): boolean {
+  if (cp <= 0x20) return cp === 0x20 || (cp >= 0x09 && cp <= 0x0d);
+  return cp >= 0xa0 && /\s/.test(String.fromCodePoint(cp));
+}
+
+/**
+ * The largest k in [lo, hi] for which `fits(k)` holds, or lo if none does. `fits` must hold up
+ * to some k and fail beyond it: widths of longer prefixes never shrink, because no kerning
+ * pair of the bundled faces outweighs its glyph's advance (test/font checks it). The search
+ * gallops from lo, so a cut near the start of a long text costs the log of its own length.
+ */
+function lastFit(lo: number, hi: number, fits: (k: number) => boolean): number {
+  let step = 1;
+  for (; lo + step <= hi && fits(lo + step); step *= 2) lo += step;
+  hi = Math.min(hi, lo + step - 1);
+  while (lo < hi) {
+    const mid = lo + Math.ceil((hi - lo) / 2);
+    if (fits(mid)) lo = mid;
+    else hi = mid - 1;
+  }
+  return lo;
+}
+
+/**
+ * Greedy wrap of one paragraph whose words are joined by single spaces: calls `emit` with the
+ * code point range of each line, and stops early when `emit` returns false. A word wider than
+ * the width is broken at the last code point that fits (at least one per line).
+ */
+function wrapParagraph(r: TextRuler, maxWidth: number, emit: (start: number, end: number) => boolean): boolean {
+  let start = 0;
+  let end = 0;
+  for (let ws = 0; ws < r.length;) {
+    let we = ws;
+    while (we < r.length && r.codePoint(we) !== 0x20) we++;
+    const from = end > 0 ? start : ws;
+    if (r.width(from, we) <= maxWidth) {
+      start = from;
+    } else {
+      if (end > 0 && !emit(start, end)) return false;
+      start = ws;
+      while (we - start > 1 && r.width(start, we) > maxWidth) {
+        const cut = lastFit(start + 1, we - 1, (k) => r.width(start, k) <= maxWidth);
+        if (!emit(start, cut)) return false;
+        start = cut;
       }
     }
-    lines.push(line);
+    end = we;
+    ws = we + 1;
   }
-  return lines;
+  return emit(start, end);
+}
+
+/**
+ * Wraps up to `maxLines` lines; with `restAfter`, also the words left after that many lines,
+ * joined by single spaces (what a last, shortened line must hold).
+ */
+function wrapLines(measure: TextMeasurer, text: string, style: TextStyle, maxWidth: number, maxLines: number, restAfter = -1): { lines: string[]; rest: string } {
+  const paragraphs = text.split(/\r?\n/).map((p) => p.split(/\s+/).filter(Boolean).join(' '));
+  const lines: string[] = [];
+  const restFrom = (p: number, tail: string) => [tail, ...paragraphs.slice(p + 1)].filter(Boolean).join(' ');
+  let rest = restAfter === 0 ? restFrom(-1, '') : '';
+  for (let p = 0; p < paragraphs.length && lines.length < maxLines; p++) {
+    const r = measure.ruler(paragraphs[p]!, style.size, style.weight);
+    wrapParagraph(r, maxWidth, (start, end) => {
+      lines.push(r.slice(start, end));
+      if (lines.length === restAfter) rest = restFrom(p, r.slice(end, r.length).trim());
+      return lines.length < maxLines;
+    });
+  }
+  return { lines, rest };
+}
+
+/**
+ * Greedy word wrap to a width in px, by measured text: at most `maxLines` lines (default: all).
+ * A word wider than the width on its own is broken at characters so no line overflows. Each
+ * paragraph is measured once and every cut found by search, so time grows with the text's
+ * length, not its square.
+ */
+export function wrapText(measure: TextMeasurer, text: string, style: TextStyle, maxWidth: number, maxLines = Infinity): string[] {
+  return wrapLines(measure, text, style, maxWidth, maxLines).lines;
 }
 
 /** Shortens text with an ellipsis until it fits a width; returns it unchanged if it fits. */
 export function truncateText(measure: TextMeasurer, text: string, style: TextStyle, maxWidth: number): string {
-  if (measure.width(text, style.size, style.weight) <= maxWidth) return text;
-  const chars = [...text];
-  let n = chars.length - 1;
-  while (n > 0 && measure.width(`${chars.slice(0, n).join('').trimEnd()}…`, style.size, style.weight) > maxWidth) n--;
-  return n > 0 ? `${chars.slice(0, n).join('').trimEnd()}…` : '…';
+  const r = measure.ruler(text, style.size, style.weight);
+  if (r.width(0, r.length) <= maxWidth) return text;
+  // kept[n]: the first n code points without their trailing white space, as trimEnd leaves them.
+  const kept = new Uint32Array(r.length + 1);
+  for (let i = 1; i <= r.length; i++) kept[i] = isWhiteSpace(r.codePoint(i - 1)) ? kept[i - 1]! : i;
+  // The ellipsis only adds width, so no cut beyond the last whose bare text fits can fit with
+  // it; from there, step down to the longest that does (its kerning varies with the last letter).
+  let n = lastFit(0, r.length - 1, (k) => r.width(0, kept[k]!) <= maxWidth);
+  while (n > 0 && r.width(0, kept[n]!, '…') > maxWidth) n--;
+  return n > 0 ? `${r.slice(0, kept[n]!)}…` : '…';
 }
 
 /**
  * Fits a label into at most `maxLines` lines of a width: wrapped at spaces by measured text,
- * and only the last line shortened with an ellipsis if the rest still does not fit.
+ * and only the last line shortened with an ellipsis if the rest still does not fit. Wraps no
+ * further than the lines it keeps.
  */
 export function fitLabel(measure: TextMeasurer, text: string, style: TextStyle, maxWidth: number, maxLines: number): { lines: string[]; shortened: boolean } {
   if (measure.width(text, style.size, style.weight) <= maxWidth) return { lines: [text], shortened: false };
-  const wrapped = maxLines > 1 ? wrapText(measure, text, style, maxWidth) : [text];
-  if (wrapped.length <= maxLines) return { lines: wrapped, shortened: false };
-  const kept = wrapped.slice(0, maxLines - 1);
-  const rest = text.slice(kept.join(' ').length).trim();
-  return { lines: [...kept, truncateText(measure, rest, style, maxWidth)], shortened: true };
+  const keep = Math.max(1, Math.floor(maxLines) || 1);
+  const { lines, rest } = wrapLines(measure, text, style, maxWidth, keep + 1, keep - 1);
+  if (lines.length <= keep) return { lines, shortened: false };
+  return { lines: [...lines.slice(0, keep - 1), truncateText(measure, rest, style, maxWidth)], shortened: true };
 }

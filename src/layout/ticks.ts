@@ -62,9 +62,9 @@ export interface Labelling {
 /**
  * The best labelling of the data range [dmin, dmax] with about m ticks. With `onlyLoose` the
  * ticks cover the whole range (lmin ≤ dmin and lmax ≥ dmax), which a plot extent fitted to its
- * outer ticks needs.
+ * outer ticks needs. With `limit`, no tick lies farther than it from zero.
  */
-export function extendedLabelling(dmin: number, dmax: number, m: number, onlyLoose = false): Labelling | undefined {
+export function extendedLabelling(dmin: number, dmax: number, m: number, onlyLoose = false, limit = Infinity): Labelling | undefined {
   if (!(dmax - dmin > EPS) || !Number.isFinite(dmin) || !Number.isFinite(dmax) || m < 2) return undefined;
   let best: Labelling | undefined;
   const bestScore = () => best?.score ?? -2;
@@ -90,7 +90,9 @@ export function extendedLabelling(dmin: number, dmax: number, m: number, onlyLoo
             const lmax = lmin + step * (k - 1);
             const score = W[0] * simplicity(i, j, lmin, lmax, step) + W[1] * coverage(dmin, dmax, lmin, lmax)
               + W[2] * density(k, m, dmin, dmax, lmin, lmax) + W[3];
-            if (score > bestScore() && (!onlyLoose || (lmin <= dmin && lmax >= dmax))) best = { lmin, lmax, lstep: step, score };
+            if (score > bestScore() && (!onlyLoose || (lmin <= dmin && lmax >= dmax)) && Math.abs(lmin) <= limit && Math.abs(lmax) <= limit) {
+              best = { lmin, lmax, lstep: step, score };
+            }
           }
         }
       }
@@ -107,9 +109,11 @@ export function extendedLabelling(dmin: number, dmax: number, m: number, onlyLoo
 export function ticksOf(l: Labelling, scale = 1): number[] {
   const count = Math.round((l.lmax - l.lmin) / l.lstep) + 1;
   const exp = Math.floor(Math.log10(l.lstep * scale)) - 2;
-  // An integer divided by a power of ten is the double nearest that decimal, so it prints as
-  // written (2.07, not 2.0700000000000003); toFixed would stop at 20 decimals.
-  const round = exp < 0 ? (v: number) => Math.round(v * 10 ** -exp) / 10 ** -exp : (v: number) => Math.round(v / 10 ** exp) * 10 ** exp;
+  // The tick is an integer k times 10^exp, read back from its decimal form: the double nearest
+  // that decimal, so it prints as written (2.07, not 2.0700000000000003; 7.5e307, not
+  // 7.499999999999999e307). Where 10^exp is exact (|exp| ≤ 22) k / 10^-exp and k * 10^exp give
+  // the same double; toFixed would stop at 20 decimals.
+  const round = (v: number) => Number(`${exp < 0 ? Math.round(v * 10 ** -exp) : Math.round(v / 10 ** exp)}e${exp}`);
   return Array.from({ length: count }, (_, i) => {
     const v = round((l.lmin + i * l.lstep) * scale);
     return Object.is(v, -0) ? 0 : v;
@@ -117,15 +121,31 @@ export function ticksOf(l: Labelling, scale = 1): number[] {
 }
 
 /**
+ * The power of ten the search for [lo, hi] runs at. Where the span overflows to Infinity
+ * (data near ±1.8e308) it is taken from half the range, so the search still gets finite numbers.
+ */
+function searchScale(lo: number, hi: number): number {
+  const span = hi - lo;
+  return Number.isFinite(span) ? 10 ** Math.floor(Math.log10(span)) : 10 ** Math.floor(Math.log10(hi / 2 - lo / 2) + Math.log10(2));
+}
+
+/** A bound that is not a finite number (a defect upstream) read as the nearest finite one, so no tick is ever NaN. */
+function finiteBound(v: number): number {
+  return Number.isNaN(v) ? 0 : Math.max(-Number.MAX_VALUE, Math.min(Number.MAX_VALUE, v));
+}
+
+/**
  * Ticks for [dmin, dmax] with about m of them. A degenerate range (one value) is widened to
  * reach zero first, so a single bar still gets an axis. The search runs on the range scaled
- * by its power of ten, so micro- and mega-scale data get the same nice steps as unit data.
+ * by its power of ten, so micro- and mega-scale data get the same nice steps as unit data, and
+ * no tick lies beyond the largest double: where no nice ticks fit there (data near ±1.8e308)
+ * the axis is the data's own extent.
  */
 export function niceTicks(dmin: number, dmax: number, m: number, onlyLoose = false): number[] {
   // Values this small are zero for any chart (they are below what a float can scale).
   const tiny = (v: number) => (Math.abs(v) < 1e-300 ? 0 : v);
-  let lo = tiny(dmin);
-  let hi = tiny(dmax);
+  let lo = tiny(finiteBound(dmin));
+  let hi = tiny(finiteBound(dmax));
   // A span below 1e-10 of its magnitude is one value as far as doubles can label it: the end
   // farther from zero, so the axis still reaches all the data.
   if (hi - lo <= 1e-10 * Math.max(Math.abs(lo), Math.abs(hi))) {
@@ -138,7 +158,8 @@ export function niceTicks(dmin: number, dmax: number, m: number, onlyLoose = fal
     else if (lo > 0) lo = 0;
     else hi = 0;
   }
-  const scale = 10 ** Math.floor(Math.log10(hi - lo));
-  const l = extendedLabelling(lo / scale, hi / scale, Math.max(2, m), onlyLoose);
-  return l ? ticksOf(l, scale) : [lo, hi];
+  const scale = searchScale(lo, hi);
+  const l = extendedLabelling(lo / scale, hi / scale, Math.max(2, m), onlyLoose, Number.MAX_VALUE / scale);
+  const ticks = l ? ticksOf(l, scale) : [];
+  return ticks.length >= 2 && ticks.every(Number.isFinite) ? ticks : [lo, hi];
 }

@@ -16,7 +16,34 @@ export function fmt(n: number): string {
   return String(r);
 }
 
-/** Rewrites every number in path data through `fmt`. */
+/**
+ * One token of SVG path data (SVG 1.1 §8.3.9 grammar): a command letter, a run of separators
+ * (white space and commas), or a number. Anything else (NaN, Infinity, undefined) is not path data.
+ */
+const PATH_TOKEN = /[MmLlHhVvCcSsQqTtAaZz]|[\x20\t\r\n\f,]+|[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?/g;
+
+function badPath(d: string, at: number): RangeError {
+  return new RangeError(`not path data at character ${at}: ${JSON.stringify(d.slice(at, at + 24))}`);
+}
+
+/**
+ * Rewrites every number in path data through `fmt`, keeping command letters and separators.
+ * Path data is read token by token and anything that is not a command, a separator or a finite
+ * number throws, so `MNaN 0` or `M0 Infinity` can never reach an SVG.
+ */
 export function fmtPath(d: string): string {
-  return d.replace(/-?\d*\.?\d+(?:e[-+]?\d+)?/gi, (m) => fmt(Number(m)));
+  let at = 0;
+  let afterNumber = false;
+  const out = d.replace(PATH_TOKEN, (token: string, offset: number) => {
+    if (offset !== at) throw badPath(d, at);
+    at = offset + token.length;
+    const number = /\d/.test(token);
+    const written = number ? fmt(Number(token)) : token;
+    // "2.0.5" is 2.0 and .5; written as "2" and "0.5" they would merge into 20.5.
+    const joined = number && afterNumber && written[0] !== '-' ? ` ${written}` : written;
+    afterNumber = number;
+    return joined;
+  });
+  if (at !== d.length) throw badPath(d, at);
+  return out;
 }
