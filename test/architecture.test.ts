@@ -42,7 +42,7 @@ const ALLOWED: Record<string, RegExp> = {
   raster: /^raster\//,
   pipeline: /^(pipeline|brief|table|fields|choose|derive|forms|layout|scene|svg|font|style)\//,
   io: /^(io|pipeline|font|style|color|svg|table|diagnostics)\//,
-  cli: /^(cli|io|pipeline|raster|scene|diagnostics)\//,
+  cli: /^(cli|io|pipeline|raster|scene|diagnostics|brief)\//,
 };
 
 describe('architecture', () => {
