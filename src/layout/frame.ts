@@ -1,7 +1,7 @@
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Box, Role, TextNode } from '../scene/types.js';
 import type { Style, TextStyle } from '../style/types.js';
-import { lineHeight, textNode, wrapText } from './text.js';
+import { capText, lineHeight, textNode, wrapText } from './text.js';
 
 /** The words around a chart: header above, footer below. */
 export interface FrameTexts {
@@ -19,7 +19,7 @@ export interface FrameLayout {
 }
 
 function block(measure: TextMeasurer, role: Role, text: string, style: TextStyle, x: number, top: number, width: number, lh: number): TextNode[] {
-  return wrapText(measure, text, style, width).map((line, i) => textNode(measure, { id: `${role}-${i + 1}`, role, text: line, style, x, top: top + i * lh }));
+  return wrapText(measure, capText(text), style, width).map((line, i) => textNode(measure, { id: `${role}-${i + 1}`, role, text: line, style, x, top: top + i * lh }));
 }
 
 /**
@@ -50,7 +50,7 @@ export function layoutFrame(texts: FrameTexts, style: Style, size: { width: numb
     ...texts.notes.map((n) => ({ role: 'note' as const, text: n, style: style.text.note })),
     ...(texts.source ? [{ role: 'source' as const, text: texts.source, style: style.text.source }] : []),
   ];
-  const footerLines = footer.flatMap((f) => wrapText(measure, f.text, f.style, width).map((line) => ({ ...f, text: line })));
+  const footerLines = footer.flatMap((f) => wrapText(measure, capText(f.text), f.style, width).map((line) => ({ ...f, text: line })));
   let bottom = size.height - padding;
   const placed: TextNode[] = [];
   const counts = new Map<string, number>();

@@ -5,7 +5,7 @@ import { valueTicks, type ValueTicks } from './axis.js';
 import type { BandChannel, CartesianDomains, LayoutContext } from './kit-types.js';
 import { bandScale, type BandScale } from './scales.js';
 import { timeScale, type TimeScale } from './time-scale.js';
-import { fitLabel, lineHeight, textBoxHeight } from './text.js';
+import { capText, fitLabel, lineHeight, textBoxHeight } from './text.js';
 
 /** Longest share of the body the labels of a left band axis may take (wrapped, then shortened). */
 export const MAX_LABEL_SHARE = 0.4;
@@ -41,7 +41,7 @@ function fitBandLabels(channel: BandChannel, band: BandScale, body: Box, ctx: La
   const maxLabel = body.width * MAX_LABEL_SHARE;
   const twoLines = band.step >= 2 * lineHeight(tick, style.spacing.lineHeight);
   // A long label wraps onto a second line where the band is tall enough, and is shortened only beyond that.
-  const fitted = channel.domain.map((label) => fitLabel(measure, label, tick, maxLabel, twoLines ? 2 : 1));
+  const fitted = channel.domain.map((label) => fitLabel(measure, capText(label), tick, maxLabel, twoLines ? 2 : 1));
   const truncated = fitted.filter((l) => l.shortened).length;
   const diagnostics = truncated ? [diagnostic('layout.label-truncated', `${truncated} key label${truncated === 1 ? ' is' : 's are'} longer than ${Math.round(maxLabel)} px${twoLines ? ' on two lines' : ''} and shortened with "…"; the full text stays in the SVG title of each bar`, { field: channel.field, hint: 'use shorter labels, or a wider chart with `size:`' })] : [];
   return { band, lines: fitted.map((f) => f.lines), shortened: fitted.map((f) => f.shortened), diagnostics };

@@ -36,7 +36,11 @@ export type { TimeScale };
 
 /** A linear scale over ticks chosen for it, mapping their domain onto `range`. */
 export function linearScale(ticks: ValueTicks, range: [number, number]): LinearScale {
-  const map = scaleLinear().domain(ticks.domain).range(range);
+  const [d0, d1] = ticks.domain;
+  const [r0, r1] = range;
+  // A domain from about -1.8e308 to 1.8e308 spans more than a double holds; halving every term
+  // is exact and keeps the arithmetic finite.
+  const map = Number.isFinite(d1 - d0) ? scaleLinear().domain(ticks.domain).range(range) : (v: number) => r0 + ((v / 2 - d0 / 2) / (d1 / 2 - d0 / 2)) * (r1 - r0);
   return { kind: 'linear', domain: ticks.domain, range, ticks: ticks.ticks, labels: ticks.labels, shown: ticks.shown, map: (v) => map(v) };
 }
 

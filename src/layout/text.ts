@@ -16,14 +16,17 @@ export function textNode(measure: TextMeasurer, spec: {
 }): TextNode {
   const { style } = spec;
   const anchor = spec.anchor ?? 'start';
-  const width = measure.width(spec.text, style.size, style.weight);
+  // No text reaches the scene longer than MAX_LAYOUT_TEXT; the full text is kept as its title.
+  const text = capText(spec.text);
+  const width = measure.width(text, style.size, style.weight);
   const ascent = measure.ascent(style.size, style.weight);
   const descent = measure.descent(style.size, style.weight);
   const left = anchor === 'start' ? spec.x : anchor === 'middle' ? spec.x - width / 2 : spec.x - width;
   return {
-    kind: 'text', id: spec.id, role: spec.role, text: spec.text, x: spec.x, y: spec.top + ascent, anchor,
+    kind: 'text', id: spec.id, role: spec.role, text, x: spec.x, y: spec.top + ascent, anchor,
     size: style.size, weight: style.weight, fill: style.color,
     box: { x: left, y: spec.top, width, height: ascent + descent },
+    ...(text !== spec.text ? { full: spec.text } : {}),
   };
 }
 

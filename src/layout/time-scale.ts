@@ -24,20 +24,23 @@ export interface TimeScale {
  * English names, stated here rather than taken from d3-time-format's default locale, which
  * is module state any library in the process may replace.
  */
-const LOCALE = timeFormatLocale({
+function englishLocale() {
+  return timeFormatLocale({
   dateTime: '%a %e %b %Y %H:%M:%S', date: '%Y-%m-%d', time: '%H:%M:%S',
   periods: ['AM', 'PM'],
   days: ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'],
   shortDays: ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'],
   months: ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'],
   shortMonths: ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'],
-});
-// Only utcFormat: a label must never depend on the zone of the machine drawing it.
-const formatYear = LOCALE.utcFormat('%Y');
-const formatMonth = LOCALE.utcFormat('%b');
-const formatMonthYear = LOCALE.utcFormat('%b %Y');
-const formatDay = LOCALE.utcFormat('%-d %b');
-const formatClock = LOCALE.utcFormat('%H:%M');
+  });
+}
+
+/** The label formats, made on first use (not at module load: a cold start that draws no time axis pays nothing). */
+function formats() {
+  const locale = englishLocale();
+  // Only utcFormat: a label must never depend on the zone of the machine drawing it.
+  return { year: locale.utcFormat('%Y'), month: locale.utcFormat('%b'), monthYear: locale.utcFormat('%b %Y'), day: locale.utcFormat('%-d %b'), clock: locale.utcFormat('%H:%M') };
+}
 
 const MINUTE = 60_000;
 const HOUR = 60 * MINUTE;
@@ -87,19 +90,20 @@ export function timeStep(start: number, stop: number, approxTicks: number): Time
 
 /** Labels for ticks at a grain; months (and half years) print the year only where it changes. */
 export function timeLabels(ticks: readonly number[], grain: TimeGrain): string[] {
+  const f = formats();
   return ticks.map((t, i) => {
     const d = new Date(t);
     switch (grain) {
-      case 'year': return formatYear(d);
-      case 'quarter': return `Q${Math.floor(d.getUTCMonth() / 3) + 1} ${formatYear(d)}`;
+      case 'year': return f.year(d);
+      case 'quarter': return `Q${Math.floor(d.getUTCMonth() / 3) + 1} ${f.year(d)}`;
       case 'month': {
         const yearChanged = i === 0 || new Date(ticks[i - 1]!).getUTCFullYear() !== d.getUTCFullYear();
-        return yearChanged ? formatMonthYear(d) : formatMonth(d);
+        return yearChanged ? f.monthYear(d) : f.month(d);
       }
-      case 'week': case 'day': return formatDay(d);
+      case 'week': case 'day': return f.day(d);
       // A tick at midnight names its day, so a run of hours across days stays readable
       // (common practice; d3-scale's multi-scale format does the same).
-      case 'hour': case 'minute': return utcDay.floor(d).getTime() === t ? formatDay(d) : formatClock(d);
+      case 'hour': case 'minute': return utcDay.floor(d).getTime() === t ? f.day(d) : f.clock(d);
     }
   });
 }

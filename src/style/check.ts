@@ -27,7 +27,7 @@ export function checkStyle(value: unknown, file: string): Diagnostic[] {
     if (Array.isArray(list)) list.forEach((c, i) => need(HEX.test(String(c)), `palette.${key} colour`, `/palette/${key}/${i}`));
   }
   // The family is written into the SVG's font-family attribute: printable text only.
-  need(typeof s.font?.family === 'string' && /^[\p{L}\p{N} ._-]{1,64}$/u.test(s.font.family), 'font.family (letters, digits, spaces, dots, hyphens; up to 64)', '/font/family');
+  need(typeof s.font?.family === 'string' && /^[^\u0000-\u001f\u007f-\u009f"'<>&;{}\\]{1,64}$/.test(s.font.family), 'font.family (printable, without quotes, <, >, &, ;, braces or backslashes; up to 64)', '/font/family');
   for (const key of ['axis', 'grid', 'zero'] as const) need(HEX.test(String(s.lines?.[key])), `lines.${key} colour`, `/lines/${key}`);
   need(!!s.spacing && Object.values(s.spacing).every((v) => typeof v === 'number' && Number.isFinite(v) && v >= 0), 'spacing (non-negative numbers)', '/spacing');
   return problems;

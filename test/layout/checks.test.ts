@@ -38,4 +38,12 @@ describe('derived numbers beyond the range of doubles', () => {
     expect(r.diagnostics).toMatchObject([{ code: 'derive.aggregated' }, { code: 'derive.not-finite', field: 'k' }]);
     expect(r.diagnostics[1]!.message).toContain('"a"');
   });
+
+  it('bars at both ends of the doubles (±1.7e308) are drawn, on a scale whose span overflows a double', async () => {
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v', fields: { v: { unit: 'u' } } }, [{ k: 'high', v: 1.7e308 }, { k: 'low', v: -1.7e308 }, { k: 'mid', v: 1 }]);
+    expect(codes(r)).not.toContain('render.internal');
+    expect(r.ok).toBe(true);
+    const bars = r.scene!.root.children.filter((n) => n.role === 'bar');
+    for (const b of bars) if (b.kind === 'rect') expect(Number.isFinite(b.width) && Number.isFinite(b.x)).toBe(true);
+  });
 });
