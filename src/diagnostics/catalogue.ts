@@ -68,6 +68,7 @@ export const CATALOGUE = {
   'layout.frame-too-small': 'error',
   'layout.text-off-canvas': 'warning',
   'layout.text-overlap': 'warning',
+  'layout.labels-unplaced': 'warning',
   // output
   'output.write-failed': 'error',
   'output.raster-failed': 'error',

@@ -1,9 +1,14 @@
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
-import type { Box, Scene, SceneNode } from '../scene/types.js';
+import { diagnostic } from '../diagnostics/diagnostic.js';
+import { idMaker } from '../scene/ids.js';
+import type { Box, Scene, SceneNode, TextNode } from '../scene/types.js';
+import { nodesOf } from '../scene/walk.js';
 import { valueTicks } from './axis.js';
 import { drawBottomBandAxis, drawLeftBandAxis, drawLinearAxis, drawTimeAxis, rule, type DrawnAxis } from './axes.js';
 import { checkScene } from './checks.js';
 import { layoutFrame } from './frame.js';
+import { layoutLegend, type LegendLayout, type LegendSpec } from './legend.js';
+import { placeLabels } from './place-labels.js';
 import type { CartesianDomains, FormMarks, FormWords, LabelRoom, LayoutContext, LinearChannel, PlotArea, ScaleProbe, TimeChannel } from './kit-types.js';
 import { plotBox, tickCount, type PlotBox } from './plot-box.js';
 import { bandScale, linearScale, type BandScale, type LinearScale, type Scale } from './scales.js';
@@ -90,35 +95,87 @@ function zeroLine(domains: CartesianDomains, scales: FittedScales, plot: Box, ct
   return [];
 }
 
+/** Where a legend goes: in rows above the plot when that takes at most LEGEND_TOP_SHARE of the body, else in a column at the right. */
+const LEGEND_TOP_SHARE = 0.25;
+/** Widest share of the body a right-hand legend column may take. */
+const LEGEND_RIGHT_SHARE = 0.3;
+
+/** Lays out a form's legend and the body it leaves for the plot and axes. */
+function placeLegend(spec: LegendSpec | undefined, body: Box, ctx: LayoutContext): { body: Box; legend?: LegendLayout } {
+  if (!spec) return { body };
+  const { style, measure } = ctx;
+  const gap = style.spacing.blockGap;
+  const top = layoutLegend(spec, { x: body.x, y: body.y, width: body.width, placement: 'top' }, style, measure);
+  if (top.height <= body.height * LEGEND_TOP_SHARE) return { legend: top, body: { ...body, y: body.y + top.height + gap, height: Math.max(0, body.height - top.height - gap) } };
+  const width = body.width * LEGEND_RIGHT_SHARE;
+  const probe = layoutLegend(spec, { x: 0, y: body.y, width, placement: 'right' }, style, measure);
+  const right = layoutLegend(spec, { x: body.x + body.width - probe.width, y: body.y, width: probe.width, placement: 'right' }, style, measure);
+  return { legend: right, body: { ...body, width: Math.max(0, body.width - right.width - gap) } };
+}
+
 /**
- * The composer for forms on a left and a bottom axis: frame (title, subtitle, notes, source) →
- * the plot box the axes leave → scales from the form's domains → axes → the form's marks →
- * scene-wide checks. Layers are drawn in one order for every form: gridlines, marks, zero line,
- * tick marks; then tick labels, the form's labels, axis titles and the frame's words.
+ * The form's labels that overlap no other text, taken in the form's order (its priority); the
+ * rest are left out, never drawn on top of another (common practice for chart labels).
  */
-export function layoutCartesian<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext): { scene: Scene; diagnostics: Diagnostic[] } {
+function placeFormLabels(labels: readonly TextNode[], fixed: readonly SceneNode[], size: { width: number; height: number }, drop: ReadonlySet<string>): { kept: TextNode[]; dropped: TextNode[] } {
+  const obstacles = fixed.flatMap((n) => (n.kind === 'text' ? [n.box] : []));
+  const { unplaced } = placeLabels(labels.filter((l) => !drop.has(l.id)).map((l) => ({ id: l.id, boxes: [l.box] })), obstacles, { x: 0, y: 0, ...size });
+  const out = new Set([...unplaced, ...drop]);
+  return { kept: labels.filter((l) => !out.has(l.id)), dropped: labels.filter((l) => out.has(l.id)) };
+}
+
+interface Composed { scene: Scene; diagnostics: Diagnostic[]; dropped: TextNode[] }
+
+function compose<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext, extraNotes: string[], drop: ReadonlySet<string> = new Set()): Composed {
   const { brief, style, measure } = ctx;
   const words = form.words(derived, ctx);
-  const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: words.notes }, style, brief.size, measure);
+  const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: [...words.notes, ...extraNotes] }, style, brief.size, measure);
   const domains = form.domains(derived, ctx);
-  const box = plotBox(frame.body, domains, ctx);
+  const { body, legend } = placeLegend(domains.legend, frame.body, ctx);
+  const box = plotBox(body, domains, ctx);
   const scales = fitScales(form, derived, domains, box, ctx);
   const sides = domains.first === 'left' ? (['left', 'bottom'] as const) : (['bottom', 'left'] as const);
-  const axes = sides.map((side) => drawAxis(side, domains, scales, box, frame.body, ctx));
+  const axes = sides.map((side) => drawAxis(side, domains, scales, box, body, ctx));
   const drawn = form.layout(derived, { plot: box.plot, x: scales.x, y: scales.y, room: scales.room }, ctx);
+  const guides: SceneNode[] = [...axes.flatMap((a) => a.labels), ...axes.map((a) => a.title), ...(legend?.nodes.flatMap(nodesOf) ?? []), ...frame.texts];
+  const { kept, dropped } = placeFormLabels(drawn.labels, guides, brief.size, drop);
   const children: SceneNode[] = [
     ...axes.flatMap((a) => a.grid), ...drawn.marks, ...zeroLine(domains, scales, box.plot, ctx), ...axes.flatMap((a) => a.tickMarks),
-    ...axes.flatMap((a) => a.labels), ...drawn.labels, ...axes.map((a) => a.title), ...frame.texts,
+    ...axes.flatMap((a) => a.labels), ...kept, ...axes.map((a) => a.title), ...(legend?.nodes ?? []), ...frame.texts,
   ];
   const info = axes.map((a) => a.info);
-  const diagnostics = [...axes.flatMap((a) => a.diagnostics), ...drawn.diagnostics, ...checkScene(children, box.plot, brief.size, measure)];
+  const diagnostics = [...axes.flatMap((a) => a.diagnostics), ...drawn.diagnostics, ...checkScene(children.flatMap(nodesOf), box.plot, brief.size, measure)];
   return {
     scene: {
       form: form.name, width: brief.size.width, height: brief.size.height, background: style.background,
       title: brief.title ?? words.title, description: brief.description ?? words.description,
       root: { kind: 'group', id: 'chart', role: 'chart', children }, axes: info, plot: box.plot,
-      panels: [{ id: 'panel', plot: box.plot, axes: info }], legends: [],
+      panels: [{ id: 'panel', plot: box.plot, axes: info }], legends: legend ? [legend.info] : [],
     },
     diagnostics,
+    dropped,
   };
+}
+
+/**
+ * The composer for forms on a left and a bottom axis: frame (title, subtitle, notes, source) →
+ * legend → the plot box the axes leave → scales from the form's domains → axes → the form's
+ * marks → label placement → scene-wide checks. Layers are drawn in one order for every form:
+ * gridlines, marks, zero line, tick marks; then tick labels, the form's labels, axis titles,
+ * the legend and the frame's words. A form label that would overlap other text is left out,
+ * and the chart says so in a note.
+ */
+export function layoutCartesian<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext): { scene: Scene; diagnostics: Diagnostic[] } {
+  const first = compose(form, derived, ctx, []);
+  if (first.dropped.length === 0) return first;
+  // Drawn again with the note, which takes room from the plot; ids start afresh (the same ids in
+  // the same order), and the labels left out the first time stay out, so the note stays true.
+  const n = first.dropped.length;
+  const note = `${n} label${n === 1 ? ' is' : 's are'} left out where ${n === 1 ? 'it' : 'they'} would overlap other text (${first.dropped.slice(0, 3).map((l) => l.text).join(', ')}${n > 3 ? ', …' : ''}).`;
+  const second = compose(form, derived, { ...ctx, id: idMaker() }, [note], new Set(first.dropped.map((l) => l.id)));
+  const m = second.dropped.length;
+  const unplaced = diagnostic('layout.labels-unplaced', `${m} label${m === 1 ? '' : 's'} would overlap other text and ${m === 1 ? 'is' : 'are'} left out; the chart's note names ${n === m ? 'them' : `${n} of them`}`, {
+    found: first.dropped[0]!.text, hint: 'make the chart larger with `size:`, or use fewer or shorter labels',
+  });
+  return { scene: second.scene, diagnostics: [...second.diagnostics, unplaced] };
 }

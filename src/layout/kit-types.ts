@@ -3,6 +3,7 @@ import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Box, SceneNode, TextNode } from '../scene/types.js';
 import type { Style } from '../style/types.js';
+import type { LegendSpec } from './legend.js';
 import type { BandScale, LinearScale, Scale } from './scales.js';
 
 /** What every layout step receives: the brief, the style, the text measurer, and the chart's id maker. */
@@ -56,6 +57,8 @@ export interface CartesianDomains {
   first: 'left' | 'bottom';
   /** Draw a zero line across the plot at 0 of this side's linear scale (length-coded marks). */
   zeroLine?: 'left' | 'bottom';
+  /** A legend the form's colours, shapes or sizes need (the composer places it above or beside the plot). */
+  legend?: LegendSpec;
 }
 
 /**

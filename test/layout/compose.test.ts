@@ -6,6 +6,7 @@ import type { LayoutContext } from '../../src/layout/kit-types.js';
 import { idMaker } from '../../src/scene/ids.js';
 import { dumpScene } from '../../src/scene/dump.js';
 import { polyline } from '../../src/svg/path.js';
+import { textNode } from '../../src/layout/text.js';
 import { env } from '../helpers.js';
 
 /** A minimal form for the composer: points over time on a linear value axis, drawn as one line. */
@@ -55,5 +56,46 @@ describe('the composer with a time axis', () => {
   it('keeps every text on the canvas and apart, with no diagnostic', () => {
     expect(diagnostics).toEqual([]);
     expect(dump.texts.filter((t) => t.role === 'tick').length).toBeGreaterThan(2);
+  });
+});
+
+/** A minimal band × linear form with a categorical legend and one label per band, placed where the test says. */
+function legendForm(labelAt: (band: string) => { x: number; top: number }, entries = 3): CartesianForm<string[]> {
+  return {
+    name: 'test-legend',
+    words: () => ({ title: 't', description: 'd', notes: [] }),
+    domains: (d) => ({
+      left: { kind: 'linear', name: 'value', field: 'v', title: 'Value (u)', extent: [0, 10] },
+      bottom: { kind: 'band', name: 'key', field: 'k', title: 'Key', domain: d },
+      first: 'left',
+      legend: { kind: 'categorical', field: 'g', title: 'Group', entries: Array.from({ length: entries }, (_, i) => ({ label: `Group ${i + 1}`, fill: ['#206c89', '#b49101', '#952632', '#8d84ff'][i % 4]! })) },
+    }),
+    layout: (d, area, ctx) => ({
+      marks: [],
+      labels: d.map((k) => textNode(ctx.measure, { id: ctx.id('label', k), role: 'label', text: `label ${k}`, style: ctx.style.text.label, ...labelAt(k) })),
+      diagnostics: [],
+    }),
+  };
+}
+
+describe('the composer with a legend and form labels', () => {
+  it('places a short legend in rows above the plot, inside the canvas and clear of every other text', () => {
+    const { scene, diagnostics } = layoutCartesian(legendForm(() => ({ x: 300, top: 300 })), ['a'], context());
+    const dump = dumpScene(scene);
+    expect(dump.legends).toHaveLength(1);
+    expect(dump.legends[0]).toMatchObject({ kind: 'categorical', field: 'g', title: 'Group' });
+    expect(dump.legends[0]!.entries.map((e) => e.label)).toEqual(['Group 1', 'Group 2', 'Group 3']);
+    const legend = dump.legends[0]!.box;
+    expect(legend.y + legend.height).toBeLessThanOrEqual(dump.plot.y);
+    expect(diagnostics.map((d) => d.code)).toEqual([]);
+  });
+
+  it('a label that would overlap other text is left out, and the chart says so in a note', () => {
+    // The label for "a" is put right on the left axis title (top-left of the body).
+    const { scene, diagnostics } = layoutCartesian(legendForm((k) => (k === 'a' ? { x: 16, top: 16 } : { x: 400, top: 250 })), ['a', 'b'], context());
+    const dump = dumpScene(scene);
+    expect(dump.texts.filter((t) => t.role === 'label').map((t) => t.text)).toEqual(['label b']);
+    expect(dump.texts.some((t) => t.role === 'note' && t.text.includes('label a'))).toBe(true);
+    expect(diagnostics.map((d) => d.code)).toEqual(['layout.labels-unplaced']);
   });
 });
