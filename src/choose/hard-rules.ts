@@ -1,4 +1,5 @@
-import type { ResolvedBrief } from '../brief/types.js';
+import type { Intent, ResolvedBrief } from '../brief/types.js';
+import { supportedIntents } from './rules.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { isOrdered, type Field, type Fields } from '../fields/types.js';
 import type { Decision, FormTraits } from './types.js';
@@ -30,12 +31,17 @@ export interface HardRule {
   broken(c: RuleContext): boolean;
   refusal(c: RuleContext): Diagnostic;
   /** How the lenient render keeps the rule instead of failing, if it can. */
-  lenientFix?: { message: string; hint: string; path: string };
+  lenientFix?: { message: string; hint: () => string; path: string };
   /** Whether the rule can be checked from the brief alone. */
   briefOnly: boolean;
 }
 
 const firstKey = (c: RuleContext): Field | undefined => c.fields?.keys[0];
+
+/** An alternative worth offering only once its intent is answered: the words, or nothing (hints never offer what is not drawn). */
+function offer(intent: Intent, words: string): string {
+  return supportedIntents().includes(intent) ? words : '';
+}
 
 /** The categorical field coloured: the `color` field, or the second key (the series of grouped or stacked forms). */
 function colouredField(c: RuleContext): Field | undefined {
@@ -52,9 +58,9 @@ export const HARD_RULES: readonly HardRule[] = [
     decision: () => ({ decision: 'the value axis starts at zero', rule: 'hard rule: length-coded marks start at zero; a bar read from a cut axis exaggerates differences (Correll, Bertini & Franconeri, CHI 2020)' }),
     broken: (c) => c.brief.baseline === 'fit',
     refusal: (c) => diagnostic('choice.baseline-fit-refused', `\`baseline: fit\` is refused for ${c.form === 'bar' ? 'bars' : `the ${c.form} form`}: its marks encode values by their length, so an axis that does not start at zero makes small differences look large`, {
-      path: '/baseline', found: 'fit', expected: 'zero', hint: 'remove `baseline: fit`; to show change over time from a non-zero base, use a line (intent: trend or change)',
+      path: '/baseline', found: 'fit', expected: 'zero', hint: `remove \`baseline: fit\`${offer('trend', '; to show change over time from a non-zero base, use a line (intent: trend)')}`,
     }),
-    lenientFix: { message: '`baseline: fit` was not honoured: length-coded marks encode values by their length, so they are drawn from zero instead', hint: 'remove `baseline: fit`, or use intent trend for a line that may leave zero out', path: '/baseline' },
+    lenientFix: { message: '`baseline: fit` was not honoured: length-coded marks encode values by their length, so they are drawn from zero instead', hint: () => `remove \`baseline: fit\`${offer('trend', ', or use intent trend for a line that may leave zero out')}`, path: '/baseline' },
   },
   {
     id: 'ordered-key-for-lines',
@@ -83,7 +89,7 @@ export const HARD_RULES: readonly HardRule[] = [
     broken: (c) => (c.fields?.values.length ?? 0) > 1,
     refusal: (c) => diagnostic('choice.too-many-values', `${c.fields!.values.length} values on one value axis: a chart shows one value per axis`, {
       path: '/values', found: c.fields!.values.map((v) => v.name).join(', '), expected: 'one value column',
-      hint: 'write one brief per value and show them as aligned panels, or index them to a common base (intent: change)',
+      hint: `write one brief per value and show them as aligned panels${offer('change', ', or index them to a common base (intent: change)')}`,
     }),
   },
   {
@@ -111,7 +117,7 @@ export function applyHardRules(c: RuleContext, lenient: boolean, only?: (rule: H
     if (!rule.broken(c)) continue;
     if (lenient && rule.lenientFix) {
       const fix = rule.lenientFix;
-      problems.push(diagnostic('choice.lenient-fallback', fix.message, { path: fix.path, hint: fix.hint }));
+      problems.push(diagnostic('choice.lenient-fallback', fix.message, { path: fix.path, hint: fix.hint() }));
     } else problems.push(rule.refusal(c));
   }
   return { problems, decisions };

@@ -1,3 +1,4 @@
+import { extent } from 'd3-array';
 import type { Aggregate } from '../brief/types.js';
 import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import type { FieldRef } from '../fields/types.js';
@@ -32,9 +33,11 @@ export interface BarDatum {
 /**
  * How folded keys were combined: into an "Others" bar; left out (mean, min, max cannot be
  * added); or left out with their total stated, because an "Others" bar longer than every bar
- * shown would squash the bars the chart is for.
+ * shown would squash the bars the chart is for; or, when what is left out mixes positive and
+ * negative values ('mixed'), left out with their range stated, since one bar of their net sum
+ * would hide both.
  */
-export type FoldMode = 'others' | 'dropped' | 'stated' | 'none';
+export type FoldMode = 'others' | 'dropped' | 'stated' | 'mixed' | 'none';
 
 /** What a fold left out, as the note under the chart states it. */
 export interface FoldSummary {
@@ -43,6 +46,10 @@ export interface FoldSummary {
   count: number;
   /** Their total, for "others" and "stated". */
   total?: number;
+  /** Their smallest and largest value, for "mixed". */
+  range?: [number, number];
+  /** Whether the chart has negative values, so "smallest" would mislead: folded keys are those closest to zero. */
+  nearZero: boolean;
 }
 
 /** The numbers a bar chart draws, with the query (or the plan holding it) they came from. */
@@ -56,6 +63,10 @@ export interface DerivedBars<Q extends BarQuery = BarQuery> {
   foldMode: FoldMode;
   /** The total of the folded keys, for "others" and "stated". */
   foldedTotal?: number;
+  /** The smallest and largest folded value, for "mixed". */
+  foldedRange?: [number, number];
+  /** Whether any bar, shown or folded, is negative (then folded keys are "closest to zero"). */
+  anyNegative: boolean;
   /** How many bars the plot holds at the narrowest band drawn. */
   capacity: number;
 }
@@ -74,12 +85,27 @@ function sortBars(bars: BarDatum[], keyOf: Map<string, number>, order: BarQuery[
   return bars;
 }
 
-type Folded = Pick<DerivedBars, 'bars' | 'foldedKeys' | 'foldMode' | 'foldedTotal'>;
+type Folded = Pick<DerivedBars, 'bars' | 'foldedKeys' | 'foldMode' | 'foldedTotal' | 'foldedRange'>;
 
-/** The bars kept at a capacity: the largest, plus an "Others" bar, or with the rest stated or dropped. */
+/** Keys left out, with positive and negative values mixed: their range is stated, not a net sum that would hide both. */
+function foldMixed(bars: BarDatum[], ranked: BarDatum[], capacity: number): Folded | undefined {
+  const rest = ranked.slice(capacity);
+  if (!rest.some((b) => b.value > 0) || !rest.some((b) => b.value < 0)) return undefined;
+  const kept = new Set(ranked.slice(0, capacity).map((b) => b.label));
+  const values = rest.map((b) => b.value);
+  const [lo, hi] = extent(values) as [number, number];
+  return { bars: bars.filter((b) => kept.has(b.label)), foldedKeys: rest.map((b) => b.label), foldMode: 'mixed', foldedRange: [lo, hi] };
+}
+
+/**
+ * The bars kept at a capacity: those farthest from zero (so large negative values are never the
+ * ones folded away), plus an "Others" bar, or with the rest stated, dropped or (mixed signs) ranged.
+ */
 function foldAt(bars: BarDatum[], query: BarQuery, capacity: number): Folded {
   const { additive } = AGGREGATORS[query.aggregate];
-  const ranked = [...bars].sort((a, b) => b.value - a.value || compareText(a.label, b.label));
+  const ranked = [...bars].sort((a, b) => Math.abs(b.value) - Math.abs(a.value) || compareText(a.label, b.label));
+  const mixed = additive ? foldMixed(bars, ranked, capacity) : undefined;
+  if (mixed) return mixed;
   const restTotal = (keep: number) => ranked.slice(keep).reduce((s, b) => s + b.value, 0);
   const largestShown = (keep: number) => Math.max(...ranked.slice(0, keep).map((b) => Math.abs(b.value)));
   // An "Others" bar longer than every bar kept would squash them all on the shared scale.
@@ -104,18 +130,25 @@ function settleCapacity(bars: BarDatum[], query: BarQuery, capacityFor: Capacity
   let capacity = Math.max(1, capacityFor(undefined, bars));
   for (;;) {
     const folded = foldAt(bars, query, capacity);
-    const room = Math.max(1, capacityFor({ mode: folded.foldMode, count: folded.foldedKeys.length, total: folded.foldedTotal }, folded.bars));
+    const room = Math.max(1, capacityFor(summaryOf(folded, bars.some((b) => b.value < 0)), folded.bars));
     if (room >= capacity || capacity === 1) return { capacity, folded };
     capacity = room;
   }
 }
 
-function foldDiagnostic(total: number, query: BarQuery, folded: Folded, capacity: number, valueName: string): Diagnostic {
+/** What a fold left out, as its note states it. */
+export function summaryOf(folded: Folded, anyNegative: boolean): FoldSummary {
+  return { mode: folded.foldMode, count: folded.foldedKeys.length, total: folded.foldedTotal, range: folded.foldedRange, nearZero: anyNegative };
+}
+
+function foldDiagnostic(total: number, query: BarQuery, folded: Folded, capacity: number, valueName: string, nearZero: boolean): Diagnostic {
   const n = folded.foldedKeys.length;
+  const which = nearZero ? `${n} closest to zero` : `${n} smallest`;
   const why = {
-    others: `the ${n} smallest are folded into one "Others" bar carrying their total ${valueName}`,
-    stated: `the ${n} smallest are left out and their total ${valueName} is stated in a note, because an "Others" bar of it would be longer than every bar shown and squash them`,
-    dropped: `the ${n} smallest are left out, because ${query.aggregate} values cannot be added into an "Others" bar`,
+    others: `the ${which} are folded into one "Others" bar carrying their total ${valueName}`,
+    stated: `the ${which} are left out and their total ${valueName} is stated in a note, because an "Others" bar of it would be longer than every bar shown and squash them`,
+    dropped: `the ${which} are left out, because ${query.aggregate} values cannot be added into an "Others" bar`,
+    mixed: `the ${which} are left out and their range is stated in a note, because they mix positive and negative values that one "Others" bar would net out`,
     none: '',
   }[folded.foldMode];
   return diagnostic('derive.others-folded', `${total} bars do not fit at 3 px each; ${why}`, {
@@ -137,7 +170,7 @@ function unevenDates(bars: BarDatum[], keyOf: Map<string, number>, query: BarQue
   if (!gap) return [];
   const after = bars.find((b) => keyOf.get(b.label) === gap.after)!.label;
   return [diagnostic('derive.uneven-dates', `the dates of \`${query.key.name}\` are not evenly spaced: after ${after} comes a step of ${gap.step} ${GRAIN_WORD[grain]} where the others are ${gap.usual}; bars stand evenly apart, so the gap does not show`, {
-    field: query.key.name, hint: 'add rows for the missing dates (NA leaves a visible empty slot), or chart time to scale with a line (intent: trend)',
+    field: query.key.name, hint: 'add rows for the missing dates (NA leaves a visible empty slot)',
   })];
 }
 
@@ -176,15 +209,18 @@ export function deriveBars<Q extends BarQuery>(table: Table, query: Q, capacityF
   const keyOf = new Map(groups.map((g) => [g.labels[0]!, g.sortKeys[0]!]));
   const sorted = sortBars(bars, keyOf, query.order);
   problems.push(...unevenDates(sorted, keyOf, query, table));
-  const fits = Math.max(1, capacityFor(undefined, sorted));
-  if (sorted.length <= fits) return success({ query, valueName, bars: sorted, foldedKeys: [], foldMode: 'none', capacity: fits }, problems);
+  const fits = capacityFor(undefined, sorted);
+  // A plot with no room at all is a frame too small for its words, which layout reports; folding
+  // the bars to fit nothing would only add a misleading warning before that error.
+  const anyNegative = sorted.some((b) => b.value < 0);
+  if (sorted.length <= fits || fits < 1) return success({ query, valueName, bars: sorted, foldedKeys: [], foldMode: 'none', capacity: fits, anyNegative }, problems);
   if (query.order === 'key') {
     problems.push(diagnostic('derive.too-many-ordered-bars', `${sorted.length} bars in key order do not fit: the plot holds ${fits} at 3 px each, and folding an ordered key into "Others" would break its order`, {
-      field: query.key.name, found: `${sorted.length} bars`, expected: `at most ${fits}`, hint: 'use intent: trend for a line, aggregate to a coarser key (e.g. months instead of days), or make the chart larger with `size:`',
+      field: query.key.name, found: `${sorted.length} bars`, expected: `at most ${fits}`, hint: 'aggregate to a coarser key (e.g. months instead of days), or make the chart larger with `size:`',
     }));
     return failure(problems);
   }
   const { capacity, folded } = settleCapacity(sorted, query, capacityFor);
-  problems.push(foldDiagnostic(sorted.length, query, folded, capacity, valueName));
-  return success({ query, valueName, capacity, ...folded }, problems);
+  problems.push(foldDiagnostic(sorted.length, query, folded, capacity, valueName, anyNegative));
+  return success({ query, valueName, capacity, anyNegative, ...folded }, problems);
 }

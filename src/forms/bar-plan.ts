@@ -7,6 +7,7 @@ import { isOrdered, refOf, type Field, type FieldRef } from '../fields/types.js'
 import { layoutFrame } from '../layout/frame.js';
 import type { LayoutContext } from '../layout/kit-types.js';
 import { plotBox } from '../layout/plot-box.js';
+import { capText } from '../layout/text.js';
 import { idMaker } from '../scene/ids.js';
 import type { Planned, PlanInput } from './types.js';
 
@@ -71,7 +72,7 @@ function chooseOrientation(input: PlanInput, key: Field, value: Field | undefine
     bottom: { kind: 'band', name: 'key', field: key.name, title: '', domain: labels }, first: 'left',
   }, ctx);
   const { tick } = style.text;
-  const widest = max(labels, (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
+  const widest = max(labels, (l) => measure.width(capText(l), tick.size, tick.weight)) ?? 0;
   const bandNeeded = widest + 2 * style.spacing.tickGap;
   const n = Math.max(1, labels.length);
   const fitsUpright = bandNeeded * n <= plot.width;

@@ -1,5 +1,5 @@
 import { format } from 'd3-format';
-import type { BarQuery, DerivedBars, FoldSummary } from '../derive/bars.js';
+import { summaryOf, type BarQuery, type DerivedBars, type FoldSummary } from '../derive/bars.js';
 import { axisTitle } from '../layout/axis.js';
 
 /** The value axis title of a bar chart. */
@@ -16,15 +16,18 @@ export function foldNote(query: BarQuery, fold: FoldSummary | undefined, valueTi
   const n = format(',d')(fold.count);
   const key = query.key.label.toLowerCase();
   const value = valueTitle.toLowerCase();
-  if (fold.mode === 'others') return [`"Others (${n})" is the total of the ${n} ${key} values with the smallest ${value}.`];
-  if (fold.mode === 'stated') return [`Not drawn: the ${n} ${key} values with the smallest ${value}, together ${fmt(fold.total ?? 0)}, more than any bar shown.`];
-  if (fold.mode === 'dropped') return [`The ${n} ${key} values with the smallest ${value} are not shown.`];
+  // With negative values, the keys folded are those closest to zero, not the smallest.
+  const which = fold.nearZero ? `${value} closest to zero` : `smallest ${value}`;
+  if (fold.mode === 'others') return [`"Others (${n})" is the total of the ${n} ${key} values with the ${which}.`];
+  if (fold.mode === 'stated') return [`Not drawn: the ${n} ${key} values with the ${which}, together ${fmt(fold.total ?? 0)}, more in size than any bar shown.`];
+  if (fold.mode === 'dropped') return [`The ${n} ${key} values with the ${which} are not shown.`];
+  if (fold.mode === 'mixed') return [`Not drawn: the ${n} ${key} values with the ${which}, from ${fmt(fold.range![0])} to ${fmt(fold.range![1])}; their positive and negative values are not netted into one bar.`];
   return [];
 }
 
 /** What a derived bar chart folded, as the note states it; undefined when nothing was. */
 export function foldOf(derived: DerivedBars): FoldSummary | undefined {
-  return derived.foldMode === 'none' ? undefined : { mode: derived.foldMode, count: derived.foldedKeys.length, total: derived.foldedTotal };
+  return derived.foldMode === 'none' ? undefined : summaryOf(derived, derived.anyNegative);
 }
 
 /** One sentence for screen readers: what is compared, how many bars, and the extremes. */

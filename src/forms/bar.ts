@@ -38,7 +38,7 @@ function valueTexts(derived: DerivedBars<BarPlan>): Map<BarDatum, string> {
 function capacityFor(plan: BarPlan, ctx: LayoutContext): CapacityFor {
   const valueTitle = barValueTitle(plan);
   return (fold, bars) => {
-    const notes = foldNote(plan, fold, valueTitle, valueFormatter([fold?.total ?? 0], plan.value?.format));
+    const notes = foldNote(plan, fold, valueTitle, valueFormatter([fold?.total ?? 0, ...(fold?.range ?? [])], plan.value?.format));
     const { brief, style, measure } = ctx;
     const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes }, style, brief.size, measure);
     const { plot } = plotBox(frame.body, domainsOf({ query: plan, bars, valueName: plan.value?.name ?? 'count' }, plan.orientation === 'vertical'), ctx);
@@ -133,7 +133,7 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
     return {
       title: `${valueTitle} by ${derived.query.key.label.toLowerCase()}`,
       description: barDescription(derived, valueTitle, fmt),
-      notes: foldNote(derived.query, foldOf(derived), valueTitle, valueFormatter([derived.foldedTotal ?? 0], derived.query.value?.format)),
+      notes: foldNote(derived.query, foldOf(derived), valueTitle, valueFormatter([derived.foldedTotal ?? 0, ...(derived.foldedRange ?? [])], derived.query.value?.format)),
     };
   },
 };

@@ -6,7 +6,7 @@ import { thinningStep } from './axis.js';
 import type { BandChannel, Channel, LayoutContext, LinearChannel, TimeChannel } from './kit-types.js';
 import type { FittedBandLabels } from './plot-box.js';
 import type { BandScale, LinearScale, TimeScale } from './scales.js';
-import { lineHeight, textBoxHeight, textNode } from './text.js';
+import { capText, lineHeight, textBoxHeight, textNode } from './text.js';
 
 /** One axis, drawn: gridlines (under the marks), tick marks, tick labels and title (over them). */
 export interface DrawnAxis {
@@ -111,7 +111,7 @@ export function drawBottomBandAxis(band: BandScale, channel: BandChannel, plot: 
   const { tick } = style.text;
   const gap = style.spacing.tickGap;
   const [left, right, bottom] = [plot.x, plot.x + plot.width, plot.y + plot.height];
-  const { k, placed } = placeUprightLabels(channel.domain, band, left, right, (l) => measure.width(l, tick.size, tick.weight), gap);
+  const { k, placed } = placeUprightLabels(channel.domain, band, left, right, (l) => measure.width(capText(l), tick.size, tick.weight), gap);
   const labels: TextNode[] = [];
   const tickMarks: SceneNode[] = [];
   for (const p of placed) {

@@ -8,8 +8,11 @@ export const MIN_PLOT_PX = 40;
 /** A plot squeezed below MIN_PLOT_PX by titles, labels and axes is an error: nothing could be read in it. */
 export function frameTooSmall(plot: Box, size: { width: number; height: number }): Diagnostic[] {
   if (plot.width >= MIN_PLOT_PX && plot.height >= MIN_PLOT_PX) return [];
-  return [diagnostic('layout.frame-too-small', `the plot area is only ${Math.round(plot.width)} × ${Math.round(plot.height)} px after titles, labels and axes`, {
-    path: '/size', found: `${size.width} × ${size.height}`, expected: `a plot area of at least ${MIN_PLOT_PX} × ${MIN_PLOT_PX} px`, hint: 'make `size:` larger, or shorten the title and labels',
+  // The size that would leave the smallest readable plot, all else equal.
+  const need = { width: Math.ceil(size.width + Math.max(0, MIN_PLOT_PX - plot.width)), height: Math.ceil(size.height + Math.max(0, MIN_PLOT_PX - plot.height)) };
+  return [diagnostic('layout.frame-too-small', `the plot area is only ${Math.max(0, Math.round(plot.width))} × ${Math.max(0, Math.round(plot.height))} px after titles, labels and axes`, {
+    path: '/size', found: `${size.width} × ${size.height}`, expected: `a plot area of at least ${MIN_PLOT_PX} × ${MIN_PLOT_PX} px`,
+    hint: `make \`size:\` at least { width: ${need.width}, height: ${need.height} }, or shorten the title and labels`,
   })];
 }
 

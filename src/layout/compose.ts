@@ -144,7 +144,9 @@ function compose<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext, extr
     ...axes.flatMap((a) => a.labels), ...kept, ...axes.map((a) => a.title), ...(legend?.nodes ?? []), ...frame.texts,
   ];
   const info = axes.map((a) => a.info);
-  const diagnostics = [...axes.flatMap((a) => a.diagnostics), ...drawn.diagnostics, ...checkScene(children.flatMap(nodesOf), box.plot, brief.size, measure)];
+  const checks = checkScene(children.flatMap(nodesOf), box.plot, brief.size, measure);
+  // In a frame too small for its words, thinned or shortened labels are symptoms of that one error.
+  const diagnostics = checks.some((d) => d.code === 'layout.frame-too-small') ? checks : [...axes.flatMap((a) => a.diagnostics), ...drawn.diagnostics, ...checks];
   return {
     scene: {
       form: form.name, width: brief.size.width, height: brief.size.height, background: style.background,

@@ -1,7 +1,11 @@
+/** Longest text an id fragment is made from; longer labels share their first part (ids stay unique through -2, -3). */
+const SLUG_SOURCE = 200;
+
 /** Turns text into an id fragment: lower-case ASCII letters, digits and single hyphens. */
 export function slug(text: string): string {
+  const head = text.length > SLUG_SOURCE ? text.slice(0, SLUG_SOURCE) : text;
   // Only non-ASCII text needs decomposing (é → e + accent, then the accent is dropped).
-  const source = /^[\x00-\x7f]*$/.test(text) ? text : text.normalize('NFKD');
+  const source = /^[\x00-\x7f]*$/.test(head) ? head : head.normalize('NFKD');
   let out = '';
   let gap = false;
   for (let i = 0; i < source.length; i++) {

@@ -7,28 +7,30 @@ import type { Style } from './types.js';
 
 const HEX = /^#[0-9a-f]{6}$/;
 
-/** Checks a style document has every part a render needs, with colours as #rrggbb. */
+/** Checks a style document has every part a render needs, with colours as #rrggbb; each problem names the value found. */
 export function checkStyle(value: unknown, file: string): Diagnostic[] {
   const problems: Diagnostic[] = [];
   const s = value as Partial<Style> | null;
-  const need = (ok: boolean, what: string, path: string) => {
-    if (!ok) problems.push(diagnostic('brief.bad-style', `the style file is missing or has a bad ${what}`, { file, path, expected: what, hint: 'start from templates/styles/report.json' }));
+  const need = (ok: boolean, what: string, path: string, found?: unknown) => {
+    if (!ok) problems.push(diagnostic('brief.bad-style', `the style file is missing or has a bad ${what}`, { file, path, expected: what, ...(found !== undefined ? { found: JSON.stringify(found)?.slice(0, 60) ?? String(found) } : {}), hint: 'start from templates/styles/report.json' }));
   };
+  const colour = (c: unknown, what: string, path: string) => need(typeof c === 'string' && HEX.test(c), `${what} (a colour as #rrggbb, e.g. #206c89)`, path, c);
   need(!!s && typeof s === 'object', 'style object', '');
   if (!s || typeof s !== 'object') return problems;
-  need(typeof s.background === 'string' && HEX.test(s.background), 'background colour (#rrggbb)', '/background');
+  colour(s.background, 'background colour', '/background');
   for (const key of ['title', 'subtitle', 'source', 'tick', 'axisTitle', 'label', 'note'] as const) {
     const t = s.text?.[key];
-    need(!!t && typeof t.size === 'number' && t.size > 0 && HEX.test(t.color) && (t.weight === 'regular' || t.weight === 'semibold'), `text.${key} (size, weight, colour)`, `/text/${key}`);
+    need(!!t && typeof t.size === 'number' && t.size > 0 && (t.weight === 'regular' || t.weight === 'semibold'), `text.${key} (size, weight)`, `/text/${key}`);
+    if (t) colour(t.color, `text.${key}.color`, `/text/${key}/color`);
   }
-  for (const key of ['primary', 'negative', 'others'] as const) need(HEX.test(String(s.palette?.[key])), `palette.${key} colour`, `/palette/${key}`);
+  for (const key of ['primary', 'negative', 'others'] as const) colour(s.palette?.[key], `palette.${key}`, `/palette/${key}`);
   for (const key of ['categorical', 'sequential', 'diverging'] as const) {
     const list = s.palette?.[key];
-    if (Array.isArray(list)) list.forEach((c, i) => need(HEX.test(String(c)), `palette.${key} colour`, `/palette/${key}/${i}`));
+    if (Array.isArray(list)) list.forEach((c, i) => colour(c, `palette.${key} colour`, `/palette/${key}/${i}`));
   }
   // The family is written into the SVG's font-family attribute: printable text only.
-  need(typeof s.font?.family === 'string' && /^[^\u0000-\u001f\u007f-\u009f"'<>&;{}\\]{1,64}$/.test(s.font.family), 'font.family (printable, without quotes, <, >, &, ;, braces or backslashes; up to 64)', '/font/family');
-  for (const key of ['axis', 'grid', 'zero'] as const) need(HEX.test(String(s.lines?.[key])), `lines.${key} colour`, `/lines/${key}`);
+  need(typeof s.font?.family === 'string' && /^[^\u0000-\u001f\u007f-\u009f"'<>&;{}\\]{1,64}$/.test(s.font.family), 'font.family (printable, without quotes, <, >, &, ;, braces or backslashes; up to 64)', '/font/family', s.font?.family);
+  for (const key of ['axis', 'grid', 'zero'] as const) colour(s.lines?.[key], `lines.${key}`, `/lines/${key}`);
   need(!!s.spacing && Object.values(s.spacing).every((v) => typeof v === 'number' && Number.isFinite(v) && v >= 0), 'spacing (non-negative numbers)', '/spacing');
   return problems;
 }

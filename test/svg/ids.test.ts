@@ -22,3 +22,13 @@ describe('ids', () => {
     expect(contentHash('a')).toBe('e40c292c');
   });
 });
+
+describe('ids from very long labels', () => {
+  // Guards a trial finding: a 5 MB label spent seconds being turned into an id.
+  it('are made from the first part of the text only, and stay unique', () => {
+    const long = 'Grebe '.repeat(100_000);
+    expect(slug(long).length).toBeLessThanOrEqual(200);
+    const id = idMaker();
+    expect(id('bar', long)).not.toBe(id('bar', `${long}x`));
+  });
+});
