@@ -3,7 +3,7 @@ import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
 import { applyHardRules } from './hard-rules.js';
 import { formsForIntent } from './rules.js';
-import type { Candidate, Decision } from './types.js';
+import type { Candidate } from './types.js';
 
 function columnsOfType(fields: Fields, types: string[]): string[] {
   return fields.all.filter((f) => types.includes(f.type)).map((f) => f.name);
@@ -84,11 +84,11 @@ export function checkValueUnit(fields: Fields): Diagnostic[] {
  * get would break (a pinned form, or every form the intent's rules lead to). Run before the data
  * is read too, so one `check` reports them with data problems.
  */
-export function checkBriefRules(brief: ResolvedBrief, candidates: readonly Candidate[], lenient: boolean): { problems: Diagnostic[]; decisions: Decision[] } {
+export function checkBriefRules(brief: ResolvedBrief, candidates: readonly Candidate[], lenient: boolean): { problems: Diagnostic[] } {
   const names = brief.form ? [brief.form] : formsForIntent(brief.intent);
   const forms = candidates.filter((c) => names.includes(c.name));
-  const checked = forms.map((f) => applyHardRules({ traits: f.traits, form: f.name, brief, fields: undefined }, lenient, (r) => r.briefOnly));
+  const checked = forms.map((f) => applyHardRules({ traits: f.traits, form: f.noun, brief, fields: undefined }, lenient, (r) => r.briefOnly));
   // A brief-only rule is refused early only when every form the brief may get breaks it.
   const shared = checked.length ? checked[0]!.problems.filter((p) => checked.every((c) => c.problems.some((q) => q.code === p.code))) : [];
-  return { problems: [...checkIntentOptions(brief), ...shared], decisions: checked[0]?.decisions ?? [] };
+  return { problems: [...checkIntentOptions(brief), ...shared] };
 }

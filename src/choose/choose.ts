@@ -28,23 +28,24 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext)
   if (hasErrors(early.problems)) return failure(early.problems);
   const problems: Diagnostic[] = [...early.problems.filter((p) => p.code !== 'choice.lenient-fallback'), ...(SHAPE_CHECKS[brief.intent]?.(fields, brief) ?? [])];
   if (hasErrors(problems)) return failure(problems);
-  const rule = matchRule(brief.intent, fields);
+  const rule = matchRule(brief.intent, fields, brief.form);
   const form = ctx.forms.find((f) => f.name === (brief.form ?? rule?.form));
-  if (!rule || !form) {
-    return failure([...problems, diagnostic('choice.no-rule', `no rule of intent ${brief.intent} fits this data`, {
+  if (!form) {
+    return failure([...problems, diagnostic('choice.no-rule', `no form is drawn for intent ${brief.intent} with this data`, {
       path: '/intent', found: `${fields.keys.length} key(s), ${fields.values.length} value(s)`, hint: 'check `keys:` and `values:`, or choose another intent',
     })]);
   }
-  const hard = applyHardRules({ traits: form.traits, form: form.name, brief, fields }, ctx.lenient);
+  const hard = applyHardRules({ traits: form.traits, form: form.noun, brief, fields, maxColours: ctx.style.palette.categorical.length }, ctx.lenient);
   problems.push(...hard.problems);
   if (hasErrors(problems)) return failure(problems);
   problems.push(...checkValueUnit(fields));
-  const rationale: Decision[] = [{ decision: form.noun, rule: `${rule.id}: ${rule.why}` }];
+  // A pinned form is explained by its own rule row when one fits, never by another form's.
+  const rationale: Decision[] = [rule ? { decision: form.noun, rule: `${rule.id}: ${rule.why}` } : { decision: form.noun, rule: 'the brief pins `form:`' }];
   if (brief.form) rationale.push({ decision: `form pinned to ${brief.form}`, rule: 'the brief pins `form:`; the hard rules still apply' });
   rationale.push(...hard.decisions);
   const planned = form.plan({ fields, brief, style: ctx.style, measure: ctx.measure, lenient: ctx.lenient });
   problems.push(...planned.diagnostics);
   if (!planned.ok || hasErrors(problems)) return failure(problems);
   rationale.push(...planned.value.decisions);
-  return success({ form: form.name, intent: brief.intent, rule: rule.id, plan: planned.value.plan, rationale }, problems);
+  return success({ form: form.name, intent: brief.intent, rule: rule?.id ?? 'pinned', plan: planned.value.plan, rationale }, problems);
 }

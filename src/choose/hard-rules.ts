@@ -10,8 +10,10 @@ export const MAX_CATEGORICAL_COLOURS = 8;
 /** What a hard rule looks at: the form's traits, the brief and the fields. */
 export interface RuleContext {
   traits: FormTraits;
-  /** The form's name, for messages. */
+  /** The form's words ("bar chart"), for messages. */
   form: string;
+  /** How many categorical colours the style can tell apart. Default: MAX_CATEGORICAL_COLOURS. */
+  maxColours?: number;
   brief: ResolvedBrief;
   /** Undefined before the data is read (brief-only checks). */
   fields: Fields | undefined;
@@ -43,6 +45,9 @@ function offer(intent: Intent, words: string): string {
   return supportedIntents().includes(intent) ? words : '';
 }
 
+/** The most categories colour may tell apart: the style's palette, never more than MAX_CATEGORICAL_COLOURS. */
+const colours = (c: RuleContext) => Math.min(MAX_CATEGORICAL_COLOURS, c.maxColours ?? MAX_CATEGORICAL_COLOURS);
+
 /** The categorical field coloured: the `color` field, or the second key (the series of grouped or stacked forms). */
 function colouredField(c: RuleContext): Field | undefined {
   const name = c.brief.color ?? c.brief.keys[1];
@@ -57,7 +62,7 @@ export const HARD_RULES: readonly HardRule[] = [
     binds: (c) => c.traits.lengthCoded,
     decision: () => ({ decision: 'the value axis starts at zero', rule: 'hard rule: length-coded marks start at zero; a bar read from a cut axis exaggerates differences (Correll, Bertini & Franconeri, CHI 2020)' }),
     broken: (c) => c.brief.baseline === 'fit',
-    refusal: (c) => diagnostic('choice.baseline-fit-refused', `\`baseline: fit\` is refused for ${c.form === 'bar' ? 'bars' : `the ${c.form} form`}: its marks encode values by their length, so an axis that does not start at zero makes small differences look large`, {
+    refusal: (c) => diagnostic('choice.baseline-fit-refused', `\`baseline: fit\` is refused for a ${c.form}: its marks encode values by their length, so an axis that does not start at zero makes small differences look large`, {
       path: '/baseline', found: 'fit', expected: 'zero', hint: `remove \`baseline: fit\`${offer('trend', '; to show change over time from a non-zero base, use a line (intent: trend)')}`,
     }),
     lenientFix: { message: '`baseline: fit` was not honoured: length-coded marks encode values by their length, so they are drawn from zero instead', hint: () => `remove \`baseline: fit\`${offer('trend', ', or use intent trend for a line that may leave zero out')}`, path: '/baseline' },
@@ -96,10 +101,10 @@ export const HARD_RULES: readonly HardRule[] = [
     id: 'distinguishable-colours',
     briefOnly: false,
     binds: (c) => c.traits.coloursCategories && colouredField(c) !== undefined,
-    decision: (c) => ({ decision: `colour tells the ${colouredField(c)!.levels.length} levels of \`${colouredField(c)!.name}\` apart`, rule: `hard rule: at most ${MAX_CATEGORICAL_COLOURS} categorical colours, the most the default palette keeps distinct for every reader` }),
-    broken: (c) => colouredField(c)!.levels.length > MAX_CATEGORICAL_COLOURS,
-    refusal: (c) => diagnostic('choice.too-many-colours', `\`${colouredField(c)!.name}\` has ${colouredField(c)!.levels.length} levels, more than the ${MAX_CATEGORICAL_COLOURS} colours a reader can tell apart`, {
-      field: colouredField(c)!.name, found: `${colouredField(c)!.levels.length} levels`, expected: `at most ${MAX_CATEGORICAL_COLOURS}`, hint: 'show one panel per level (small multiples), or combine the smallest levels before charting',
+    decision: (c) => ({ decision: `colour tells the ${colouredField(c)!.levels.length} levels of \`${colouredField(c)!.name}\` apart`, rule: `hard rule: at most ${colours(c)} categorical colours, the most the style's palette keeps distinct for every reader` }),
+    broken: (c) => colouredField(c)!.levels.length > colours(c),
+    refusal: (c) => diagnostic('choice.too-many-colours', `\`${colouredField(c)!.name}\` has ${colouredField(c)!.levels.length} levels, more than the ${colours(c)} colours a reader can tell apart`, {
+      field: colouredField(c)!.name, found: `${colouredField(c)!.levels.length} levels`, expected: `at most ${colours(c)}`, hint: 'show one panel per level (small multiples), or combine the smallest levels before charting',
     }),
   },
 ];

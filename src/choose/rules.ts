@@ -33,9 +33,9 @@ export const RULES: readonly Rule[] = [
   },
 ];
 
-/** The first rule that matches the intent and the fields. */
-export function matchRule(intent: Intent, fields: Fields): Rule | undefined {
-  return RULES.find((r) => r.intent === intent && r.applies(fields));
+/** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */
+export function matchRule(intent: Intent, fields: Fields, pinned?: FormName): Rule | undefined {
+  return RULES.find((r) => r.intent === intent && (pinned === undefined || r.form === pinned) && r.applies(fields));
 }
 
 /** The intents the rule table answers, in table order. */

@@ -1,4 +1,4 @@
-import { fsum, max, mean, min } from 'd3-array';
+import { fsum, max, min } from 'd3-array';
 import type { Aggregate } from '../brief/types.js';
 
 /** How rows that share a key are combined: the arithmetic, the word for messages, and whether results add up. */
@@ -17,7 +17,8 @@ export interface Aggregator {
  */
 export const AGGREGATORS: Record<Aggregate, Aggregator> = {
   sum: { combine: (v) => fsum(v), verb: 'summed', additive: true },
-  mean: { combine: (v) => mean(v)!, verb: 'averaged', additive: false },
+  // Each value is divided first, so the mean of values near the largest double stays finite.
+  mean: { combine: (v) => fsum(v, (x) => x / v.length), verb: 'averaged', additive: false },
   count: { combine: (v) => v.length, verb: 'counted', additive: true },
   max: { combine: (v) => max(v)!, verb: 'reduced to their maximum', additive: false },
   min: { combine: (v) => min(v)!, verb: 'reduced to their minimum', additive: false },

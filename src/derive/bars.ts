@@ -1,4 +1,4 @@
-import { extent } from 'd3-array';
+import { extent, fsum } from 'd3-array';
 import type { Aggregate } from '../brief/types.js';
 import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import type { FieldRef } from '../fields/types.js';
@@ -106,7 +106,7 @@ function foldAt(bars: BarDatum[], query: BarQuery, capacity: number): Folded {
   const ranked = [...bars].sort((a, b) => Math.abs(b.value) - Math.abs(a.value) || compareText(a.label, b.label));
   const mixed = additive ? foldMixed(bars, ranked, capacity) : undefined;
   if (mixed) return mixed;
-  const restTotal = (keep: number) => ranked.slice(keep).reduce((s, b) => s + b.value, 0);
+  const restTotal = (keep: number) => fsum(ranked.slice(keep), (b) => b.value);
   const largestShown = (keep: number) => Math.max(...ranked.slice(0, keep).map((b) => Math.abs(b.value)));
   // An "Others" bar longer than every bar kept would squash them all on the shared scale.
   const stated = additive && Math.abs(restTotal(capacity - 1)) > largestShown(capacity - 1);

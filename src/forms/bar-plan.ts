@@ -4,9 +4,8 @@ import type { Decision } from '../choose/types.js';
 import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import { keyText } from '../fields/labels.js';
 import { isOrdered, refOf, type Field, type FieldRef } from '../fields/types.js';
-import { layoutFrame } from '../layout/frame.js';
+import { plotFor } from '../layout/compose.js';
 import type { LayoutContext } from '../layout/kit-types.js';
-import { plotBox } from '../layout/plot-box.js';
 import { capText } from '../layout/text.js';
 import { idMaker } from '../scene/ids.js';
 import type { Planned, PlanInput } from './types.js';
@@ -66,11 +65,10 @@ function chooseOrientation(input: PlanInput, key: Field, value: Field | undefine
   const ctx: LayoutContext = { brief, style, measure, id: idMaker() };
   const labels = distinctLabels(key);
   const [lo, hi] = valueExtent(value, key.column.values.length);
-  const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: [] }, style, brief.size, measure);
-  const { plot } = plotBox(frame.body, {
+  const { plot } = plotFor({
     left: { kind: 'linear', name: 'value', field: value?.name ?? 'count', title: '', extent: [Math.min(0, lo), Math.max(0, hi)], format: value?.format },
     bottom: { kind: 'band', name: 'key', field: key.name, title: '', domain: labels }, first: 'left',
-  }, ctx);
+  }, [], ctx).box;
   const { tick } = style.text;
   const widest = max(labels, (l) => measure.width(capText(l), tick.size, tick.weight)) ?? 0;
   const bandNeeded = widest + 2 * style.spacing.tickGap;

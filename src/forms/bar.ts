@@ -1,9 +1,9 @@
 import { max, min } from 'd3-array';
 import { deriveBars, type BarDatum, type CapacityFor, type DerivedBars } from '../derive/bars.js';
-import { layoutFrame } from '../layout/frame.js';
+import { plotFor } from '../layout/compose.js';
 import type { CartesianDomains, LabelRoom, LayoutContext, PlotArea, ScaleProbe } from '../layout/kit-types.js';
 import { valueFormatter } from '../layout/number-format.js';
-import { MAX_LABEL_SHARE, plotBox } from '../layout/plot-box.js';
+import { MAX_LABEL_SHARE } from '../layout/plot-box.js';
 import type { Scale } from '../layout/scales.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
@@ -39,9 +39,7 @@ function capacityFor(plan: BarPlan, ctx: LayoutContext): CapacityFor {
   const valueTitle = barValueTitle(plan);
   return (fold, bars) => {
     const notes = foldNote(plan, fold, valueTitle, valueFormatter([fold?.total ?? 0, ...(fold?.range ?? [])], plan.value?.format));
-    const { brief, style, measure } = ctx;
-    const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes }, style, brief.size, measure);
-    const { plot } = plotBox(frame.body, domainsOf({ query: plan, bars, valueName: plan.value?.name ?? 'count' }, plan.orientation === 'vertical'), ctx);
+    const { plot } = plotFor(domainsOf({ query: plan, bars, valueName: plan.value?.name ?? 'count' }, plan.orientation === 'vertical'), notes, ctx).box;
     return Math.floor((plan.orientation === 'vertical' ? plot.width : plot.height) / MIN_BAND_PX);
   };
 }

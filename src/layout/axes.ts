@@ -39,8 +39,8 @@ function axisTitleNode(side: 'left' | 'bottom', channel: Channel, plot: Box, bod
   return textNode(measure, { ...base, x: plot.x + plot.width / 2, top: bottom + tickGap + lineHeight(style.text.tick, factor) + tickGap, anchor: 'middle' });
 }
 
-/** A linear axis: a gridline across the plot at each tick (zero gets the zero line instead), and each shown tick's label. */
-export function drawLinearAxis(side: 'left' | 'bottom', scale: LinearScale, channel: LinearChannel, plot: Box, body: Box, ctx: LayoutContext): DrawnAxis {
+/** A linear axis: a gridline across the plot at each tick (but zero, where a zero line is drawn instead), and each shown tick's label. */
+export function drawLinearAxis(side: 'left' | 'bottom', scale: LinearScale, channel: LinearChannel, plot: Box, body: Box, ctx: LayoutContext, zeroLine = false): DrawnAxis {
   const { style, measure, id } = ctx;
   const { tick } = style.text;
   const gap = style.spacing.tickGap;
@@ -52,7 +52,7 @@ export function drawLinearAxis(side: 'left' | 'bottom', scale: LinearScale, chan
   scale.ticks.forEach((t, i) => {
     const p = scale.map(t);
     const text = scale.labels[i]!;
-    if (t !== 0) grid.push(vertical ? rule(id('gridline', text), 'gridline', a, p, b, p, style.lines.grid, style.lines.gridWidth) : rule(id('gridline', text), 'gridline', p, a, p, b, style.lines.grid, style.lines.gridWidth));
+    if (t !== 0 || !zeroLine) grid.push(vertical ? rule(id('gridline', text), 'gridline', a, p, b, p, style.lines.grid, style.lines.gridWidth) : rule(id('gridline', text), 'gridline', p, a, p, b, style.lines.grid, style.lines.gridWidth));
     const place = vertical ? { x: a - gap, top: p - tickBox / 2, anchor: 'end' as const } : { x: p, top: b + gap, anchor: 'middle' as const };
     if (scale.shown[i]) labels.push(textNode(measure, { id: id(`tick-${channel.name}`, text), role: 'tick', text, style: tick, ...place }));
   });

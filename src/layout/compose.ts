@@ -3,7 +3,7 @@ import { diagnostic } from '../diagnostics/diagnostic.js';
 import { idMaker } from '../scene/ids.js';
 import type { Box, Scene, SceneNode, TextNode } from '../scene/types.js';
 import { nodesOf } from '../scene/walk.js';
-import { valueTicks } from './axis.js';
+import { valueTicks, type ValueTicks } from './axis.js';
 import { drawBottomBandAxis, drawLeftBandAxis, drawLinearAxis, drawTimeAxis, rule, type DrawnAxis } from './axes.js';
 import { checkScene } from './checks.js';
 import { layoutFrame } from './frame.js';
@@ -59,29 +59,50 @@ function bottomTime(channel: TimeChannel, plot: Box, ctx: LayoutContext): TimeSc
 
 interface FittedScales { x: Scale; y: Scale; room: LabelRoom }
 
-/** Builds both scales from the forms' domains over the plot box, taking the room the form's labels need. */
+/** Both scales over the plot box, with the given room taken for the form's labels. */
+function scalesWith(domains: CartesianDomains, box: PlotBox, bottomProbe: ValueTicks | undefined, bottomBand: BandScale | undefined, room: LabelRoom, side: 'left' | 'bottom' | undefined, ctx: LayoutContext): FittedScales {
+  const { plot, left } = box;
+  const leftBand: BandScale | undefined = left.kind === 'band' ? left.band : undefined;
+  const y = domains.left.kind === 'linear' ? leftLinear(domains.left, plot, side === 'left' ? room : NO_ROOM, ctx)
+    : domains.left.kind === 'time' ? timeScale(domains.left.extent, [plot.y + plot.height, plot.y], tickCount(plot.height, 'vertical')) : leftBand!;
+  const x = domains.bottom.kind === 'linear' ? bottomLinear(domains.bottom, plot, bottomProbe!.labels, side === 'bottom' ? room : NO_ROOM, ctx)
+    : domains.bottom.kind === 'time' ? bottomTime(domains.bottom, plot, ctx) : bottomBand!;
+  return { x, y, room };
+}
+
+/** Whether a room measured on the drawn scale asks for nothing the scale was not already given. */
+const holds = (given: LabelRoom, again: LabelRoom) => again.show === given.show && again.low <= given.low + 1e-9 && again.high <= given.high + 1e-9;
+
+/**
+ * Builds both scales from the forms' domains over the plot box, taking the room the form's labels
+ * need. The room is measured on a first look at the scale, then again on the scale drawn (whose
+ * ticks, and so domain, may differ), and widened until it holds, so a label never lands beyond
+ * the plot on a scale it was not measured against.
+ */
 function fitScales<D>(form: CartesianForm<D>, derived: D, domains: CartesianDomains, box: PlotBox, ctx: LayoutContext): FittedScales {
   const { plot, left } = box;
-  const padding = ctx.style.spacing.bandPadding;
-  const bottomBand = domains.bottom.kind === 'band' ? bandScale(domains.bottom.domain, [plot.x, plot.x + plot.width], padding) : undefined;
+  const bottomBand = domains.bottom.kind === 'band' ? bandScale(domains.bottom.domain, [plot.x, plot.x + plot.width], ctx.style.spacing.bandPadding) : undefined;
   const leftBand: BandScale | undefined = left.kind === 'band' ? left.band : undefined;
-  // A first look at the linear scale over the whole plot, for the form to measure its labels against.
   const bottomProbe = domains.bottom.kind === 'linear' ? valueTicks(domains.bottom.extent[0], domains.bottom.extent[1], plot.width, 'horizontal', ctx.style.text.tick, ctx.measure, domains.bottom.format) : undefined;
   const probe: ScaleProbe | undefined = left.kind === 'linear'
     ? { plot, side: 'left', band: bottomBand, linear: linearScale(left.probe, [plot.y + plot.height, plot.y]) }
     : bottomProbe ? { plot, side: 'bottom', band: leftBand, linear: linearScale(bottomProbe, [plot.x, plot.x + plot.width]) } : undefined;
-  const room = probe && form.room ? form.room(derived, probe, ctx) : NO_ROOM;
-  const y = domains.left.kind === 'linear' ? leftLinear(domains.left, plot, probe?.side === 'left' ? room : NO_ROOM, ctx)
-    : domains.left.kind === 'time' ? timeScale(domains.left.extent, [plot.y + plot.height, plot.y], tickCount(plot.height, 'vertical')) : leftBand!;
-  const x = domains.bottom.kind === 'linear' ? bottomLinear(domains.bottom, plot, bottomProbe!.labels, probe?.side === 'bottom' ? room : NO_ROOM, ctx)
-    : domains.bottom.kind === 'time' ? bottomTime(domains.bottom, plot, ctx) : bottomBand!;
-  return { x, y, room };
+  if (!probe || !form.room) return scalesWith(domains, box, bottomProbe, bottomBand, NO_ROOM, undefined, ctx);
+  let room = form.room(derived, probe, ctx);
+  for (let i = 0; ; i++) {
+    const scales = scalesWith(domains, box, bottomProbe, bottomBand, room, probe.side, ctx);
+    const drawn = probe.side === 'left' ? scales.y : scales.x;
+    if (i === 3 || drawn.kind !== 'linear') return scales;
+    const again = form.room(derived, { ...probe, linear: drawn }, ctx);
+    if (holds(room, again)) return scales;
+    room = { show: room.show && again.show, low: Math.max(room.low, again.low), high: Math.max(room.high, again.high) };
+  }
 }
 
 function drawAxis(side: 'left' | 'bottom', domains: CartesianDomains, scales: FittedScales, box: PlotBox, body: Box, ctx: LayoutContext): DrawnAxis {
   const channel = domains[side];
   const scale = side === 'left' ? scales.y : scales.x;
-  if (channel.kind === 'linear' && scale.kind === 'linear') return drawLinearAxis(side, scale, channel, box.plot, body, ctx);
+  if (channel.kind === 'linear' && scale.kind === 'linear') return drawLinearAxis(side, scale, channel, box.plot, body, ctx, domains.zeroLine === side);
   if (channel.kind === 'time' && scale.kind === 'time') return drawTimeAxis(side, scale, channel, box.plot, body, ctx);
   if (channel.kind === 'band' && side === 'bottom' && scale.kind === 'band') return drawBottomBandAxis(scale, channel, box.plot, body, ctx);
   if (channel.kind === 'band' && box.left.kind === 'band') return drawLeftBandAxis(box.left, channel, box.plot, body, ctx);
@@ -124,16 +145,53 @@ function placeFormLabels(labels: readonly TextNode[], fixed: readonly SceneNode[
   return { kept: labels.filter((l) => !out.has(l.id)), dropped: labels.filter((l) => out.has(l.id)) };
 }
 
+/** The frame, the legend and the plot box a chart of these domains and notes gets. */
+export interface PlotLayout {
+  frame: ReturnType<typeof layoutFrame>;
+  /** The body left for plot and axes once the legend has its place. */
+  body: Box;
+  legend?: LegendLayout;
+  box: PlotBox;
+}
+
+/**
+ * The frame (title, subtitle, notes, source), the legend and the plot box for a form's domains:
+ * the one sequence both planning (how many bars fit, which orientation) and drawing go through,
+ * so what is planned is what is drawn.
+ */
+export function plotFor(domains: CartesianDomains, notes: string[], ctx: LayoutContext, minLeftWidth = 0): PlotLayout {
+  const { brief, style, measure } = ctx;
+  const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes }, style, brief.size, measure);
+  const { body, legend } = placeLegend(domains.legend, frame.body, ctx);
+  return { frame, body, ...(legend ? { legend } : {}), box: plotBox(body, domains, ctx, minLeftWidth) };
+}
+
+/** Widest label a left linear axis draws, when wider than the column its plot box left for it. */
+function widerLeftLabels(scales: FittedScales, placed: PlotLayout, ctx: LayoutContext): number | undefined {
+  if (scales.y.kind !== 'linear') return undefined;
+  const { tick } = ctx.style.text;
+  const y = scales.y;
+  const widest = Math.max(0, ...y.labels.filter((_, i) => y.shown[i]).map((l) => ctx.measure.width(l, tick.size, tick.weight)));
+  const column = placed.box.plot.x - placed.body.x - ctx.style.spacing.tickGap;
+  return widest > column + 1e-9 ? widest : undefined;
+}
+
 interface Composed { scene: Scene; diagnostics: Diagnostic[]; dropped: TextNode[] }
 
 function compose<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext, extraNotes: string[], drop: ReadonlySet<string> = new Set()): Composed {
   const { brief, style, measure } = ctx;
   const words = form.words(derived, ctx);
-  const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: [...words.notes, ...extraNotes] }, style, brief.size, measure);
   const domains = form.domains(derived, ctx);
-  const { body, legend } = placeLegend(domains.legend, frame.body, ctx);
-  const box = plotBox(body, domains, ctx);
-  const scales = fitScales(form, derived, domains, box, ctx);
+  const notes = [...words.notes, ...extraNotes];
+  let placed = plotFor(domains, notes, ctx);
+  let scales = fitScales(form, derived, domains, placed.box, ctx);
+  // The ticks drawn can be wider than those the column was measured with: widen it, once.
+  const wider = widerLeftLabels(scales, placed, ctx);
+  if (wider !== undefined) {
+    placed = plotFor(domains, notes, ctx, wider);
+    scales = fitScales(form, derived, domains, placed.box, ctx);
+  }
+  const { frame, body, legend, box } = placed;
   const sides = domains.first === 'left' ? (['left', 'bottom'] as const) : (['bottom', 'left'] as const);
   const axes = sides.map((side) => drawAxis(side, domains, scales, box, body, ctx));
   const drawn = form.layout(derived, { plot: box.plot, x: scales.x, y: scales.y, room: scales.room }, ctx);
@@ -169,7 +227,8 @@ function compose<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext, extr
  */
 export function layoutCartesian<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext): { scene: Scene; diagnostics: Diagnostic[] } {
   const first = compose(form, derived, ctx, []);
-  if (first.dropped.length === 0) return first;
+  // A frame too small for its words says so; a note about labels would only crowd it more.
+  if (first.dropped.length === 0 || first.diagnostics.some((d) => d.code === 'layout.frame-too-small')) return first;
   // Drawn again with the note, which takes room from the plot; ids start afresh (the same ids in
   // the same order), and the labels left out the first time stay out, so the note stays true.
   const n = first.dropped.length;

@@ -49,10 +49,12 @@ function fitBandLabels(channel: BandChannel, band: BandScale, body: Box, ctx: La
 
 /**
  * The plot box of a chart with a left and a bottom axis: the body less the room the axes need.
- * The only place the plot box is computed; planning (how many bars fit) and drawing both call it.
+ * The only place the plot box is computed; planning (how many bars fit) and drawing both call it
+ * (through `plotFor` in compose.ts). `minLeftWidth` widens the left label column when the ticks
+ * finally drawn need more than the first measure.
  * The left axis's title sits above the plot, the bottom axis's title below its tick labels.
  */
-export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext): PlotBox {
+export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext, minLeftWidth = 0): PlotBox {
   const { style, measure } = ctx;
   const { tick, axisTitle } = style.text;
   const { tickGap, lineHeight: factor } = style.spacing;
@@ -78,7 +80,7 @@ export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext
     left = { kind: 'band', ...fitted };
     leftWidth = max(fitted.lines.flat(), (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
   }
-  const x = body.x + leftWidth + tickGap;
+  const x = body.x + Math.max(leftWidth, minLeftWidth) + tickGap;
   const right = body.x + body.width;
   return { plot: { x, y: top, width: right - x, height: bottom - top }, left };
 }

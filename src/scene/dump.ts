@@ -53,8 +53,9 @@ function roundBox(b: Box): Box {
 function paintOf(node: { stroke?: string; strokeWidth?: number; dash?: number[]; opacity?: number }): Partial<DumpMark> {
   return {
     ...(node.stroke ? { stroke: node.stroke, strokeWidth: node.strokeWidth ?? 1 } : {}),
-    ...(node.dash?.length ? { dash: node.dash } : {}),
-    ...(node.opacity !== undefined ? { opacity: node.opacity } : {}),
+    // As the SVG writer draws them: a dash only on a stroke, an opacity only below 1.
+    ...(node.stroke && node.dash?.length ? { dash: node.dash } : {}),
+    ...(node.opacity !== undefined && node.opacity < 1 ? { opacity: node.opacity } : {}),
   };
 }
 

@@ -11,7 +11,7 @@ export interface TextStyle {
 /** A style preset: everything about the look that is not data. Loaded from templates/styles. */
 export interface Style {
   name: string;
-  description: string;
+  description?: string;
   background: string;
   font: { family: string; regular: string; semibold: string };
   text: Record<'title' | 'subtitle' | 'source' | 'tick' | 'axisTitle' | 'label' | 'note', TextStyle>;

@@ -49,6 +49,14 @@ describe('hard rules are values checked against a form\'s traits', () => {
     expect(r.problems).toMatchObject([{ code: 'choice.too-many-colours', field: 'g' }]);
   });
 
+  it('the colour limit is the style\'s own: a palette of 3 colours refuses a fourth level', async () => {
+    const rows = Array.from({ length: 4 }, (_, i) => ({ k: 'a', g: `group ${i}`, n: i }));
+    const { brief, fields } = await fieldsOf({ rows, keys: ['k', 'g'], values: 'n' });
+    const traits = { ...NONE, coloursCategories: true };
+    expect(applyHardRules({ traits, form: 'grouped bars', brief, fields, maxColours: 3 }, false).problems).toMatchObject([{ code: 'choice.too-many-colours', expected: 'at most 3' }]);
+    expect(applyHardRules({ traits, form: 'grouped bars', brief, fields }, false).problems).toEqual([]);
+  });
+
   it('a form that gives each value its own axis may show several values; others may not', async () => {
     const { brief, fields } = await fieldsOf({ rows: [{ k: 'a', x: 1, y: 2 }], keys: 'k', values: ['x', 'y'] });
     expect(applyHardRules({ traits: { ...NONE, axisPerValue: true }, form: 'parallel', brief, fields }, false).problems).toEqual([]);

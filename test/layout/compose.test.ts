@@ -53,6 +53,14 @@ describe('the composer with a time axis', () => {
     expect(time.domain).toEqual([points[0]!.t, points[points.length - 1]!.t]);
   });
 
+  // Guards a review finding: the gridline at 0 was dropped even where no zero line replaces it.
+  it('draws a gridline at every value tick, zero included, when the form draws no zero line', () => {
+    const value = dump.axes.find((a) => a.scale === 'linear')!;
+    expect((value.ticks as number[]).includes(0)).toBe(true);
+    const horizontal = dump.marks.filter((m) => m.role === 'gridline' && /^M[\d.]+ ([\d.]+)L[\d.]+ \1$/.test(m.d!));
+    expect(horizontal.length).toBe(value.ticks.length);
+  });
+
   it('keeps every text on the canvas and apart, with no diagnostic', () => {
     expect(diagnostics).toEqual([]);
     expect(dump.texts.filter((t) => t.role === 'tick').length).toBeGreaterThan(2);
