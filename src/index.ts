@@ -16,6 +16,7 @@ export { choose } from './choose/choose.js';
 export { deriveBars } from './derive/bars.js';
 export { FORMS } from './forms/registry.js';
 export { layoutCartesian } from './layout/compose.js';
+export { layoutChart } from './layout/chart.js';
 export { writeSvg } from './svg/write.js';
 export { rasterize } from './raster/rasterize.js';
 export { dumpScene } from './scene/dump.js';

@@ -6,7 +6,7 @@ describe('library API', () => {
   it('exports exactly the documented names', () => {
     expect(Object.keys(api).sort()).toEqual([
       'BRIEF_SCHEMA', 'CATALOGUE', 'FORMS', 'RenderError', 'checkBriefValue', 'choose', 'createNodeEnv', 'deriveBars', 'dumpScene',
-      'formatDiagnostic', 'inferFields', 'layoutCartesian', 'loadInputs', 'outlineSvg', 'rasterize', 'readBrief', 'readTable', 'render',
+      'formatDiagnostic', 'inferFields', 'layoutCartesian', 'layoutChart', 'loadInputs', 'outlineSvg', 'rasterize', 'readBrief', 'readTable', 'render',
       'renderBrief', 'renderInputs', 'resolveBrief', 'runCli', 'writeSvg',
     ]);
   });

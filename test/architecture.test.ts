@@ -60,7 +60,7 @@ describe('architecture', () => {
 
   it('the scanner finds imports, type and dynamic ones included (a check that cannot fail is no check)', () => {
     expect(importsOf(join(SRC, 'pipeline', 'render.ts'))).toContain('forms/registry');
-    expect(importsOf(join(SRC, 'forms', 'types.ts'))).toContain('layout/compose');
+    expect(importsOf(join(SRC, 'forms', 'types.ts'))).toContain('layout/chart');
     expect(sources(SRC).flatMap(importsOf).length).toBeGreaterThan(200);
   });
 

@@ -3,6 +3,7 @@ import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome 
 import type { Fields } from '../fields/types.js';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Style } from '../style/types.js';
+import type { Table } from '../table/types.js';
 import { checkBriefRules, checkValueUnit, SHAPE_CHECKS } from './checks.js';
 import { applyHardRules } from './hard-rules.js';
 import { matchRule } from './rules.js';
@@ -23,7 +24,7 @@ export interface ChooseContext {
  * with each decision tied to the rule that made it: the rule row that chose the form, the hard
  * rules its traits bind it to, and the form's own planning decisions.
  */
-export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext): Outcome<Choice> {
+export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext, table: Table): Outcome<Choice> {
   const early = checkBriefRules(brief, ctx.forms, ctx.lenient);
   if (hasErrors(early.problems)) return failure(early.problems);
   const problems: Diagnostic[] = [...early.problems.filter((p) => p.code !== 'choice.lenient-fallback'), ...(SHAPE_CHECKS[brief.intent]?.(fields, brief) ?? [])];
@@ -43,7 +44,7 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext)
   const rationale: Decision[] = [rule ? { decision: form.noun, rule: `${rule.id}: ${rule.why}` } : { decision: form.noun, rule: 'the brief pins `form:`' }];
   if (brief.form) rationale.push({ decision: `form pinned to ${brief.form}`, rule: 'the brief pins `form:`; the hard rules still apply' });
   rationale.push(...hard.decisions);
-  const planned = form.plan({ fields, brief, style: ctx.style, measure: ctx.measure, lenient: ctx.lenient });
+  const planned = form.plan({ fields, table, brief, style: ctx.style, measure: ctx.measure, lenient: ctx.lenient });
   problems.push(...planned.diagnostics);
   if (!planned.ok || hasErrors(problems)) return failure(problems);
   rationale.push(...planned.value.decisions);

@@ -3,6 +3,7 @@ import type { Outcome } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Style } from '../style/types.js';
+import type { Table } from '../table/types.js';
 
 /** One choice made for the chart and the rule that made it. */
 export interface Decision {
@@ -30,6 +31,8 @@ export interface FormTraits {
 /** What a form's plan may look at. */
 export interface PlanInput {
   fields: Fields;
+  /** The table, so a plan can measure what will be drawn (e.g. the combined values), not estimate it. */
+  table: Table;
   brief: ResolvedBrief;
   style: Style;
   measure: TextMeasurer;

@@ -2,7 +2,8 @@ import { extent, max } from 'd3-array';
 import type { Aggregate } from '../brief/types.js';
 import type { Decision } from '../choose/types.js';
 import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
-import { keyText } from '../fields/labels.js';
+import { AGGREGATORS } from '../derive/aggregate.js';
+import { groupRows } from '../derive/group.js';
 import { isOrdered, refOf, type Field, type FieldRef } from '../fields/types.js';
 import { plotFor } from '../layout/compose.js';
 import type { LayoutContext } from '../layout/kit-types.js';
@@ -21,19 +22,13 @@ export interface BarPlan {
   aggregate: Aggregate;
 }
 
-function distinctLabels(key: Field): string[] {
-  const seen = new Set<string>();
-  key.column.values.forEach((_, i) => { const t = keyText(key.column, i); if (t !== null) seen.add(t); });
-  return [...seen];
-}
-
-/** The extent the value axis would span, from the raw values (before rows are combined): an estimate for planning. */
-function valueExtent(value: Field | undefined, rows: number): [number, number] {
-  if (!value) return [0, rows];
-  const nums = value.column.values.filter((v): v is number => typeof v === 'number');
-  // d3-array's extent loops; Math.min(...nums) overflows the stack beyond about 120,000 rows.
-  const [lo, hi] = extent(nums);
-  return lo === undefined || hi === undefined ? [0, 1] : [lo, hi];
+/** The bars' labels and the value extent they span, combined as they will be drawn. */
+function barsOf(input: PlanInput, key: Field, value: Field | undefined): { labels: string[]; extent: [number, number] } {
+  const { groups } = groupRows(input.table, { keys: [refOf(key)], value: value && refOf(value) });
+  const combine = AGGREGATORS[input.brief.aggregate].combine;
+  // d3-array's extent loops; Math.min(...values) overflows the stack beyond about 120,000 keys.
+  const [lo, hi] = extent(groups, (g) => combine(g.values));
+  return { labels: groups.map((g) => g.labels[0]!), extent: lo === undefined || hi === undefined ? [0, 1] : [lo, hi] };
 }
 
 function chooseOrder(input: PlanInput, key: Field, problems: Diagnostic[], decisions: Decision[]): BarPlan['order'] {
@@ -63,8 +58,7 @@ function chooseOrder(input: PlanInput, key: Field, problems: Diagnostic[], decis
 function chooseOrientation(input: PlanInput, key: Field, value: Field | undefined): { vertical: boolean; decision: Decision } {
   const { brief, style, measure } = input;
   const ctx: LayoutContext = { brief, style, measure, id: idMaker() };
-  const labels = distinctLabels(key);
-  const [lo, hi] = valueExtent(value, key.column.values.length);
+  const { labels, extent: [lo, hi] } = barsOf(input, key, value);
   const { plot } = plotFor({
     left: { kind: 'linear', name: 'value', field: value?.name ?? 'count', title: '', extent: [Math.min(0, lo), Math.max(0, hi)], format: value?.format },
     bottom: { kind: 'band', name: 'key', field: key.name, title: '', domain: labels }, first: 'left',

@@ -4,7 +4,7 @@ import { plotFor } from '../layout/compose.js';
 import type { CartesianDomains, LabelRoom, LayoutContext, PlotArea, ScaleProbe } from '../layout/kit-types.js';
 import { valueFormatter } from '../layout/number-format.js';
 import { MAX_LABEL_SHARE } from '../layout/plot-box.js';
-import type { Scale } from '../layout/scales.js';
+import { asBand, asLinear } from '../layout/scales.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
 import { barDescription, barValueTitle, foldNote, foldOf } from './bar-text.js';
@@ -76,7 +76,7 @@ function barDatum(derived: DerivedBars<BarPlan>, bar: BarDatum): Datum {
 /** One bar from the zero of the value scale to its value, across its band. */
 function barRect(derived: DerivedBars<BarPlan>, bar: BarDatum, area: PlotArea, ctx: LayoutContext): SceneNode {
   const vertical = derived.query.orientation === 'vertical';
-  const [band, value] = (vertical ? [area.x, area.y] : [area.y, area.x]) as [Extract<Scale, { kind: 'band' }>, Extract<Scale, { kind: 'linear' }>];
+  const [band, value] = vertical ? [asBand(area.x), asLinear(area.y)] : [asBand(area.y), asLinear(area.x)];
   const [v0, v1] = [value.map(0), value.map(bar.value)];
   const [b0, thickness] = [band.start(bar.label), band.bandwidth];
   const geometry = vertical
@@ -93,7 +93,7 @@ function valueLabel(derived: DerivedBars<BarPlan>, bar: BarDatum, text: string, 
   const { label } = style.text;
   const gap = style.spacing.labelGap;
   const vertical = derived.query.orientation === 'vertical';
-  const [band, value] = (vertical ? [area.x, area.y] : [area.y, area.x]) as [Extract<Scale, { kind: 'band' }>, Extract<Scale, { kind: 'linear' }>];
+  const [band, value] = vertical ? [asBand(area.x), asLinear(area.y)] : [asBand(area.y), asLinear(area.x)];
   const end = value.map(bar.value);
   const middle = band.center(bar.label);
   const box = textBoxHeight(measure, label);

@@ -1,17 +1,12 @@
 import type { FormName } from '../brief/types.js';
 import type { FormTraits, Planned, PlanInput } from '../choose/types.js';
 import type { Outcome } from '../diagnostics/diagnostic.js';
-import type { CartesianForm } from '../layout/compose.js';
+import type { ChartForm } from '../layout/chart.js';
 import type { LayoutContext } from '../layout/kit-types.js';
 import type { Table } from '../table/types.js';
 
-/**
- * A chart form as a value: its traits, how it plans (from fields and brief), derives (the numbers
- * it draws), reports the domains of its channels and the room its labels need, draws its marks
- * into the plot box it is given, and says what it shows. It knows nothing of files, the CLI, PNG,
- * the frame, the axes or the panels: the composer (src/layout/compose.ts) does those.
- */
-export interface FormDef<Plan, Derived> extends CartesianForm<Derived> {
+/** What every form has: its name, traits, plan and derivation. */
+export interface FormCore<Plan, Derived> {
   name: FormName;
   /** The decision's words when the rules choose it, e.g. "bar chart". */
   noun: string;
@@ -19,6 +14,16 @@ export interface FormDef<Plan, Derived> extends CartesianForm<Derived> {
   plan(input: PlanInput): Outcome<Planned<Plan>>;
   derive(table: Table, plan: Plan, ctx: LayoutContext): Outcome<Derived>;
 }
+
+/**
+ * A chart form as a value: its traits, how it plans (from fields and brief), derives (the numbers
+ * it draws), and how it is laid out, in one of two ways: on a left and a bottom axis (it reports
+ * the domains of its channels and the room its labels need, and draws its marks into the plot box
+ * it is given; the composer draws frame, legend and axes), or in the body the frame and legend
+ * leave (radial and multi-axis forms, with the layout kit's pieces). Either way it says what it
+ * shows (`words`), and knows nothing of files, the CLI or PNG.
+ */
+export type FormDef<Plan, Derived> = FormCore<Plan, Derived> & ChartForm<Derived>;
 
 /** A form of any plan and derived data, as the registry holds it. */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any

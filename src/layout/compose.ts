@@ -122,7 +122,7 @@ const LEGEND_TOP_SHARE = 0.25;
 const LEGEND_RIGHT_SHARE = 0.3;
 
 /** Lays out a form's legend and the body it leaves for the plot and axes. */
-function placeLegend(spec: LegendSpec | undefined, body: Box, ctx: LayoutContext): { body: Box; legend?: LegendLayout } {
+export function placeLegend(spec: LegendSpec | undefined, body: Box, ctx: LayoutContext): { body: Box; legend?: LegendLayout } {
   if (!spec) return { body };
   const { style, measure } = ctx;
   const gap = style.spacing.blockGap;
@@ -138,7 +138,7 @@ function placeLegend(spec: LegendSpec | undefined, body: Box, ctx: LayoutContext
  * The form's labels that overlap no other text, taken in the form's order (its priority); the
  * rest are left out, never drawn on top of another (common practice for chart labels).
  */
-function placeFormLabels(labels: readonly TextNode[], fixed: readonly SceneNode[], size: { width: number; height: number }, drop: ReadonlySet<string>): { kept: TextNode[]; dropped: TextNode[] } {
+export function placeFormLabels(labels: readonly TextNode[], fixed: readonly SceneNode[], size: { width: number; height: number }, drop: ReadonlySet<string> = new Set()): { kept: TextNode[]; dropped: TextNode[] } {
   const obstacles = fixed.flatMap((n) => (n.kind === 'text' ? [n.box] : []));
   const { unplaced } = placeLabels(labels.filter((l) => !drop.has(l.id)).map((l) => ({ id: l.id, boxes: [l.box] })), obstacles, { x: 0, y: 0, ...size });
   const out = new Set([...unplaced, ...drop]);
@@ -176,7 +176,8 @@ function widerLeftLabels(scales: FittedScales, placed: PlotLayout, ctx: LayoutCo
   return widest > column + 1e-9 ? widest : undefined;
 }
 
-interface Composed { scene: Scene; diagnostics: Diagnostic[]; dropped: TextNode[] }
+/** A composed chart and the labels it left out. */
+export interface Composed { scene: Scene; diagnostics: Diagnostic[]; dropped: TextNode[] }
 
 function compose<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext, extraNotes: string[], drop: ReadonlySet<string> = new Set()): Composed {
   const { brief, style, measure } = ctx;
@@ -226,14 +227,24 @@ function compose<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext, extr
  * and the chart says so in a note.
  */
 export function layoutCartesian<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext): { scene: Scene; diagnostics: Diagnostic[] } {
-  const first = compose(form, derived, ctx, []);
+  return withUnplacedNote((c, notes, drop) => compose(form, derived, c, notes, drop), ctx);
+}
+
+/** One composition of a chart: with extra notes, leaving out the labels of `drop` (by id). */
+export type Composition = (ctx: LayoutContext, extraNotes: string[], drop: ReadonlySet<string>) => Composed;
+
+/**
+ * Runs a composition, and when it had to leave labels out, runs it again with a note that says
+ * so (the note takes room from the plot). The second run starts its ids afresh (the same ids in
+ * the same order) and keeps the labels left out the first time out, so the note stays true.
+ */
+export function withUnplacedNote(composition: Composition, ctx: LayoutContext): { scene: Scene; diagnostics: Diagnostic[] } {
+  const first = composition(ctx, [], new Set());
   // A frame too small for its words says so; a note about labels would only crowd it more.
   if (first.dropped.length === 0 || first.diagnostics.some((d) => d.code === 'layout.frame-too-small')) return first;
-  // Drawn again with the note, which takes room from the plot; ids start afresh (the same ids in
-  // the same order), and the labels left out the first time stay out, so the note stays true.
   const n = first.dropped.length;
   const note = `${n} label${n === 1 ? ' is' : 's are'} left out where ${n === 1 ? 'it' : 'they'} would overlap other text (${first.dropped.slice(0, 3).map((l) => l.text).join(', ')}${n > 3 ? ', …' : ''}).`;
-  const second = compose(form, derived, { ...ctx, id: idMaker() }, [note], new Set(first.dropped.map((l) => l.id)));
+  const second = composition({ ...ctx, id: idMaker() }, [note], new Set(first.dropped.map((l) => l.id)));
   const m = second.dropped.length;
   const unplaced = diagnostic('layout.labels-unplaced', `${m} label${m === 1 ? '' : 's'} would overlap other text and ${m === 1 ? 'is' : 'are'} left out; the chart's note names ${n === m ? 'them' : `${n} of them`}`, {
     found: first.dropped[0]!.text, hint: 'make the chart larger with `size:`, or use fewer or shorter labels',

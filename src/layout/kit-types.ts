@@ -59,6 +59,8 @@ export interface CartesianDomains {
   zeroLine?: 'left' | 'bottom';
   /** A legend the form's colours, shapes or sizes need (the composer places it above or beside the plot). */
   legend?: LegendSpec;
+  /** Room to keep right of the plot, in px, for labels at the marks' ends (e.g. a line's name at its last point). */
+  rightGutter?: number;
 }
 
 /**

@@ -81,6 +81,6 @@ export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext
     leftWidth = max(fitted.lines.flat(), (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
   }
   const x = body.x + Math.max(leftWidth, minLeftWidth) + tickGap;
-  const right = body.x + body.width;
+  const right = body.x + body.width - Math.max(0, domains.rightGutter ?? 0);
   return { plot: { x, y: top, width: right - x, height: bottom - top }, left };
 }

@@ -56,3 +56,15 @@ export function bandScale(domain: readonly string[], range: [number, number], pa
     start: (c) => band(c)!, center: (c) => band(c)! + width / 2,
   };
 }
+
+/** The scale as a band scale; a form asking for the wrong kind is a defect in that form. */
+export function asBand(scale: Scale): BandScale {
+  if (scale.kind !== 'band') throw new Error(`expected a band scale, got ${scale.kind}`);
+  return scale;
+}
+
+/** The scale as a linear scale; a form asking for the wrong kind is a defect in that form. */
+export function asLinear(scale: Scale): LinearScale {
+  if (scale.kind !== 'linear') throw new Error(`expected a linear scale, got ${scale.kind}`);
+  return scale;
+}

@@ -8,7 +8,7 @@ import { diagnostic, hasErrors, inFile, type Diagnostic } from '../diagnostics/d
 import { inferFields } from '../fields/infer.js';
 import type { TextMeasurer } from '../font/measurer.js';
 import { FORMS, formNamed } from '../forms/registry.js';
-import { layoutCartesian } from '../layout/compose.js';
+import { layoutChart } from '../layout/chart.js';
 import type { LayoutContext } from '../layout/kit-types.js';
 import { idMaker } from '../scene/ids.js';
 import type { Scene } from '../scene/types.js';
@@ -134,7 +134,7 @@ export function renderInputs(inputs: RenderInputs, measure: TextMeasurer, opts: 
     all.push(...locate(checkBriefRules(brief, FORMS, lenient).problems));
     return { brief, rationale: [], diagnostics: all };
   }
-  const choice = choose(fields.value, brief, { style, measure, lenient, forms: FORMS });
+  const choice = choose(fields.value, brief, { style, measure, lenient, forms: FORMS }, table);
   all.push(...locate(choice.diagnostics));
   lap('choose');
   if (!choice.ok) return { brief, rationale: [], diagnostics: all };
@@ -145,7 +145,7 @@ export function renderInputs(inputs: RenderInputs, measure: TextMeasurer, opts: 
   all.push(...locate(derived.diagnostics));
   lap('derive');
   if (!derived.ok) return { brief, choice: choice.value, rationale, diagnostics: all };
-  const laid = layoutCartesian(form, derived.value, ctx);
+  const laid = layoutChart(form, derived.value, ctx);
   all.push(...locate(laid.diagnostics));
   lap('layout');
   return { brief, choice: choice.value, rationale, scene: laid.scene, diagnostics: all };

@@ -16,7 +16,7 @@ async function fieldsOf(brief: Record<string, unknown>) {
   if (!table.ok) throw new Error('table');
   const fields = inferFields(table.value, resolved);
   if (!fields.ok) throw new Error(JSON.stringify(fields.diagnostics));
-  return { brief: resolved, fields: fields.value };
+  return { brief: resolved, fields: fields.value, table: table.value };
 }
 
 describe('hard rules are values checked against a form\'s traits', () => {
@@ -70,10 +70,10 @@ describe('hard rules are values checked against a form\'s traits', () => {
 
 describe('the choice stage dispatches through the forms it is given', () => {
   it('with no form to draw it, a brief gets choice.no-rule rather than a crash', async () => {
-    const { brief, fields } = await fieldsOf({ rows: [{ pier: 'North', n: 1 }], keys: 'pier', values: 'n', fields: { n: { unit: 'u' } } });
+    const { brief, fields, table } = await fieldsOf({ rows: [{ pier: 'North', n: 1 }], keys: 'pier', values: 'n', fields: { n: { unit: 'u' } } });
     const style = env.style('report', undefined);
     if (!style.ok) throw new Error('the report style must load');
-    const r = choose(fields, brief, { style: style.value, measure: env.measure, lenient: false, forms: [] });
+    const r = choose(fields, brief, { style: style.value, measure: env.measure, lenient: false, forms: [] }, table);
     expect(r.ok).toBe(false);
     expect(codes(r)).toEqual(['choice.no-rule']);
   });

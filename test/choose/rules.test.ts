@@ -131,3 +131,15 @@ describe('rules for the compare intent', () => {
     expect(r.scene!.axes[0]!.title).toBe('Number of rows');
   });
 });
+
+describe('the rationale states what is drawn', () => {
+  // Guards a review finding: orientation was planned on the raw values (before rows were
+  // combined), so the band width the rationale stated was not the one drawn.
+  it('the band width in the orientation decision is the drawn band width', async () => {
+    const rows = Array.from({ length: 9 * 400 }, (_, i) => ({ k: `Hut ${i % 9}`, v: 9.5 }));
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v', size: { width: 692, height: 440 }, fields: { v: { unit: 'nights' } } }, rows);
+    const decision = r.rationale.find((d) => d.decision === 'vertical bars')!;
+    const stated = Number(/each band has (\d+) px/.exec(decision.rule)![1]);
+    expect(stated).toBe(Math.round(r.scene!.plot.width / 9));
+  });
+});

@@ -107,3 +107,13 @@ describe('the composer with a legend and form labels', () => {
     expect(diagnostics.map((d) => d.code)).toEqual(['layout.labels-unplaced']);
   });
 });
+
+describe('room right of the plot for labels at the marks\' ends', () => {
+  it('a form that asks for a gutter gets its plot that much narrower', () => {
+    const form = TIME_FORM;
+    const withGutter: CartesianForm<typeof points> = { ...form, domains: (d, c) => ({ ...form.domains(d, c), rightGutter: 120 }) };
+    const plain = layoutCartesian(form, points, context()).scene.plot;
+    const narrowed = layoutCartesian(withGutter, points, context()).scene.plot;
+    expect(plain.x + plain.width - (narrowed.x + narrowed.width)).toBeCloseTo(120, 6);
+  });
+});
