@@ -174,7 +174,13 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
     return { ...result, ok: !hasErrors(diagnostics) && result.svg !== undefined, diagnostics, ...(req.clock ? { timings: watch.timings } : {}) };
   };
   if (!loaded.inputs) return finish({ ...(loaded.brief ? { brief: loaded.brief } : {}), rationale: [], diagnostics: loaded.diagnostics });
-  const result = renderInputs(loaded.inputs, env.measure, { lenient: req.lenient }, watch.lap);
+  let result: Omit<RenderResult, 'ok' | 'timings'>;
+  try {
+    result = renderInputs(loaded.inputs, env.measure, { lenient: req.lenient }, watch.lap);
+  } catch (e) {
+    // Bad input never throws (it is a diagnostic); what does is a defect, reported as one, never a crash.
+    return finish({ brief: loaded.inputs.brief, rationale: [], diagnostics: [...loaded.diagnostics, diagnostic('render.internal', `chartwright failed unexpectedly while drawing: ${(e as Error).message}; this is a defect in chartwright`, { file: req.file, hint: 'please report it with the brief and data' })] });
+  }
   const diagnostics = [...loaded.diagnostics, ...result.diagnostics];
   if (!result.scene || hasErrors(strictly(diagnostics, req.strict))) return finish({ ...result, diagnostics });
   const svg = svgOf(result.scene, loaded.inputs.style.font.family, req.file);

@@ -114,6 +114,14 @@ describe('defects', () => {
     expect(r.svg).toBeUndefined();
     expect(r.diagnostics.map((d) => d.code)).toContain('render.internal');
   });
+
+  it('an exception inside the stages (a defect) becomes render.internal: renderBrief never throws', async () => {
+    const broken = { ...env, measure: { ...env.measure, ascent: () => { throw new Error('font table missing'); } } };
+    const r = await renderBrief({ brief: brief({}) }, broken);
+    expect(r.ok).toBe(false);
+    expect(r.diagnostics.map((d) => d.code)).toEqual(['render.internal']);
+    expect(r.diagnostics[0]!.message).toContain('font table missing');
+  });
 });
 
 describe('the diagnostic catalogue', () => {
