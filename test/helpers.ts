@@ -14,15 +14,20 @@ import type { TableEnv } from '../src/table/load.js';
 export const env: RenderEnv = createNodeEnv();
 export const root = packageRoot();
 
-/** A table env over in-memory files, for table-stage tests. */
-export function memoryFiles(files: Record<string, string>, stdin = ''): TableEnv {
+/**
+ * A table env over in-memory files, for table-stage tests. Text is stored as UTF-8; give bytes
+ * for other encodings. Like the Node env, it returns at most the bytes asked for.
+ */
+export function memoryFiles(files: Record<string, string | Uint8Array>, stdin: string | Uint8Array = '', maxDataBytes?: number): TableEnv {
+  const bytes = (v: string | Uint8Array) => (typeof v === 'string' ? new TextEncoder().encode(v) : v);
   return {
-    readText: async (p) => {
+    readBytes: async (p, limit) => {
       const key = Object.keys(files).find((k) => p === k || p.endsWith(`/${k}`));
       if (key === undefined) throw Object.assign(new Error(`ENOENT: ${p}`), { code: 'ENOENT' });
-      return files[key]!;
+      return bytes(files[key]!).subarray(0, limit);
     },
-    readStdin: async () => stdin,
+    readStdin: async (limit) => bytes(stdin).subarray(0, limit),
+    ...(maxDataBytes === undefined ? {} : { maxDataBytes }),
   };
 }
 

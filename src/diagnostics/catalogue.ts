@@ -33,6 +33,9 @@ export const CATALOGUE = {
   'table.nested-value': 'error',
   'table.mixed-column': 'warning',
   'table.type-mismatch': 'error',
+  'table.too-large': 'error',
+  'table.bad-encoding': 'error',
+  'table.ambiguous-decimal': 'error',
   // fields: roles and measurement types
   'fields.order-incomplete': 'error',
   'fields.order-duplicate': 'error',
