@@ -1,4 +1,5 @@
 import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import { checkFormats } from './format.js';
 import { parseBriefText, type ParsedBrief } from './parse.js';
 import { BRIEF_SCHEMA } from './schema.js';
 import type { DataSource, FieldHint, ResolvedBrief } from './types.js';
@@ -84,7 +85,7 @@ export function checkBriefValue(value: unknown, parsed?: ParsedBrief): Outcome<{
     })]);
   }
   const raw = value as Record<string, unknown>;
-  const problems = [...validateAgainstSchema(raw, BRIEF_SCHEMA), ...checkDataSource(raw)];
+  const problems = [...validateAgainstSchema(raw, BRIEF_SCHEMA), ...checkDataSource(raw), ...checkFormats(raw)];
   const diagnostics = withPositions(problems, located);
   if (hasErrors(diagnostics)) return failure(diagnostics);
   return success({ brief: resolveBrief(raw), parsed: located }, diagnostics);

@@ -18,6 +18,9 @@ export const CATALOGUE = {
   'brief.bad-style': 'error',
   'brief.low-contrast': 'warning',
   'brief.indistinct-colours': 'warning',
+  'brief.bad-alias': 'error',
+  'brief.bad-format': 'error',
+  'brief.too-many-problems': 'error',
   // table: reading and typing the data
   'table.not-found': 'error',
   'table.unreadable': 'error',
