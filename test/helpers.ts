@@ -31,6 +31,18 @@ export function memoryFiles(files: Record<string, string | Uint8Array>, stdin: s
   };
 }
 
+/** Text as UTF-16 bytes with a byte-order mark, little- or big-endian, as some spreadsheets export it. */
+export function utf16Bytes(text: string, bigEndian: boolean): Uint8Array {
+  const out = new Uint8Array(2 + text.length * 2);
+  out.set(bigEndian ? [0xfe, 0xff] : [0xff, 0xfe]);
+  for (let i = 0; i < text.length; i++) {
+    const unit = text.charCodeAt(i);
+    out[2 + 2 * i + (bigEndian ? 0 : 1)] = unit >> 8;
+    out[2 + 2 * i + (bigEndian ? 1 : 0)] = unit & 0xff;
+  }
+  return out;
+}
+
 /** Renders a brief object (YAML text or object) with inline rows through the whole pipeline. */
 export async function renderRows(brief: Record<string, unknown>, rows: Record<string, unknown>[], opts: { lenient?: boolean; strict?: boolean } = {}): Promise<RenderResult> {
   return renderBrief({ brief: { ...brief, rows }, ...opts }, env);

@@ -75,7 +75,13 @@ function unreadable(e: unknown, source: { path: string }, full: string): Outcome
 async function readSource(source: DataSource, briefFile: string | undefined, env: TableEnv): Promise<Outcome<{ text: string; origin: TableOrigin }>> {
   const limit = env.maxDataBytes ?? DEFAULT_MAX_DATA_BYTES;
   if (source.kind === 'stdin') {
-    const text = decodeRead(await env.readStdin(limit + 1), '<stdin>', limit);
+    let bytes: Uint8Array;
+    try {
+      bytes = await env.readStdin(limit + 1);
+    } catch (e) {
+      return unreadable(e, { path: '-' }, '<stdin>');
+    }
+    const text = decodeRead(bytes, '<stdin>', limit);
     return text.ok ? success({ text: text.value, origin: { file: '<stdin>', format: sniffFormat(text.value) } }) : failure(text.diagnostics);
   }
   if (source.kind !== 'file') return failure([]);

@@ -1,18 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { readTable } from '../../src/table/load.js';
 import { columnOf } from '../../src/table/types.js';
-import { memoryFiles } from '../helpers.js';
-
-function utf16(text: string, bigEndian: boolean): Uint8Array {
-  const out = new Uint8Array(2 + text.length * 2);
-  out.set(bigEndian ? [0xfe, 0xff] : [0xff, 0xfe]);
-  for (let i = 0; i < text.length; i++) {
-    const u = text.charCodeAt(i);
-    out[2 + 2 * i + (bigEndian ? 0 : 1)] = u >> 8;
-    out[2 + 2 * i + (bigEndian ? 1 : 0)] = u & 0xff;
-  }
-  return out;
-}
+import { memoryFiles, utf16Bytes } from '../helpers.js';
 
 async function read(name: string, bytes: Uint8Array | string) {
   return readTable({ kind: 'file', path: name }, {}, 'briefs/b.yaml', memoryFiles({ [name]: bytes }));
@@ -23,7 +12,7 @@ describe('encodings of data files', () => {
 
   for (const bigEndian of [false, true]) {
     it(`reads UTF-16 ${bigEndian ? 'big' : 'little'}-endian text by its byte-order mark (once misread as ragged rows)`, async () => {
-      const r = await read('t.csv', utf16(csv, bigEndian));
+      const r = await read('t.csv', utf16Bytes(csv, bigEndian));
       expect(r.diagnostics).toEqual([]);
       expect(r.ok && columnOf(r.value, 'pier')!.values).toEqual(['Nörth', '港口']);
       expect(r.ok && r.value.rowPositions).toEqual([2, 3]);
@@ -55,14 +44,14 @@ describe('encodings of data files', () => {
   });
 
   it('reports UTF-16 with a broken surrogate pair as an encoding error', async () => {
-    const bytes = utf16('k,v\na,1\n', false);
+    const bytes = utf16Bytes('k,v\na,1\n', false);
     const broken = new Uint8Array([...bytes, 0x00, 0xd8, 0x41, 0x00]); // a lone high surrogate, then "A"
     const r = await read('t.csv', broken);
     expect(r.diagnostics).toMatchObject([{ code: 'table.bad-encoding', line: 3 }]);
   });
 
   it('reads UTF-16 from stdin and still guesses its format', async () => {
-    const r = await readTable({ kind: 'stdin' }, {}, undefined, memoryFiles({}, utf16('a\tb\nx\t2\n', false)));
+    const r = await readTable({ kind: 'stdin' }, {}, undefined, memoryFiles({}, utf16Bytes('a\tb\nx\t2\n', false)));
     expect(r.ok && r.value.origin).toEqual({ file: '<stdin>', format: 'tsv' });
   });
 });

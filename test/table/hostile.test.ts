@@ -4,7 +4,8 @@ import { parseIsoDate } from '../../src/table/cells.js';
 import { readTable } from '../../src/table/load.js';
 import { recordStartLines } from '../../src/table/parse.js';
 import { columnOf } from '../../src/table/types.js';
-import { memoryFiles } from '../helpers.js';
+import { renderBrief } from '../../src/pipeline/render.js';
+import { codes, env, memoryFiles, renderRows } from '../helpers.js';
 
 async function readRows(rows: Record<string, unknown>[]) {
   return readTable({ kind: 'rows', rows }, {}, undefined, memoryFiles({}));
@@ -37,6 +38,24 @@ describe('non-finite numbers in key columns', () => {
     expect(k.text).toEqual([null, null, null, 'North']);
     expect(k.missing).toEqual([0, 1, 2]);
   });
+});
+
+describe('hostile keys through the whole pipeline', () => {
+  it('draws no bar named NaN or Infinity for YAML .nan and .inf keys, and warns that those rows have no key', async () => {
+    const r = await renderBrief({ brief: 'intent: compare\nkeys: k\nvalues: v\nfields: {v: {unit: m}}\nrows: [{k: .nan, v: 1}, {k: .inf, v: 2}, {k: North, v: 3}]\n' }, env);
+    expect(r.ok).toBe(true);
+    expect(r.diagnostics).toMatchObject([{ code: 'derive.missing-values', field: 'k', rows: [1, 2] }]);
+    expect(r.svg).not.toMatch(/NaN|Infinity/);
+  });
+
+  for (const name of ['constructor', 'toString', 'hasOwnProperty', '__proto__']) {
+    it(`renders bars keyed by a column named ${name}, present in only some rows (it once threw)`, async () => {
+      const rows = JSON.parse(`[{"${name}": "North", "v": 3}, {"v": 2}, {"${name}": "South", "v": 1}]`) as Record<string, unknown>[];
+      const r = await renderRows({ intent: 'compare', keys: name, values: 'v', fields: { v: { unit: 'm' } } }, rows);
+      expect(r.ok).toBe(true);
+      expect(codes(r)).toEqual(['derive.missing-values']);
+    });
+  }
 });
 
 describe('line numbers in CSV with stray quotes', () => {

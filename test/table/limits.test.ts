@@ -36,6 +36,12 @@ describe('size limits on data', () => {
     expect(asked).toEqual([65]);
   });
 
+  it('reports stdin that cannot be read as a coded error, not an exception', async () => {
+    const env: TableEnv = { readBytes: async () => new Uint8Array(), readStdin: async () => { throw Object.assign(new Error('resource temporarily unavailable'), { code: 'EAGAIN' }); } };
+    const r = await readTable({ kind: 'stdin' }, {}, undefined, env);
+    expect(r.diagnostics).toMatchObject([{ code: 'table.unreadable', path: '/data', found: '<stdin>' }]);
+  });
+
   it('asks for the default limit, 256 MiB, plus one byte when none is set', async () => {
     const asked: number[] = [];
     await readTable({ kind: 'file', path: 't.csv' }, {}, 'b.yaml', recording(memoryFiles({ 't.csv': 'k,v\na,1\n' }), asked));
