@@ -88,6 +88,13 @@ describe('hostile brief values from the library never throw', () => {
   });
 });
 
+describe('deeply nested brief text', () => {
+  it('reports a YAML brief nested 20,000 deep as a parse error, not a stack overflow', () => {
+    const deep = `${'['.repeat(20_000)}${']'.repeat(20_000)}`;
+    expect(codes(readBrief(`intent: compare\nrows: [{k: a, v: ${deep}}]\n`))).toEqual(['brief.parse-error']);
+  });
+});
+
 describe('many problems in one brief', () => {
   it(`reports at most ${MAX_BRIEF_PROBLEMS} problems and one line counting the rest, for 100,000 unknown options`, () => {
     const brief: Record<string, unknown> = { intent: 'compare', rows: [{ k: 'a' }] };

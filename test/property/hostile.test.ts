@@ -162,5 +162,5 @@ describe('property: hostile input renders or fails with catalogued codes', () =>
       if (!outcome.startsWith('known defect')) checkHostile(r);
     }), { numRuns: runs(150) });
     if (process.env.FC_SCALE) console.log([...tally].sort((a, b) => b[1] - a[1]).map(([k, n]) => `${n}\t${k}`).join('\n'));
-  });
+  }, runs(30_000)); // the suite's 30 s per test, scaled with the runs
 });

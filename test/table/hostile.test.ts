@@ -88,6 +88,12 @@ describe('hostile inline rows give coded errors, never exceptions', () => {
     expect(r.diagnostics[0]!.found!.length).toBeLessThanOrEqual(40);
   });
 
+  it('reports a JSON data file cell nested 100,000 deep as a nested value', async () => {
+    const deep = `${'['.repeat(100_000)}${']'.repeat(100_000)}`;
+    const r = await readTable({ kind: 'file', path: 't.json' }, {}, 'b.yaml', memoryFiles({ 't.json': `[{"k": "a", "v": ${deep}}]` }));
+    expect(r.diagnostics).toMatchObject([{ code: 'table.nested-value', field: 'v', rows: [1] }]);
+  });
+
   it('reports a circular object as a nested value', async () => {
     const cyclic: Record<string, unknown> = { a: 1 };
     cyclic.self = cyclic;
