@@ -131,7 +131,8 @@ function parseSvg(svg: string): void {
  */
 function knownOverflowDefect(r: RenderResult, rows: unknown[][]): boolean {
   const value = (v: unknown) => (typeof v === 'bigint' ? Number(v) : typeof v === 'number' ? v : 0);
-  const total = rows.reduce((sum, row) => sum + (Number.isFinite(value(row[1])) ? Math.abs(value(row[1])) : 0), 0);
+  // Over every column: the brief may chart any of them.
+  const total = rows.flat().reduce((sum: number, v) => sum + (Number.isFinite(value(v)) ? Math.abs(value(v)) : 0), 0);
   return total >= 1e307 && r.diagnostics.some((d) => d.code === 'render.internal' && d.message.includes('bad coordinate'));
 }
 
