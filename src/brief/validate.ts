@@ -70,8 +70,9 @@ function validateNode(value: unknown, schema: SchemaNode, path: string): Diagnos
   if (schema.type && !matchesType(value, schema.type)) return [wrongType(value, schema, path)];
   if (schema.enum && !schema.enum.includes(value as string | number)) {
     const options = schema.enum.map(String);
+    // `found` stays the value's JSON (callers parse it back); only the message is shortened.
     return [diagnostic('brief.bad-value', `${path || 'the brief'} is ${preview(value)}, which is not an option here`, {
-      path, found: preview(value), expected: describeExpected(schema), hint: suggestionHint(String(value), options, 'option'),
+      path, found: typeof value === 'string' ? JSON.stringify(value) : preview(value), expected: describeExpected(schema), hint: suggestionHint(String(value), options, 'option'),
     })];
   }
   const problems: Diagnostic[] = [];

@@ -88,6 +88,16 @@ describe('hostile brief values from the library never throw', () => {
   });
 });
 
+describe('values shown in diagnostics', () => {
+  it('keeps the found value of a long bad enum value as JSON that parses back to it', () => {
+    const intent = `compare${'x'.repeat(5000)}`;
+    const [d] = checkBriefValue({ intent, rows: [{ k: 'a' }] }).diagnostics;
+    expect(d).toMatchObject({ code: 'brief.bad-value', path: '/intent' });
+    expect(JSON.parse(d!.found!)).toBe(intent);
+    expect(d!.message.length).toBeLessThan(120);
+  });
+});
+
 describe('deeply nested brief text', () => {
   it('reports a YAML brief nested 20,000 deep as a parse error, not a stack overflow', () => {
     const deep = `${'['.repeat(20_000)}${']'.repeat(20_000)}`;
