@@ -1,5 +1,4 @@
 import type { FieldType } from '../brief/types.js';
-import { pointer } from '../brief/validate.js';
 import { describeRows, diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { isMissingText, parseBooleanText, parseIsoDate } from './cells.js';
 import { decimalMarkOf, eitherMark, numberReader, type NumberReader } from './decimal.js';
@@ -126,7 +125,7 @@ function unreadableProblem(name: string, column: Column, cells: RawCell[], unrea
   const allBad = unreadable.length === cells.filter((x) => !isMissingCell(x)).length;
   if (declared && forcedType(declared) && allBad) {
     return diagnostic('table.type-mismatch', `column \`${name}\` is declared ${declared} but none of its cells read as ${typeWord(column.type)}`, {
-      file: origin.file, field: name, path: pointer(pointer('/fields', name), 'type'), found: JSON.stringify(sample), expected: typeWord(column.type),
+      file: origin.file, field: name, path: `/fields/${name}/type`, found: JSON.stringify(sample), expected: typeWord(column.type),
       hint: `remove \`fields.${name}.type\` or fix the data`,
     });
   }

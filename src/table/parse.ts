@@ -1,6 +1,5 @@
 import { csvParseRows, dsvFormat, tsvParseRows } from 'd3-dsv';
 import { describeRows, diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
-import { preview } from '../brief/preview.js';
 import type { TableOrigin } from './types.js';
 
 /** A raw cell before typing: text from delimited files, or a JSON scalar. */
@@ -123,6 +122,24 @@ export function parseDelimited(text: string, origin: TableOrigin): Outcome<RawTa
   return success({ names, rows: data.map(({ r }) => r), positions: data.map(({ line }) => line), positionNoun: 'line', separator });
 }
 
+/**
+ * A few words on a value that is no table cell, for `found`. Bounded work and never an
+ * exception, unlike JSON.stringify: the value may be a BigInt, circular, or nested 100,000 deep.
+ */
+function describeValue(value: unknown): string {
+  try {
+    if (Array.isArray(value)) return `a list of ${value.length} item${value.length === 1 ? '' : 's'}`;
+    if (value !== null && typeof value === 'object') {
+      const keys = Object.keys(value);
+      return keys.length ? `an object with ${keys.slice(0, 3).map((k) => JSON.stringify(k.slice(0, 20))).join(', ')}${keys.length > 3 ? ', …' : ''}` : 'an empty object';
+    }
+    if (typeof value === 'string') return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
+    return typeof value === 'function' || typeof value === 'symbol' ? `a ${typeof value}` : String(value);
+  } catch {
+    return 'a value that cannot be read'; // a getter or proxy that throws
+  }
+}
+
 function scalarOrProblem(value: unknown, name: string, origin: TableOrigin, position: number, noun: 'line' | 'row'): RawCell | Diagnostic {
   if (value === null || value === undefined) return null;
   if (typeof value === 'string' || typeof value === 'boolean' || typeof value === 'number') return value;
@@ -130,7 +147,7 @@ function scalarOrProblem(value: unknown, name: string, origin: TableOrigin, posi
   if (typeof value === 'bigint') return Number(value);
   const what = Array.isArray(value) ? 'a list' : typeof value === 'object' ? 'an object' : `a ${typeof value}`;
   return diagnostic('table.nested-value', `${noun} ${position}, column \`${name}\` holds ${what}`, {
-    file: origin.file, ...(noun === 'line' ? { line: position } : {}), rows: [position], field: name, found: preview(value), expected: 'a number, string, boolean or null',
+    file: origin.file, ...(noun === 'line' ? { line: position } : {}), rows: [position], field: name, found: describeValue(value), expected: 'a number, string, boolean or null',
     hint: 'flatten nested values into their own columns before charting',
   });
 }
@@ -146,7 +163,7 @@ export function rowsFromObjects(items: unknown[], positions: number[], noun: 'li
   items.forEach((item, i) => {
     if (item === null || typeof item !== 'object' || Array.isArray(item)) {
       problems.push(diagnostic('table.row-not-an-object', `${noun} ${positions[i]} is not an object`, {
-        file: origin.file, ...(noun === 'line' ? { line: positions[i] } : {}), rows: [positions[i]!], found: Array.isArray(item) ? 'a list' : preview(item),
+        file: origin.file, ...(noun === 'line' ? { line: positions[i] } : {}), rows: [positions[i]!], found: Array.isArray(item) ? 'a list' : describeValue(item),
         expected: 'an object such as {"pier": "North", "crossings": 212}', hint: 'write each row as an object keyed by column name',
       }));
       return;
