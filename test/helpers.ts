@@ -14,16 +14,33 @@ import type { TableEnv } from '../src/table/load.js';
 export const env: RenderEnv = createNodeEnv();
 export const root = packageRoot();
 
-/** A table env over in-memory files, for table-stage tests. */
-export function memoryFiles(files: Record<string, string>, stdin = ''): TableEnv {
+/**
+ * A table env over in-memory files, for table-stage tests. Text is stored as UTF-8; give bytes
+ * for other encodings. Like the Node env, it returns at most the bytes asked for.
+ */
+export function memoryFiles(files: Record<string, string | Uint8Array>, stdin: string | Uint8Array = '', maxDataBytes?: number): TableEnv {
+  const bytes = (v: string | Uint8Array) => (typeof v === 'string' ? new TextEncoder().encode(v) : v);
   return {
-    readText: async (p) => {
+    readBytes: async (p, limit) => {
       const key = Object.keys(files).find((k) => p === k || p.endsWith(`/${k}`));
       if (key === undefined) throw Object.assign(new Error(`ENOENT: ${p}`), { code: 'ENOENT' });
-      return files[key]!;
+      return bytes(files[key]!).subarray(0, limit);
     },
-    readStdin: async () => stdin,
+    readStdin: async (limit) => bytes(stdin).subarray(0, limit),
+    ...(maxDataBytes === undefined ? {} : { maxDataBytes }),
   };
+}
+
+/** Text as UTF-16 bytes with a byte-order mark, little- or big-endian, as some spreadsheets export it. */
+export function utf16Bytes(text: string, bigEndian: boolean): Uint8Array {
+  const out = new Uint8Array(2 + text.length * 2);
+  out.set(bigEndian ? [0xfe, 0xff] : [0xff, 0xfe]);
+  for (let i = 0; i < text.length; i++) {
+    const unit = text.charCodeAt(i);
+    out[2 + 2 * i + (bigEndian ? 0 : 1)] = unit >> 8;
+    out[2 + 2 * i + (bigEndian ? 1 : 0)] = unit & 0xff;
+  }
+  return out;
 }
 
 /** Renders a brief object (YAML text or object) with inline rows through the whole pipeline. */

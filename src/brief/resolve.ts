@@ -1,4 +1,5 @@
 import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import { checkFormats } from './format.js';
 import { parseBriefText, type ParsedBrief } from './parse.js';
 import { briefSchema } from './schema.js';
 import { FORM_NAMES, INTENTS, type BriefVocabulary, type DataSource, type FieldHint, type ResolvedBrief } from './types.js';
@@ -117,7 +118,7 @@ export function checkBriefValue(value: unknown, parsed?: ParsedBrief, vocabulary
     })]);
   }
   const raw = value as Record<string, unknown>;
-  const problems = [...validateAgainstSchema(raw, briefSchema(vocabulary)).map((d) => notSupportedYet(d, vocabulary)), ...checkDataSource(raw)];
+  const problems = [...validateAgainstSchema(raw, briefSchema(vocabulary)).map((d) => notSupportedYet(d, vocabulary)), ...checkDataSource(raw), ...checkFormats(raw)];
   const diagnostics = withPositions(problems, located);
   if (hasErrors(diagnostics)) return failure(diagnostics);
   return success({ brief: resolveBrief(raw), parsed: located }, diagnostics);

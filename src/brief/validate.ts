@@ -1,6 +1,15 @@
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { suggestionHint } from '../diagnostics/suggest.js';
+import { preview } from './preview.js';
 import type { SchemaNode } from './schema.js';
+
+/** Most problems reported for one brief; the rest are counted in one more line (common practice in compilers). */
+export const MAX_BRIEF_PROBLEMS = 50;
+
+/** A schema node's own property, never one inherited from Object.prototype (`constructor:`, `__proto__:`). */
+function ownChild(map: Record<string, SchemaNode> | undefined, key: string): SchemaNode | undefined {
+  return map && Object.hasOwn(map, key) ? map[key] : undefined;
+}
 
 /** Appends a key to a JSON-pointer path, escaping `~` and `/` as RFC 6901 asks. */
 export function pointer(path: string, key: string | number): string {
@@ -21,9 +30,7 @@ function matchesType(value: unknown, type: SchemaNode['type']): boolean {
 }
 
 function describeFound(value: unknown): string {
-  const text = JSON.stringify(value);
-  const shown = text === undefined ? String(value) : text.length > 40 ? `${text.slice(0, 37)}...` : text;
-  return `${typeName(value)} ${shown}`;
+  return `${typeName(value)} ${preview(value)}`;
 }
 
 function describeExpected(schema: SchemaNode): string {
@@ -35,11 +42,26 @@ function describeExpected(schema: SchemaNode): string {
 
 /**
  * Checks a value against the brief schema's subset of JSON Schema, collecting one diagnostic
- * per problem, each with the path of the offending value.
+ * per problem, each with the path of the offending value. At the top level (no path) at most
+ * `MAX_BRIEF_PROBLEMS` are returned, and one `brief.too-many-problems` counts the rest.
  */
 export function validateAgainstSchema(value: unknown, schema: SchemaNode, path = ''): Diagnostic[] {
+  const problems = validateNode(value, schema, path);
+  return path === '' ? capProblems(problems) : problems;
+}
+
+/** The first `MAX_BRIEF_PROBLEMS` problems, and one `brief.too-many-problems` counting the rest. */
+export function capProblems(problems: Diagnostic[]): Diagnostic[] {
+  if (problems.length <= MAX_BRIEF_PROBLEMS) return problems;
+  const hidden = problems.length - MAX_BRIEF_PROBLEMS;
+  return [...problems.slice(0, MAX_BRIEF_PROBLEMS), diagnostic('brief.too-many-problems', `the brief has ${hidden} more problem${hidden === 1 ? '' : 's'}, not shown`, {
+    found: `${problems.length} problems`, expected: `at most ${MAX_BRIEF_PROBLEMS} shown`, hint: 'fix the problems shown and check the brief again',
+  })];
+}
+
+function validateNode(value: unknown, schema: SchemaNode, path: string): Diagnostic[] {
   if (schema.anyOf) {
-    const branches = schema.anyOf.map((s) => validateAgainstSchema(value, s, path));
+    const branches = schema.anyOf.map((s) => validateNode(value, s, path));
     if (branches.some((b) => b.length === 0)) return [];
     const typed = schema.anyOf.findIndex((s) => !s.type || matchesType(value, s.type));
     if (typed >= 0) return branches[typed]!;
@@ -48,8 +70,9 @@ export function validateAgainstSchema(value: unknown, schema: SchemaNode, path =
   if (schema.type && !matchesType(value, schema.type)) return [wrongType(value, schema, path)];
   if (schema.enum && !schema.enum.includes(value as string | number)) {
     const options = schema.enum.map(String);
-    return [diagnostic('brief.bad-value', `${path || 'the brief'} is ${JSON.stringify(value)}, which is not an option here`, {
-      path, found: JSON.stringify(value), expected: describeExpected(schema), hint: suggestionHint(String(value), options, 'option'),
+    // `found` stays the value's JSON (callers parse it back); only the message is shortened.
+    return [diagnostic('brief.bad-value', `${path || 'the brief'} is ${preview(value)}, which is not an option here`, {
+      path, found: typeof value === 'string' ? JSON.stringify(value) : preview(value), expected: describeExpected(schema), hint: suggestionHint(String(value), options, 'option'),
     })];
   }
   const problems: Diagnostic[] = [];
@@ -83,7 +106,7 @@ function checkArray(value: unknown[], schema: SchemaNode, path: string): Diagnos
   if (schema.minItems !== undefined && value.length < schema.minItems) {
     problems.push(diagnostic('brief.bad-value', `${path} is an empty list`, { path, found: '[]', expected: `at least ${schema.minItems} item(s)`, hint: 'list at least one item or remove the option' }));
   }
-  if (schema.items) value.forEach((item, i) => problems.push(...validateAgainstSchema(item, schema.items!, pointer(path, i))));
+  if (schema.items) value.forEach((item, i) => problems.push(...validateNode(item, schema.items!, pointer(path, i))));
   return problems;
 }
 
@@ -91,21 +114,25 @@ function checkObject(value: Record<string, unknown>, schema: SchemaNode, path: s
   const problems: Diagnostic[] = [];
   const known = Object.keys(schema.properties ?? {});
   for (const name of schema.required ?? []) {
-    if (!(name in value)) {
-      const hint = schema.properties?.[name]?.enum ? `add \`${name}:\` with ${describeExpected(schema.properties[name]!)}` : `add \`${name}:\``;
-      problems.push(diagnostic('brief.missing-option', `${path || 'the brief'} has no \`${name}\``, { path: pointer(path, name), expected: describeExpected(schema.properties?.[name] ?? {}), hint }));
+    if (!Object.hasOwn(value, name)) {
+      const child = ownChild(schema.properties, name) ?? {};
+      const hint = child.enum ? `add \`${name}:\` with ${describeExpected(child)}` : `add \`${name}:\``;
+      problems.push(diagnostic('brief.missing-option', `${path || 'the brief'} has no \`${name}\``, { path: pointer(path, name), expected: describeExpected(child), hint }));
     }
   }
+  let unknown = 0;
   for (const [key, item] of Object.entries(value)) {
-    const child = schema.properties?.[key];
+    const child = ownChild(schema.properties, key);
     if (child) {
-      problems.push(...validateAgainstSchema(item, child, pointer(path, key)));
+      problems.push(...validateNode(item, child, pointer(path, key)));
     } else if (schema.additionalProperties === false) {
+      // Past the number shown, a suggestion would be computed only to be dropped.
+      const hint = ++unknown <= MAX_BRIEF_PROBLEMS ? suggestionHint(key, known, 'option') : 'remove it';
       problems.push(diagnostic('brief.unknown-option', `\`${key}\` is not a brief option${path ? ` under ${path}` : ''}`, {
-        path: pointer(path, key), found: key, expected: `one of ${known.join(', ')}`, hint: suggestionHint(key, known, 'option'),
+        path: pointer(path, key), found: key, expected: `one of ${known.join(', ')}`, hint,
       }));
     } else if (typeof schema.additionalProperties === 'object') {
-      problems.push(...validateAgainstSchema(item, schema.additionalProperties, pointer(path, key)));
+      problems.push(...validateNode(item, schema.additionalProperties, pointer(path, key)));
     }
   }
   return problems;

@@ -19,6 +19,9 @@ export const CATALOGUE = {
   'brief.low-contrast': 'warning',
   'brief.indistinct-colours': 'warning',
   'brief.option-not-used': 'error',
+  'brief.bad-alias': 'error',
+  'brief.bad-format': 'error',
+  'brief.too-many-problems': 'error',
   // table: reading and typing the data
   'table.not-found': 'error',
   'table.unreadable': 'error',
@@ -34,6 +37,9 @@ export const CATALOGUE = {
   'table.nested-value': 'error',
   'table.mixed-column': 'warning',
   'table.type-mismatch': 'error',
+  'table.too-large': 'error',
+  'table.bad-encoding': 'error',
+  'table.ambiguous-decimal': 'error',
   // fields: roles and measurement types
   'fields.order-incomplete': 'error',
   'fields.order-duplicate': 'error',

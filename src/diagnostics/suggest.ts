@@ -1,39 +1,72 @@
-/** Levenshtein edit distance between two strings (case-insensitive). */
-export function editDistance(a: string, b: string): number {
+/** Longest name compared by edit distance: longer names are no typos worth a suggestion, and the comparison is quadratic in length. */
+export const MAX_SUGGEST_LENGTH = 64;
+
+/** Counts the work of suggestions (edit-distance cells computed), for tests that bound it. */
+export interface SuggestWork {
+  cells: number;
+}
+
+/**
+ * Levenshtein edit distance between two strings (case-insensitive). With a `limit`, it stops as
+ * soon as the distance must exceed it and returns `limit + 1`.
+ */
+export function editDistance(a: string, b: string, limit = Infinity, work?: SuggestWork): number {
   const s = a.toLowerCase();
   const t = b.toLowerCase();
+  // The distance is at least the difference in length.
+  if (Math.abs(s.length - t.length) > limit) return limit + 1;
   let prev = Array.from({ length: t.length + 1 }, (_, j) => j);
   for (let i = 1; i <= s.length; i++) {
     const row = [i];
+    let rowMin = i;
     for (let j = 1; j <= t.length; j++) {
       const cost = s[i - 1] === t[j - 1] ? 0 : 1;
-      row.push(Math.min(prev[j]! + 1, row[j - 1]! + 1, prev[j - 1]! + cost));
+      const d = Math.min(prev[j]! + 1, row[j - 1]! + 1, prev[j - 1]! + cost);
+      row.push(d);
+      if (d < rowMin) rowMin = d;
     }
+    if (work) work.cells += t.length;
+    // Each later row's minimum is at least this one's: no alignment can get back under the limit.
+    if (rowMin > limit) return limit + 1;
     prev = row;
   }
   return prev[t.length]!;
 }
 
+const squash = (s: string) => s.toLowerCase().replace(/[\s_\-]+/g, '');
+
+function sharedStart(a: string, b: string): number {
+  let i = 0;
+  while (i < a.length && i < b.length && a[i] === b[i]) i++;
+  return i;
+}
+
 /**
  * The closest candidate to a misspelt name, if it is close enough to be a likely typo:
- * within a third of the name's length in edits (at least 1, at most 3), or a case/spacing variant.
+ * within a third of the name's length in edits (at least 1, at most 3), or a case/spacing
+ * variant. Work is linear in the total length of the names: edit distances are computed only
+ * for names up to `MAX_SUGGEST_LENGTH` characters, and stop early past the limit.
  */
-export function nearestName(found: string, candidates: readonly string[]): string | undefined {
-  const squash = (s: string) => s.toLowerCase().replace(/[\s_\-]+/g, '');
-  const exactish = candidates.find((c) => squash(c) === squash(found));
-  if (exactish !== undefined) return exactish;
+export function nearestName(found: string, candidates: readonly string[], work?: SuggestWork): string | undefined {
+  const target = squash(found);
+  const squashed = candidates.map(squash);
+  const exactish = squashed.indexOf(target);
+  if (exactish >= 0) return candidates[exactish];
   // A long shared start catches words that were extended or cut ("comparison" for "compare").
-  const prefix = (a: string, b: string) => { let i = 0; while (i < a.length && i < b.length && a[i] === b[i]) i++; return i; };
-  const byPrefix = candidates
-    .map((c) => ({ c, n: prefix(squash(c), squash(found)) }))
-    .filter(({ c, n }) => n >= 4 && n >= 0.75 * Math.min(squash(c).length, squash(found).length))
-    .sort((a, b) => b.n - a.n || (a.c < b.c ? -1 : 1))[0];
+  let byPrefix: { c: string; n: number } | undefined;
+  candidates.forEach((c, i) => {
+    const n = sharedStart(squashed[i]!, target);
+    if (n < 4 || n < 0.75 * Math.min(squashed[i]!.length, target.length)) return;
+    if (!byPrefix || n > byPrefix.n || (n === byPrefix.n && c < byPrefix.c)) byPrefix = { c, n };
+  });
   if (byPrefix) return byPrefix.c;
+  if (found.length > MAX_SUGGEST_LENGTH) return undefined;
   const limit = Math.min(3, Math.max(1, Math.floor(found.length / 3)));
   let best: string | undefined;
   let bestDistance = Infinity;
   for (const c of candidates) {
-    const d = editDistance(found, c);
+    if (c.length > MAX_SUGGEST_LENGTH) continue;
+    const d = editDistance(found, c, limit, work);
     if (d < bestDistance || (d === bestDistance && best !== undefined && c < best)) {
       best = c;
       bestDistance = d;

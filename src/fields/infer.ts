@@ -26,15 +26,25 @@ function typeOf(column: Column, hint: FieldHint | undefined): FieldType {
   return 'categorical';
 }
 
+/** The first item that appeared before in the list, found with one pass and a set (an order may list 100,000 levels). */
+export function firstDuplicate(list: readonly string[]): string | undefined {
+  const seen = new Set<string>();
+  for (const item of list) {
+    if (seen.has(item)) return item;
+    seen.add(item);
+  }
+  return undefined;
+}
+
 function levelsOf(column: Column, type: FieldType, hint: FieldHint | undefined, problems: Diagnostic[]): string[] {
   if (type === 'quantitative' || type === 'temporal') return [];
   const present = firstAppearance(column);
   if (!hint?.order) return type === 'cyclic' ? cycleOrder(present) ?? present : present;
   const order = hint.order.map(String);
-  const duplicate = order.find((v, i) => order.indexOf(v) !== i); // order lists are short: written by hand
+  const duplicate = firstDuplicate(order);
   if (duplicate !== undefined) {
     problems.push(diagnostic('fields.order-duplicate', `\`fields.${column.name}.order\` lists ${JSON.stringify(duplicate)} twice`, {
-      path: `/fields/${column.name}/order`, found: duplicate, hint: 'list each level once',
+      path: pointer(pointer('/fields', column.name), 'order'), found: duplicate, hint: 'list each level once',
     }));
   }
   const listed = new Set(order);
@@ -69,7 +79,8 @@ export function inferFields(table: Table, brief: ResolvedBrief): Outcome<Fields>
   ];
   if (hasErrors(problems)) return failure(problems);
   const all = table.columns.map((column): Field => {
-    const hint = brief.fields[column.name];
+    // Own properties only: a column named `constructor` has no hint unless the brief gives one.
+    const hint = Object.hasOwn(brief.fields, column.name) ? brief.fields[column.name] : undefined;
     const type = typeOf(column, hint);
     const role: FieldRole = brief.keys.includes(column.name) ? 'key' : brief.values.includes(column.name) ? 'value' : 'other';
     return {

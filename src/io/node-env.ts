@@ -1,5 +1,4 @@
-import { readdirSync, readFileSync } from 'node:fs';
-import { readFile } from 'node:fs/promises';
+import { createReadStream, readdirSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, isAbsolute, join, resolve } from 'node:path';
 import { diagnostic, failure, type Outcome } from '../diagnostics/diagnostic.js';
@@ -11,7 +10,7 @@ import type { PaletteFile } from '../color/palette.js';
 import { resolveStyle } from '../style/resolve.js';
 import type { Style, Weight } from '../style/types.js';
 import type { OutlineSet } from '../svg/glyphs.js';
-import type { TableEnv } from '../table/load.js';
+import { DEFAULT_MAX_DATA_BYTES, type TableEnv } from '../table/load.js';
 import { describeBytes, INPUT_LIMITS, readBounded } from './bounded-read.js';
 import { packageRoot } from './package-root.js';
 
@@ -22,11 +21,33 @@ function readJson<T>(path: string): T {
   return JSON.parse(readFileSync(path, 'utf8')) as T;
 }
 
-/** Reads stdin to the end. */
-async function readAllStdin(): Promise<string> {
+/** Collects a stream's bytes up to `limit`, then stops reading (so /dev/zero ends). */
+async function readAtMost(stream: AsyncIterable<Buffer | string>, limit: number): Promise<Uint8Array> {
   const chunks: Buffer[] = [];
-  for await (const c of process.stdin) chunks.push(c as Buffer);
-  return Buffer.concat(chunks).toString('utf8');
+  let total = 0;
+  for await (const chunk of stream) {
+    const bytes = typeof chunk === 'string' ? Buffer.from(chunk) : chunk;
+    chunks.push(bytes);
+    total += bytes.length;
+    if (total >= limit) break; // leaving the loop destroys the stream
+  }
+  const all = Buffer.concat(chunks);
+  return all.subarray(0, Math.min(limit, all.length));
+}
+
+/** The data size limit: CHARTWRIGHT_MAX_DATA_BYTES when it is a positive whole number, else the default. */
+function maxDataBytes(): number {
+  const set = Number(process.env.CHARTWRIGHT_MAX_DATA_BYTES);
+  return Number.isSafeInteger(set) && set > 0 ? set : DEFAULT_MAX_DATA_BYTES;
+}
+
+/** Reads data files and stdin as bytes, at most the limit the table stage asks for. */
+export function nodeTableEnv(): TableEnv {
+  return {
+    readBytes: (path, limit) => readAtMost(createReadStream(path, { highWaterMark: 1 << 20 }), limit),
+    readStdin: (limit) => readAtMost(process.stdin, limit),
+    maxDataBytes: maxDataBytes(),
+  };
 }
 
 function styleTooLarge(name: string, file: string, limit: number) {
@@ -83,7 +104,7 @@ export function createNodeEnv(root: string = packageRoot(), options: NodeEnvOpti
   let outlines: OutlineSet | undefined;
   const require = createRequire(join(root, 'package.json'));
   const ttf = (face: string) => join(dirname(require.resolve('source-sans/package.json')), 'TTF', face);
-  const table: TableEnv = { readText: (p) => readFile(p, 'utf8'), readStdin: readAllStdin };
+  const table = nodeTableEnv();
   return {
     measure,
     table,

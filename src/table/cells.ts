@@ -8,23 +8,50 @@ export function isMissingText(text: string): boolean {
   return MISSING_TOKENS.has(text.trim().toLowerCase());
 }
 
+/** The mark between a number's whole and fractional parts. */
+export type DecimalMark = '.' | ',';
+
 const PLAIN_NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 const GROUPED_NUMBER = /^[+-]?\d{1,3}(,\d{3})+(\.\d+)?$/;
+const COMMA_DECIMAL = /^[+-]?(\d+(,\d*)?|,\d+)([eE][+-]?\d+)?$/;
+// A leading zero never starts a group: "0.125" is a decimal, not 125 grouped.
+const DOT_GROUPED = /^[+-]?[1-9]\d{0,2}(\.\d{3})+(,\d+)?$/;
 const INFINITE = /^[+-]?(inf|infinity)$/i;
 
-/** Reads a number cell: a finite number, `Infinity` for non-finite spellings, or undefined if not a number. */
-export function parseNumberText(text: string): number | undefined {
-  const t = text.trim();
-  if (PLAIN_NUMBER.test(t)) return Number(t);
-  if (GROUPED_NUMBER.test(t)) return Number(t.replace(/,/g, ''));
+/**
+ * Reads a number cell: a finite number, `Infinity` for non-finite spellings, or undefined if not
+ * a number. With a decimal point (the default) "1,234.5" groups thousands by commas; with a
+ * decimal comma, as semicolon-separated files write numbers, "1.234,5" groups them by dots and
+ * "1,25" is 1.25. A leading U+2212 minus sign (as chartwright writes it) reads as "-".
+ */
+export function parseNumberText(text: string, decimal: DecimalMark = '.'): number | undefined {
+  const t = text.trim().replace(/^\u2212/, '-');
+  if (decimal === '.') {
+    if (PLAIN_NUMBER.test(t)) return Number(t);
+    if (GROUPED_NUMBER.test(t)) return Number(t.replace(/,/g, ''));
+  } else {
+    if (COMMA_DECIMAL.test(t)) return Number(t.replace(',', '.'));
+    if (DOT_GROUPED.test(t)) return Number(t.replace(/\./g, '').replace(',', '.'));
+  }
   if (INFINITE.test(t)) return t.startsWith('-') ? -Infinity : Infinity;
   return undefined;
 }
 
 const ISO_DATE = /^(\d{4})-(\d{2})(?:-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.(\d{1,9}))?)?(Z|[+-]\d{2}:?\d{2})?)?)?$/;
 
+/**
+ * Epoch milliseconds of a UTC date-time. `Date.UTC` reads years 0–99 as 1900–1999, so the year
+ * is set with `setUTCFullYear`, which takes it as given.
+ */
+function utcTime(year: number, month: number, day: number, hour = 0, minute = 0, second = 0, ms = 0): number {
+  const d = new Date(0);
+  d.setUTCFullYear(year, month - 1, day);
+  d.setUTCHours(hour, minute, second, ms);
+  return d.getTime();
+}
+
 function daysIn(year: number, month: number): number {
-  return new Date(Date.UTC(year, month, 0)).getUTCDate();
+  return new Date(utcTime(year, month + 1, 0)).getUTCDate();
 }
 
 /**
@@ -45,7 +72,7 @@ export function parseIsoDate(text: string): { time: number; grain: DateGrain } |
   const second = s === undefined ? 0 : Number(s);
   if (hour > 23 || minute > 59 || second > 59) return undefined;
   const ms = frac === undefined ? 0 : Math.round(Number(`0.${frac}`) * 1000);
-  let time = Date.UTC(year, month - 1, day, hour, minute, second, ms);
+  let time = utcTime(year, month, day, hour, minute, second, ms);
   if (zone && zone !== 'Z') {
     const sign = zone.startsWith('-') ? -1 : 1;
     const digits = zone.slice(1).replace(':', '');

@@ -1,6 +1,7 @@
 import type { FieldType } from '../brief/types.js';
 import { describeRows, diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
-import { isMissingText, parseBooleanText, parseIsoDate, parseNumberText } from './cells.js';
+import { isMissingText, parseBooleanText, parseIsoDate } from './cells.js';
+import { decimalMarkOf, eitherMark, numberReader, type NumberReader } from './decimal.js';
 import type { RawCell, RawTable } from './parse.js';
 import type { Column, ColumnType, DateGrain, Table, TableOrigin } from './types.js';
 
@@ -9,11 +10,17 @@ const MOSTLY = 0.8;
 
 type Reading = { value: number | string | boolean; grain?: DateGrain } | null | undefined;
 
-function readAs(type: ColumnType, cell: RawCell): Reading {
-  if (cell === null) return null;
-  if (typeof cell === 'string' && isMissingText(cell)) return null;
+/** Whether a cell means "no value": empty, a missing-value token, or a NaN or infinite number (YAML's `.nan`, `.inf`). */
+function isMissingCell(cell: RawCell): boolean {
+  if (cell === null) return true;
+  if (typeof cell === 'number') return !Number.isFinite(cell);
+  return typeof cell === 'string' && isMissingText(cell);
+}
+
+function readAs(type: ColumnType, cell: RawCell, readNumber: NumberReader): Reading {
+  if (isMissingCell(cell)) return null;
   if (type === 'number') {
-    const n = typeof cell === 'number' ? cell : typeof cell === 'string' ? parseNumberText(cell) : undefined;
+    const n = typeof cell === 'number' ? cell : typeof cell === 'string' ? readNumber(cell) : undefined;
     return n === undefined ? undefined : { value: n };
   }
   if (type === 'date') {
@@ -27,11 +34,11 @@ function readAs(type: ColumnType, cell: RawCell): Reading {
   return { value: String(cell).trim() };
 }
 
-function share(type: ColumnType, cells: RawCell[]): { present: number; readable: number } {
+function share(type: ColumnType, cells: RawCell[], readNumber: NumberReader): { present: number; readable: number } {
   let present = 0;
   let readable = 0;
   for (const cell of cells) {
-    const r = readAs(type, cell);
+    const r = readAs(type, cell, readNumber);
     if (r === null) continue;
     present++;
     if (r !== undefined) readable++;
@@ -48,36 +55,36 @@ function forcedType(hint: FieldType | undefined): ColumnType | undefined {
 }
 
 /** Whether every present cell reads as the type (and at least one is present); stops at the first that does not. */
-function allRead(type: ColumnType, cells: RawCell[]): boolean {
+function allRead(type: ColumnType, cells: RawCell[], readNumber: NumberReader): boolean {
   let present = false;
   for (const cell of cells) {
-    const r = readAs(type, cell);
+    const r = readAs(type, cell, readNumber);
     if (r === undefined) return false;
     if (r !== null) present = true;
   }
   return present;
 }
 
-function guessType(cells: RawCell[]): { type: ColumnType; mixed: boolean } {
+function guessType(cells: RawCell[], readNumber: NumberReader): { type: ColumnType; mixed: boolean } {
   for (const type of ['number', 'date', 'boolean'] as const) {
-    if (allRead(type, cells)) return { type, mixed: false };
+    if (allRead(type, cells, readNumber)) return { type, mixed: false };
   }
-  const { present, readable } = share('number', cells);
+  const { present, readable } = share('number', cells, readNumber);
   if (present > 0 && readable / present >= MOSTLY) return { type: 'number', mixed: true };
   return { type: 'text', mixed: false };
 }
 
 const GRAIN_RANK: DateGrain[] = ['year', 'month', 'day', 'minute', 'second'];
 
-function buildColumn(name: string, type: ColumnType, cells: RawCell[]): { column: Column; unreadable: number[] } {
+function buildColumn(name: string, type: ColumnType, cells: RawCell[], readNumber: NumberReader): { column: Column; unreadable: number[] } {
   const values: Column['values'] = [];
   const text: Column['text'] = [];
   const missing: number[] = [];
   const unreadable: number[] = [];
   let grain: DateGrain | undefined;
   cells.forEach((cell, i) => {
-    text.push(cell === null ? null : String(cell).trim());
-    const r = readAs(type, cell);
+    text.push(cell === null || (typeof cell === 'number' && !Number.isFinite(cell)) ? null : String(cell).trim());
+    const r = readAs(type, cell, readNumber);
     const finite = r && (typeof r.value !== 'number' || Number.isFinite(r.value));
     if (r && finite) {
       values.push(r.value);
@@ -97,33 +104,53 @@ function typeWord(type: ColumnType): string {
   return type === 'number' ? 'numbers' : type === 'date' ? 'ISO 8601 dates' : type === 'boolean' ? 'true/false' : 'text';
 }
 
+/** The reader for a column's numbers, or the ambiguity that keeps a numeric column from being read. */
+function readerFor(raw: RawTable, cells: RawCell[], forced: ColumnType | undefined, name: string, origin: TableOrigin): NumberReader | Diagnostic {
+  const mark = raw.separator === ';' ? decimalMarkOf(cells) : { ok: true as const, mark: '.' as const };
+  if (mark.ok) return numberReader(raw.separator, mark.mark);
+  const numeric = forced ? forced === 'number' : guessType(cells, eitherMark).type === 'number';
+  if (!numeric) return numberReader(raw.separator, '.');
+  const both = mark.comma !== mark.point;
+  return diagnostic('table.ambiguous-decimal', both
+    ? `column \`${name}\` writes decimals both with a comma (${JSON.stringify(mark.comma)}) and with a point (${JSON.stringify(mark.point)}), so its numbers cannot be read safely`
+    : `column \`${name}\` of this semicolon-separated file has numbers such as ${JSON.stringify(mark.point)}, which read as a decimal point or as grouped thousands`, {
+    file: origin.file, field: name, found: both ? `${mark.comma} and ${mark.point}` : mark.point, expected: 'one decimal mark for the whole column',
+    hint: both ? 'write every number of the column with the same decimal mark' : 'write the numbers without grouping dots (1250), or give one value its decimals with a comma (1,5)',
+  });
+}
+
+function unreadableProblem(name: string, column: Column, cells: RawCell[], unreadable: number[], raw: RawTable, origin: TableOrigin, declared: FieldType | undefined): Diagnostic {
+  const rows = unreadable.map((i) => raw.positions[i]!);
+  const sample = column.text[unreadable[0]!];
+  const allBad = unreadable.length === cells.filter((x) => !isMissingCell(x)).length;
+  if (declared && forcedType(declared) && allBad) {
+    return diagnostic('table.type-mismatch', `column \`${name}\` is declared ${declared} but none of its cells read as ${typeWord(column.type)}`, {
+      file: origin.file, field: name, path: `/fields/${name}/type`, found: JSON.stringify(sample), expected: typeWord(column.type),
+      hint: `remove \`fields.${name}.type\` or fix the data`,
+    });
+  }
+  return diagnostic('table.mixed-column', `column \`${name}\` holds ${typeWord(column.type)}, but ${describeRows(rows, raw.positionNoun)} hold${rows.length === 1 ? 's' : ''} other text (first: ${JSON.stringify(sample)}); ${rows.length === 1 ? 'that cell is' : 'those cells are'} treated as missing`, {
+    file: origin.file, field: name, rows, found: JSON.stringify(sample), expected: typeWord(column.type),
+    hint: 'fix those cells, or write NA for a missing value',
+  });
+}
+
 /**
  * Types each column of a raw table: numbers, ISO 8601 dates, booleans or text. A field hint's
- * type wins. A column of mostly numbers keeps its numbers and warns about the rest by row.
+ * type wins. A column of mostly numbers keeps its numbers and warns about the rest by row. In a
+ * semicolon-separated file each numeric column's decimal mark is decided from its cells.
  */
-export function inferTable(raw: RawTable, origin: TableOrigin, hints: Record<string, FieldType | undefined>): { table: Table; diagnostics: Diagnostic[] } {
+export function inferTable(raw: RawTable, origin: TableOrigin, hints: ReadonlyMap<string, FieldType | undefined>): { table: Table; diagnostics: Diagnostic[] } {
   const diagnostics: Diagnostic[] = [];
   const columns = raw.names.map((name, c) => {
     const cells = raw.rows.map((row) => row[c] ?? null);
-    const forced = forcedType(hints[name]);
-    const guess = forced ? { type: forced, mixed: false } : guessType(cells);
-    const { column, unreadable } = buildColumn(name, guess.type, cells);
-    if (unreadable.length) {
-      const rows = unreadable.map((i) => raw.positions[i]!);
-      const sample = column.text[unreadable[0]!];
-      const allBad = unreadable.length === cells.filter((x) => readAs('text', x) !== null).length;
-      if (forced && allBad) {
-        diagnostics.push(diagnostic('table.type-mismatch', `column \`${name}\` is declared ${hints[name]} but none of its cells read as ${typeWord(guess.type)}`, {
-          file: origin.file, field: name, path: `/fields/${name}/type`, found: JSON.stringify(sample), expected: typeWord(guess.type),
-          hint: `remove \`fields.${name}.type\` or fix the data`,
-        }));
-      } else {
-        diagnostics.push(diagnostic('table.mixed-column', `column \`${name}\` holds ${typeWord(guess.type)}, but ${describeRows(rows, raw.positionNoun)} hold${rows.length === 1 ? 's' : ''} other text (first: ${JSON.stringify(sample)}); ${rows.length === 1 ? 'that cell is' : 'those cells are'} treated as missing`, {
-          file: origin.file, field: name, rows, found: JSON.stringify(sample), expected: typeWord(guess.type),
-          hint: 'fix those cells, or write NA for a missing value',
-        }));
-      }
-    }
+    const forced = forcedType(hints.get(name));
+    const reader = readerFor(raw, cells, forced, name, origin);
+    if (typeof reader !== 'function') diagnostics.push(reader);
+    const readNumber = typeof reader === 'function' ? reader : eitherMark;
+    const guess = forced ? { type: forced, mixed: false } : guessType(cells, readNumber);
+    const { column, unreadable } = buildColumn(name, guess.type, cells, readNumber);
+    if (unreadable.length) diagnostics.push(unreadableProblem(name, column, cells, unreadable, raw, origin, hints.get(name)));
     return column;
   });
   const table: Table = { origin, columns, rowCount: raw.rows.length, rowPositions: raw.positions, positionNoun: raw.positionNoun };

@@ -1,16 +1,28 @@
 import { dirname, extname, isAbsolute, join } from 'node:path';
 import type { DataSource, FieldHint } from '../brief/types.js';
 import { diagnostic, failure, hasErrors, success, type Outcome } from '../diagnostics/diagnostic.js';
+import { decodeTable } from './decode.js';
 import { inferTable } from './infer.js';
 import { parseDelimited, parseJsonRows, parseNdjsonRows, rowsFromObjects, type RawTable } from './parse.js';
 import type { Table, TableOrigin } from './types.js';
 
+/**
+ * Largest data file or stdin read, in bytes: 256 MiB. Kept under V8's longest string (about
+ * 512 Mi UTF-16 units), so any data that fits also decodes. Raised with CHARTWRIGHT_MAX_DATA_BYTES.
+ */
+export const DEFAULT_MAX_DATA_BYTES = 256 * 1024 * 1024;
+
 /** What the table stage may touch outside itself. */
 export interface TableEnv {
-  /** Reads a UTF-8 file; throws a Node error (with `code`) when it cannot. */
-  readText(path: string): Promise<string>;
-  /** Reads all of standard input. */
-  readStdin(): Promise<string>;
+  /**
+   * Reads the bytes of a file, at most `limit` of them, so that an endless file such as
+   * /dev/zero stops; throws a Node error (with `code`) when it cannot.
+   */
+  readBytes(path: string, limit: number): Promise<Uint8Array>;
+  /** Reads standard input to its end, or to at most `limit` bytes. */
+  readStdin(limit: number): Promise<Uint8Array>;
+  /** The largest data file or stdin accepted, in bytes. Default: `DEFAULT_MAX_DATA_BYTES`. */
+  maxDataBytes?: number;
 }
 
 const FORMATS: Record<string, TableOrigin['format']> = {
@@ -33,10 +45,44 @@ export function parseTableText(text: string, origin: TableOrigin): Outcome<RawTa
   return parseDelimited(text, origin);
 }
 
+function tooLarge(file: string, limit: number): Outcome<never> {
+  return failure([diagnostic('table.too-large', `the data in \`${file}\` is larger than the limit of ${limit} bytes`, {
+    path: '/data', file, found: `more than ${limit} bytes`, expected: `at most ${limit} bytes`,
+    hint: 'set the environment variable CHARTWRIGHT_MAX_DATA_BYTES to a larger number of bytes, or chart a smaller extract',
+  })]);
+}
+
+/** Decodes read bytes, refusing more than the limit (the reader was asked for one byte more). */
+function decodeRead(bytes: Uint8Array, file: string, limit: number): Outcome<string> {
+  if (bytes.length > limit) return tooLarge(file, limit);
+  try {
+    return decodeTable(bytes, file);
+  } catch {
+    return tooLarge(file, limit); // longer than the longest string V8 can hold
+  }
+}
+
+function unreadable(e: unknown, source: { path: string }, full: string): Outcome<never> {
+  const code = (e as NodeJS.ErrnoException | undefined)?.code;
+  if (code === 'ENOENT') {
+    return failure([diagnostic('table.not-found', `the data file \`${source.path}\` does not exist`, {
+      path: '/data', found: full, hint: 'paths in `data:` are relative to the brief file',
+    })]);
+  }
+  return failure([diagnostic('table.unreadable', `the data file \`${source.path}\` cannot be read (${code ?? (e as Error)?.message ?? String(e)})`, { path: '/data', found: full, hint: 'check that it is a readable file, not a folder' })]);
+}
+
 async function readSource(source: DataSource, briefFile: string | undefined, env: TableEnv): Promise<Outcome<{ text: string; origin: TableOrigin }>> {
+  const limit = env.maxDataBytes ?? DEFAULT_MAX_DATA_BYTES;
   if (source.kind === 'stdin') {
-    const text = await env.readStdin();
-    return success({ text, origin: { file: '<stdin>', format: sniffFormat(text) } });
+    let bytes: Uint8Array;
+    try {
+      bytes = await env.readStdin(limit + 1);
+    } catch (e) {
+      return unreadable(e, { path: '-' }, '<stdin>');
+    }
+    const text = decodeRead(bytes, '<stdin>', limit);
+    return text.ok ? success({ text: text.value, origin: { file: '<stdin>', format: sniffFormat(text.value) } }) : failure(text.diagnostics);
   }
   if (source.kind !== 'file') return failure([]);
   const format = FORMATS[extname(source.path).toLowerCase()];
@@ -46,22 +92,19 @@ async function readSource(source: DataSource, briefFile: string | undefined, env
     })]);
   }
   const full = isAbsolute(source.path) || !briefFile ? source.path : join(dirname(briefFile), source.path);
+  let bytes: Uint8Array;
   try {
-    return success({ text: await env.readText(full), origin: { file: full, format } });
+    bytes = await env.readBytes(full, limit + 1);
   } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    if (code === 'ENOENT') {
-      return failure([diagnostic('table.not-found', `the data file \`${source.path}\` does not exist`, {
-        path: '/data', found: full, hint: 'paths in `data:` are relative to the brief file',
-      })]);
-    }
-    return failure([diagnostic('table.unreadable', `the data file \`${source.path}\` cannot be read (${code ?? (e as Error).message})`, { path: '/data', found: full, hint: 'check that it is a readable file, not a folder' })]);
+    return unreadable(e, source, full);
   }
+  const text = decodeRead(bytes, full, limit);
+  return text.ok ? success({ text: text.value, origin: { file: full, format } }) : failure(text.diagnostics);
 }
 
-/** Type hints from the brief's field section. */
-function typeHints(fields: Record<string, FieldHint>): Record<string, FieldHint['type']> {
-  return Object.fromEntries(Object.entries(fields).map(([k, v]) => [k, v.type]));
+/** Type hints from the brief's field section, by own column name only (a column may be named `constructor`). */
+function typeHints(fields: Record<string, FieldHint>): Map<string, FieldHint['type']> {
+  return new Map(Object.entries(fields).map(([k, v]) => [k, v?.type]));
 }
 
 /**

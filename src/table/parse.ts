@@ -11,22 +11,57 @@ export interface RawTable {
   rows: RawCell[][];
   positions: number[];
   positionNoun: 'line' | 'row';
+  /** The character between cells, for delimited text. */
+  separator?: string;
 }
 
+const QUOTE = 34;
+const NEWLINE = 10;
+const RETURN = 13;
+
 /**
- * 1-based line on which each record of delimited text starts. A quoted field may span lines,
- * so this tracks quotes the way RFC 4180 does.
+ * 1-based line on which each record of delimited text starts, read the way d3-dsv (and RFC
+ * 4180) reads records: a quote opens a quoted field only at the start of a field, so a stray
+ * quote inside an unquoted cell is plain text; a quoted field may span lines; CR LF, LF and a
+ * lone CR each end a line.
  */
-export function recordStartLines(text: string): number[] {
-  const starts = [1];
+export function recordStartLines(text: string, delimiter = ','): number[] {
+  const starts: number[] = [];
+  const sep = delimiter.charCodeAt(0);
+  let n = text.length;
+  if (text.charCodeAt(n - 1) === NEWLINE) n--;
+  if (text.charCodeAt(n - 1) === RETURN) n--;
   let line = 1;
-  let quoted = false;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i];
-    if (ch === '"') quoted = !quoted;
-    else if (ch === '\n') {
-      line++;
-      if (!quoted && i < text.length - 1) starts.push(line);
+  let i = 0;
+  // Consumes a line break at i, if there is one; true when it did.
+  const lineBreak = (): boolean => {
+    const c = text.charCodeAt(i);
+    if (c !== NEWLINE && c !== RETURN) return false;
+    i += c === RETURN && text.charCodeAt(i + 1) === NEWLINE ? 2 : 1;
+    line++;
+    return true;
+  };
+  let recordStart = true;
+  while (i < n) {
+    if (recordStart) starts.push(line);
+    recordStart = false;
+    if (text.charCodeAt(i) === QUOTE) {
+      for (i++; i < n; ) {
+        if (text.charCodeAt(i) === QUOTE) {
+          if (text.charCodeAt(i + 1) !== QUOTE) break;
+          i += 2;
+        } else if (!lineBreak()) i++;
+      }
+      i++; // past the closing quote; d3-dsv then takes one character, and only a line break ends the record
+      if (i < n) {
+        if (lineBreak()) recordStart = true;
+        else i++;
+      }
+      continue;
+    }
+    while (i < n && !recordStart) {
+      if (lineBreak()) recordStart = true;
+      else if (text.charCodeAt(i++) === sep) break;
     }
   }
   return starts;
@@ -64,8 +99,9 @@ export function parseDelimited(text: string, origin: TableOrigin): Outcome<RawTa
   if (body.trim() === '') {
     return failure([diagnostic('table.empty', 'the data file is empty', { file: origin.file, hint: 'add a header row and at least one data row' })]);
   }
-  const records = origin.format === 'tsv' ? tsvParseRows(body) : usesSemicolons(body) ? dsvFormat(';').parseRows(body) : csvParseRows(body);
-  const lines = recordStartLines(body);
+  const separator = origin.format === 'tsv' ? '\t' : usesSemicolons(body) ? ';' : ',';
+  const records = separator === '\t' ? tsvParseRows(body) : separator === ';' ? dsvFormat(';').parseRows(body) : csvParseRows(body);
+  const lines = recordStartLines(body, separator);
   const kept = records.map((r, i) => ({ r, line: lines[i] ?? i + 1 })).filter(({ r }) => !(r.length === 1 && r[0]!.trim() === ''));
   const [header, ...data] = kept;
   if (!header) return failure([diagnostic('table.empty', 'the data file is empty', { file: origin.file, hint: 'add a header row and at least one data row' })]);
@@ -83,15 +119,35 @@ export function parseDelimited(text: string, origin: TableOrigin): Outcome<RawTa
       hint: origin.format === 'csv' ? 'quote cells that contain commas, e.g. "Smith, J."' : 'check for missing or extra tabs on these lines',
     })]);
   }
-  return success({ names, rows: data.map(({ r }) => r), positions: data.map(({ line }) => line), positionNoun: 'line' });
+  return success({ names, rows: data.map(({ r }) => r), positions: data.map(({ line }) => line), positionNoun: 'line', separator });
+}
+
+/**
+ * A few words on a value that is no table cell, for `found`. Bounded work and never an
+ * exception, unlike JSON.stringify: the value may be a BigInt, circular, or nested 100,000 deep.
+ */
+function describeValue(value: unknown): string {
+  try {
+    if (Array.isArray(value)) return `a list of ${value.length} item${value.length === 1 ? '' : 's'}`;
+    if (value !== null && typeof value === 'object') {
+      const keys = Object.keys(value);
+      return keys.length ? `an object with ${keys.slice(0, 3).map((k) => JSON.stringify(k.slice(0, 20))).join(', ')}${keys.length > 3 ? ', …' : ''}` : 'an empty object';
+    }
+    if (typeof value === 'string') return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
+    return typeof value === 'function' || typeof value === 'symbol' ? `a ${typeof value}` : String(value);
+  } catch {
+    return 'a value that cannot be read'; // a getter or proxy that throws
+  }
 }
 
 function scalarOrProblem(value: unknown, name: string, origin: TableOrigin, position: number, noun: 'line' | 'row'): RawCell | Diagnostic {
   if (value === null || value === undefined) return null;
-  if (typeof value === 'string' || typeof value === 'boolean') return value;
-  if (typeof value === 'number') return value;
-  return diagnostic('table.nested-value', `${noun} ${position}, column \`${name}\` holds ${Array.isArray(value) ? 'a list' : 'an object'}`, {
-    file: origin.file, ...(noun === 'line' ? { line: position } : {}), rows: [position], field: name, found: JSON.stringify(value).slice(0, 40), expected: 'a number, string, boolean or null',
+  if (typeof value === 'string' || typeof value === 'boolean' || typeof value === 'number') return value;
+  // A BigInt is a number the library was handed; beyond about 1.8e308 it reads as infinite, so missing.
+  if (typeof value === 'bigint') return Number(value);
+  const what = Array.isArray(value) ? 'a list' : typeof value === 'object' ? 'an object' : `a ${typeof value}`;
+  return diagnostic('table.nested-value', `${noun} ${position}, column \`${name}\` holds ${what}`, {
+    file: origin.file, ...(noun === 'line' ? { line: position } : {}), rows: [position], field: name, found: describeValue(value), expected: 'a number, string, boolean or null',
     hint: 'flatten nested values into their own columns before charting',
   });
 }
@@ -107,7 +163,7 @@ export function rowsFromObjects(items: unknown[], positions: number[], noun: 'li
   items.forEach((item, i) => {
     if (item === null || typeof item !== 'object' || Array.isArray(item)) {
       problems.push(diagnostic('table.row-not-an-object', `${noun} ${positions[i]} is not an object`, {
-        file: origin.file, ...(noun === 'line' ? { line: positions[i] } : {}), rows: [positions[i]!], found: Array.isArray(item) ? 'a list' : JSON.stringify(item),
+        file: origin.file, ...(noun === 'line' ? { line: positions[i] } : {}), rows: [positions[i]!], found: Array.isArray(item) ? 'a list' : describeValue(item),
         expected: 'an object such as {"pier": "North", "crossings": 212}', hint: 'write each row as an object keyed by column name',
       }));
       return;
@@ -116,7 +172,9 @@ export function rowsFromObjects(items: unknown[], positions: number[], noun: 'li
   });
   if (problems.length) return failure(problems);
   const rows = items.map((item, i) => names.map((name) => {
-    const cell = scalarOrProblem((item as Record<string, unknown>)[name], name, origin, positions[i]!, noun);
+    // Own properties only: a row without `constructor` must not read Object.prototype's.
+    const value = Object.hasOwn(item as object, name) ? (item as Record<string, unknown>)[name] : undefined;
+    const cell = scalarOrProblem(value, name, origin, positions[i]!, noun);
     if (cell !== null && typeof cell === 'object') { problems.push(cell); return null; }
     return cell;
   }));

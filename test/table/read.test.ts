@@ -166,7 +166,7 @@ describe('table stage: coded errors name the file and line', () => {
   });
 
   it('reports an unreadable file', async () => {
-    const env = { readText: async () => { throw Object.assign(new Error('is a directory'), { code: 'EISDIR' }); }, readStdin: async () => '' };
+    const env = { readBytes: async () => { throw Object.assign(new Error('is a directory'), { code: 'EISDIR' }); }, readStdin: async () => new Uint8Array() };
     const r = await readTable({ kind: 'file', path: 'dir.csv' }, {}, 'b.yaml', env);
     expect(r.diagnostics).toMatchObject([{ code: 'table.unreadable' }]);
   });
