@@ -17,6 +17,8 @@ export interface ChooseContext {
   lenient: boolean;
   /** The forms that can be drawn (the registry), passed in so the rules know no form by import. */
   forms: readonly Candidate[];
+  /** The render's memory of measured results, handed to the form's plan. Default: none. */
+  memo?: Map<string, unknown>;
 }
 
 /**
@@ -44,7 +46,7 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext,
   const rationale: Decision[] = [rule ? { decision: form.noun, rule: `${rule.id}: ${rule.why}` } : { decision: form.noun, rule: 'the brief pins `form:`' }];
   if (brief.form) rationale.push({ decision: `form pinned to ${brief.form}`, rule: 'the brief pins `form:`; the hard rules still apply' });
   rationale.push(...hard.decisions);
-  const planned = form.plan({ fields, table, brief, style: ctx.style, measure: ctx.measure, lenient: ctx.lenient });
+  const planned = form.plan({ fields, table, brief, style: ctx.style, measure: ctx.measure, lenient: ctx.lenient, ...(ctx.memo ? { memo: ctx.memo } : {}) });
   problems.push(...planned.diagnostics);
   if (!planned.ok || hasErrors(problems)) return failure(problems);
   rationale.push(...planned.value.decisions);

@@ -37,6 +37,8 @@ export interface PlanInput {
   style: Style;
   measure: TextMeasurer;
   lenient: boolean;
+  /** The render's memory of measured results, shared with layout (see LayoutContext.memo). Default: none. */
+  memo?: Map<string, unknown>;
 }
 
 /** A form's plan and the decisions (with their rules) it made. */

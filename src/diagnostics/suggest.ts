@@ -7,30 +7,38 @@ export interface SuggestWork {
 }
 
 /**
- * Levenshtein edit distance between two strings (case-insensitive). With a `limit`, it stops as
- * soon as the distance must exceed it and returns `limit + 1`.
+ * Edit distance between two strings (case-insensitive): insertions, deletions, substitutions
+ * and swaps of two neighbouring letters each count 1 (the optimal string alignment distance,
+ * Damerau–Levenshtein restricted to adjacent transpositions), so "titel" is one edit from
+ * "title". With a `limit`, it stops as soon as the distance must exceed it and returns `limit + 1`.
  */
 export function editDistance(a: string, b: string, limit = Infinity, work?: SuggestWork): number {
   const s = a.toLowerCase();
   const t = b.toLowerCase();
   // The distance is at least the difference in length.
   if (Math.abs(s.length - t.length) > limit) return limit + 1;
+  let before: number[] = [];
   let prev = Array.from({ length: t.length + 1 }, (_, j) => j);
+  let prevMin = 0;
   for (let i = 1; i <= s.length; i++) {
     const row = [i];
     let rowMin = i;
     for (let j = 1; j <= t.length; j++) {
       const cost = s[i - 1] === t[j - 1] ? 0 : 1;
-      const d = Math.min(prev[j]! + 1, row[j - 1]! + 1, prev[j - 1]! + cost);
+      let d = Math.min(prev[j]! + 1, row[j - 1]! + 1, prev[j - 1]! + cost);
+      if (i > 1 && j > 1 && s[i - 1] === t[j - 2] && s[i - 2] === t[j - 1]) d = Math.min(d, before[j - 2]! + 1);
       row.push(d);
       if (d < rowMin) rowMin = d;
     }
     if (work) work.cells += t.length;
-    // Each later row's minimum is at least this one's: no alignment can get back under the limit.
-    if (rowMin > limit) return limit + 1;
+    // A cell draws on the two rows above it, so once two rows in a row exceed the limit, all later ones do.
+    if (rowMin > limit && prevMin > limit) return limit + 1;
+    before = prev;
     prev = row;
+    prevMin = rowMin;
   }
-  return prev[t.length]!;
+  const distance = prev[t.length]!;
+  return distance > limit ? limit + 1 : distance;
 }
 
 const squash = (s: string) => s.toLowerCase().replace(/[\s_\-]+/g, '');

@@ -57,22 +57,26 @@ function chooseOrder(input: PlanInput, key: Field, problems: Diagnostic[], decis
  */
 function chooseOrientation(input: PlanInput, key: Field, value: Field | undefined): { vertical: boolean; decision: Decision } {
   const { brief, style, measure } = input;
-  const ctx: LayoutContext = { brief, style, measure, id: idMaker() };
+  if (key.type === 'temporal' || key.type === 'quantitative') {
+    return { vertical: true, decision: { decision: 'vertical bars', rule: `the key is ${key.type}, so it runs left to right as time and numbers do; labels are thinned if crowded` } };
+  }
   const { labels, extent: [lo, hi] } = barsOf(input, key, value);
-  const { plot } = plotFor({
-    left: { kind: 'linear', name: 'value', field: value?.name ?? 'count', title: '', extent: [Math.min(0, lo), Math.max(0, hi)], format: value?.format },
-    bottom: { kind: 'band', name: 'key', field: key.name, title: '', domain: labels }, first: 'left',
-  }, [], ctx).box;
   const { tick } = style.text;
   const widest = max(labels, (l) => measure.width(capText(l), tick.size, tick.weight)) ?? 0;
   const bandNeeded = widest + 2 * style.spacing.tickGap;
   const n = Math.max(1, labels.length);
-  const fitsUpright = bandNeeded * n <= plot.width;
-  const timeLike = key.type === 'temporal' || key.type === 'quantitative';
   const px = (v: number) => `${Math.round(v)} px`;
-  if (timeLike) return { vertical: true, decision: { decision: 'vertical bars', rule: `the key is ${key.type}, so it runs left to right as time and numbers do; labels are thinned if crowded` } };
-  if (fitsUpright) return { vertical: true, decision: { decision: 'vertical bars', rule: `all ${labels.length} labels fit upright: the widest needs ${px(bandNeeded)} and each band has ${px(plot.width / n)}` } };
-  return { vertical: false, decision: { decision: 'horizontal bars', rule: `the widest label needs ${px(bandNeeded)} but ${labels.length} upright bands would have ${px(plot.width / n)} each; rows give labels room to be read without tilting` } };
+  const lying = (each: string) => ({ vertical: false, decision: { decision: 'horizontal bars', rule: `the widest label needs ${px(bandNeeded)} but ${labels.length} upright bands would have ${each}; rows give labels room to be read without tilting` } });
+  // The plot is never wider than the frame inside its padding: past that bound, no need to measure it.
+  const widthBound = brief.size.width - 2 * style.spacing.padding;
+  if (bandNeeded * n > widthBound) return lying(`at most ${px(widthBound / n)} each`);
+  const ctx: LayoutContext = { brief, style, measure, id: idMaker(), ...(input.memo ? { memo: input.memo } : {}) };
+  const { plot } = plotFor({
+    left: { kind: 'linear', name: 'value', field: value?.name ?? 'count', title: '', extent: [Math.min(0, lo), Math.max(0, hi)], format: value?.format },
+    bottom: { kind: 'band', name: 'key', field: key.name, title: '', domain: labels }, first: 'left',
+  }, [], ctx).box;
+  if (bandNeeded * n <= plot.width) return { vertical: true, decision: { decision: 'vertical bars', rule: `all ${labels.length} labels fit upright: the widest needs ${px(bandNeeded)} and each band has ${px(plot.width / n)}` } };
+  return lying(`${px(plot.width / n)} each`);
 }
 
 /** The bar form's plan: its order, orientation and how rows combine, each decision with its rule. */

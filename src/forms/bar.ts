@@ -1,7 +1,7 @@
 import { max, min } from 'd3-array';
 import { deriveBars, type BarDatum, type CapacityFor, type DerivedBars } from '../derive/bars.js';
 import { plotFor } from '../layout/compose.js';
-import type { CartesianDomains, LabelRoom, LayoutContext, PlotArea, ScaleProbe } from '../layout/kit-types.js';
+import { memoized, type CartesianDomains, type LabelRoom, type LayoutContext, type PlotArea, type ScaleProbe } from '../layout/kit-types.js';
 import { valueFormatter } from '../layout/number-format.js';
 import { MAX_LABEL_SHARE } from '../layout/plot-box.js';
 import { asBand, asLinear } from '../layout/scales.js';
@@ -25,10 +25,12 @@ function domainsOf(derived: { query: BarPlan; bars: readonly BarDatum[]; valueNa
   return vertical ? { left: value, bottom: key, first: 'left', zeroLine: 'left' } : { left: key, bottom: value, first: 'bottom', zeroLine: 'bottom' };
 }
 
-/** Each bar's value as its label shows it. */
-function valueTexts(derived: DerivedBars<BarPlan>): Map<BarDatum, string> {
-  const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format);
-  return new Map(derived.bars.map((b) => [b, fmt(b.value)]));
+/** Each bar's value as its label shows it (formatted once per render: the bars drawn are fixed once derived). */
+function valueTexts(derived: DerivedBars<BarPlan>, ctx: LayoutContext): Map<BarDatum, string> {
+  return memoized(ctx, 'bar\u0000value-texts', () => {
+    const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format);
+    return new Map(derived.bars.map((b) => [b, fmt(b.value)]));
+  });
 }
 
 /**
@@ -49,7 +51,7 @@ function labelRoom(derived: DerivedBars<BarPlan>, probe: ScaleProbe, ctx: Layout
   const { style, measure } = ctx;
   const { label, tick } = style.text;
   const gap = style.spacing.labelGap;
-  const texts = valueTexts(derived);
+  const texts = valueTexts(derived, ctx);
   const band = probe.band!;
   const { plot } = probe;
   if (probe.side === 'left') {
@@ -116,7 +118,7 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
   domains: (derived) => domainsOf(derived, derived.query.orientation === 'vertical'),
   room: labelRoom,
   layout(derived, area, ctx) {
-    const texts = valueTexts(derived);
+    const texts = valueTexts(derived, ctx);
     const marks: SceneNode[] = [];
     const labels: TextNode[] = [];
     for (const bar of derived.bars) {

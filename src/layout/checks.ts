@@ -33,20 +33,30 @@ export function textsOffCanvas(texts: readonly TextNode[], size: { width: number
   return texts.filter((t) => t.box.x < -eps || t.box.y < -eps || t.box.x + t.box.width > size.width + eps || t.box.y + t.box.height > size.height + eps);
 }
 
-/** Pairs of texts whose boxes overlap (words drawn over words), in drawing order. */
-export function overlappingTexts(texts: readonly TextNode[]): [TextNode, TextNode][] {
+/** Pairs of things whose boxes overlap by more than float noise (boxes that only touch do not). */
+function overlappingBy<T>(items: readonly T[], box: (t: T) => Box): [T, T][] {
   const eps = 0.01;
-  const pairs: [TextNode, TextNode][] = [];
-  // Sorted by left edge, each text is compared only with those that start before it ends.
-  const sorted = [...texts].sort((a, b) => a.box.x - b.box.x);
+  const pairs: [T, T][] = [];
+  // Sorted by left edge, each box is compared only with those that start before it ends.
+  const sorted = [...items].sort((a, b) => box(a).x - box(b).x);
   for (let i = 0; i < sorted.length; i++) {
-    const a = sorted[i]!;
-    for (let j = i + 1; j < sorted.length && sorted[j]!.box.x < a.box.x + a.box.width - eps; j++) {
-      const b = sorted[j]!;
-      if (a.box.y < b.box.y + b.box.height - eps && b.box.y < a.box.y + a.box.height - eps) pairs.push([a, b]);
+    const a = box(sorted[i]!);
+    for (let j = i + 1; j < sorted.length && box(sorted[j]!).x < a.x + a.width - eps; j++) {
+      const b = box(sorted[j]!);
+      if (a.y < b.y + b.height - eps && b.y < a.y + a.height - eps) pairs.push([sorted[i]!, sorted[j]!]);
     }
   }
   return pairs;
+}
+
+/** Pairs of texts whose boxes overlap (words drawn over words). */
+export function overlappingTexts(texts: readonly TextNode[]): [TextNode, TextNode][] {
+  return overlappingBy(texts, (t) => t.box);
+}
+
+/** Pairs of boxes that overlap. */
+export function overlappingBoxes(boxes: readonly Box[]): [Box, Box][] {
+  return overlappingBy(boxes, (b) => b);
 }
 
 /**

@@ -3,13 +3,13 @@ import { diagnostic } from '../diagnostics/diagnostic.js';
 import { idMaker } from '../scene/ids.js';
 import type { Box, Scene, SceneNode, TextNode } from '../scene/types.js';
 import { nodesOf } from '../scene/walk.js';
-import { valueTicks, type ValueTicks } from './axis.js';
+import type { ValueTicks } from './axis.js';
 import { drawBottomBandAxis, drawLeftBandAxis, drawLinearAxis, drawTimeAxis, rule, type DrawnAxis } from './axes.js';
-import { checkScene } from './checks.js';
+import { checkScene, overlappingBoxes } from './checks.js';
 import { layoutFrame } from './frame.js';
 import { layoutLegend, type LegendLayout, type LegendSpec } from './legend.js';
 import { placeLabels } from './place-labels.js';
-import type { CartesianDomains, FormMarks, FormWords, LabelRoom, LayoutContext, LinearChannel, PlotArea, ScaleProbe, TimeChannel } from './kit-types.js';
+import { memoized, ticksFor, type CartesianDomains, type FormMarks, type FormWords, type LabelRoom, type LayoutContext, type LinearChannel, type PlotArea, type ScaleProbe, type TimeChannel } from './kit-types.js';
 import { plotBox, tickCount, type PlotBox } from './plot-box.js';
 import { bandScale, linearScale, type BandScale, type LinearScale, type Scale } from './scales.js';
 import { timeScale, type TimeScale } from './time-scale.js';
@@ -31,7 +31,7 @@ function leftLinear(channel: LinearChannel, plot: Box, room: LabelRoom, ctx: Lay
   const [top, bottom] = [plot.y, plot.y + plot.height];
   const rangeBottom = bottom - (room.show ? room.low : 0);
   const rangeTop = top + (room.show ? room.high : 0);
-  const vt = valueTicks(channel.extent[0], channel.extent[1], rangeBottom - rangeTop, 'vertical', ctx.style.text.tick, ctx.measure, channel.format);
+  const vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeBottom - rangeTop, 'vertical', channel.format);
   return linearScale(vt, [rangeBottom, rangeTop]);
 }
 
@@ -42,7 +42,7 @@ function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], 
   const halfTick = (i: number) => ctx.measure.width(probeLabels[i]!, tick.size, tick.weight) / 2;
   const rangeLeft = left + Math.max(room.show ? room.low : 0, halfTick(0) - ctx.style.spacing.tickGap);
   const rangeRight = right - Math.max(room.show ? room.high : 0, halfTick(probeLabels.length - 1));
-  const vt = valueTicks(channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', tick, ctx.measure, channel.format);
+  const vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel.format);
   return linearScale(vt, [rangeLeft, rangeRight]);
 }
 
@@ -83,7 +83,7 @@ function fitScales<D>(form: CartesianForm<D>, derived: D, domains: CartesianDoma
   const { plot, left } = box;
   const bottomBand = domains.bottom.kind === 'band' ? bandScale(domains.bottom.domain, [plot.x, plot.x + plot.width], ctx.style.spacing.bandPadding) : undefined;
   const leftBand: BandScale | undefined = left.kind === 'band' ? left.band : undefined;
-  const bottomProbe = domains.bottom.kind === 'linear' ? valueTicks(domains.bottom.extent[0], domains.bottom.extent[1], plot.width, 'horizontal', ctx.style.text.tick, ctx.measure, domains.bottom.format) : undefined;
+  const bottomProbe = domains.bottom.kind === 'linear' ? ticksFor(ctx, domains.bottom.extent[0], domains.bottom.extent[1], plot.width, 'horizontal', domains.bottom.format) : undefined;
   const probe: ScaleProbe | undefined = left.kind === 'linear'
     ? { plot, side: 'left', band: bottomBand, linear: linearScale(left.probe, [plot.y + plot.height, plot.y]) }
     : bottomProbe ? { plot, side: 'bottom', band: leftBand, linear: linearScale(bottomProbe, [plot.x, plot.x + plot.width]) } : undefined;
@@ -140,6 +140,9 @@ export function placeLegend(spec: LegendSpec | undefined, body: Box, ctx: Layout
  */
 export function placeFormLabels(labels: readonly TextNode[], fixed: readonly SceneNode[], size: { width: number; height: number }, drop: ReadonlySet<string> = new Set()): { kept: TextNode[]; dropped: TextNode[] } {
   const obstacles = fixed.flatMap((n) => (n.kind === 'text' ? [n.box] : []));
+  // Most forms place their labels clear of everything already: a sweep finds that without building an index.
+  const inside = (b: Box) => b.x >= -1e-6 && b.y >= -1e-6 && b.x + b.width <= size.width + 1e-6 && b.y + b.height <= size.height + 1e-6;
+  if (drop.size === 0 && labels.every((l) => inside(l.box)) && overlappingBoxes([...labels.map((l) => l.box), ...obstacles]).length === 0) return { kept: [...labels], dropped: [] };
   const { unplaced } = placeLabels(labels.filter((l) => !drop.has(l.id)).map((l) => ({ id: l.id, boxes: [l.box] })), obstacles, { x: 0, y: 0, ...size });
   const out = new Set([...unplaced, ...drop]);
   return { kept: labels.filter((l) => !out.has(l.id)), dropped: labels.filter((l) => out.has(l.id)) };
@@ -161,7 +164,8 @@ export interface PlotLayout {
  */
 export function plotFor(domains: CartesianDomains, notes: string[], ctx: LayoutContext, minLeftWidth = 0): PlotLayout {
   const { brief, style, measure } = ctx;
-  const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes }, style, brief.size, measure);
+  // The frame depends only on its notes within one render: laid out once for planning and drawing.
+  const frame = memoized(ctx, `frame\u0000${notes.join('\u0000')}`, () => layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes }, style, brief.size, measure));
   const { body, legend } = placeLegend(domains.legend, frame.body, ctx);
   return { frame, body, ...(legend ? { legend } : {}), box: plotBox(body, domains, ctx, minLeftWidth) };
 }

@@ -3,6 +3,7 @@ import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Box, SceneNode, TextNode } from '../scene/types.js';
 import type { Style } from '../style/types.js';
+import { valueTicks, type ValueTicks } from './axis.js';
 import type { LegendSpec } from './legend.js';
 import type { BandScale, LinearScale, Scale } from './scales.js';
 
@@ -13,6 +14,21 @@ export interface LayoutContext {
   measure: TextMeasurer;
   /** Unique ids within one chart, derived from text (see scene/ids.ts). */
   id: (prefix: string, text: string) => string;
+  /**
+   * Results of measuring within one render (fitted labels, laid-out frames), so planning and
+   * drawing measure the same text once. Pure: a cache of deterministic results, never read
+   * across renders. Default: none (nothing is remembered).
+   */
+  memo?: Map<string, unknown>;
+}
+
+/** A result computed once per render under `key` (or every time, without a memo). */
+export function memoized<T>(ctx: Pick<LayoutContext, 'memo'>, key: string, compute: () => T): T {
+  if (!ctx.memo) return compute();
+  if (ctx.memo.has(key)) return ctx.memo.get(key) as T;
+  const value = compute();
+  ctx.memo.set(key, value);
+  return value;
 }
 
 /** A continuous channel: the data extent its axis must cover. */
@@ -108,4 +124,9 @@ export interface FormWords {
   description: string;
   /** Notes printed under the chart: what was folded, combined or left out. */
   notes: string[];
+}
+
+/** The ticks of a value axis of this extent and length, chosen once per render (the tick search is the costly part of layout). */
+export function ticksFor(ctx: LayoutContext, lo: number, hi: number, length: number, direction: 'vertical' | 'horizontal', format: string | undefined): ValueTicks {
+  return memoized(ctx, `ticks\u0000${lo}\u0000${hi}\u0000${length}\u0000${direction}\u0000${format ?? ''}`, () => valueTicks(lo, hi, length, direction, ctx.style.text.tick, ctx.measure, format));
 }

@@ -1,8 +1,8 @@
 import { max } from 'd3-array';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Box } from '../scene/types.js';
-import { valueTicks, type ValueTicks } from './axis.js';
-import type { BandChannel, CartesianDomains, LayoutContext } from './kit-types.js';
+import type { ValueTicks } from './axis.js';
+import { memoized, ticksFor, type BandChannel, type CartesianDomains, type LayoutContext } from './kit-types.js';
 import { bandScale, type BandScale } from './scales.js';
 import { timeScale, type TimeScale } from './time-scale.js';
 import { capText, fitLabel, lineHeight, textBoxHeight } from './text.js';
@@ -41,7 +41,8 @@ function fitBandLabels(channel: BandChannel, band: BandScale, body: Box, ctx: La
   const maxLabel = body.width * MAX_LABEL_SHARE;
   const twoLines = band.step >= 2 * lineHeight(tick, style.spacing.lineHeight);
   // A long label wraps onto a second line where the band is tall enough, and is shortened only beyond that.
-  const fitted = channel.domain.map((label) => fitLabel(measure, capText(label), tick, maxLabel, twoLines ? 2 : 1));
+  const lines = twoLines ? 2 : 1;
+  const fitted = channel.domain.map((label) => memoized(ctx, `fit\u0000${maxLabel}\u0000${lines}\u0000${label}`, () => fitLabel(measure, capText(label), tick, maxLabel, lines)));
   const truncated = fitted.filter((l) => l.shortened).length;
   const diagnostics = truncated ? [diagnostic('layout.label-truncated', `${truncated} key label${truncated === 1 ? ' is' : 's are'} longer than ${Math.round(maxLabel)} px${twoLines ? ' on two lines' : ''} and shortened with "…"; the full text stays in the SVG title of each bar`, { field: channel.field, hint: 'use shorter labels, or a wider chart with `size:`' })] : [];
   return { band, lines: fitted.map((f) => f.lines), shortened: fitted.map((f) => f.shortened), diagnostics };
@@ -68,7 +69,7 @@ export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext
   let leftWidth: number;
   if (domains.left.kind === 'linear') {
     const [lo, hi] = domains.left.extent;
-    const probe = valueTicks(lo, hi, bottom - top, 'vertical', tick, measure, domains.left.format);
+    const probe = ticksFor(ctx, lo, hi, bottom - top, 'vertical', domains.left.format);
     left = { kind: 'linear', probe };
     leftWidth = max(probe.labels, (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
   } else if (domains.left.kind === 'time') {

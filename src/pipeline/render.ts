@@ -134,13 +134,15 @@ export function renderInputs(inputs: RenderInputs, measure: TextMeasurer, opts: 
     all.push(...locate(checkBriefRules(brief, FORMS, lenient).problems));
     return { brief, rationale: [], diagnostics: all };
   }
-  const choice = choose(fields.value, brief, { style, measure, lenient, forms: FORMS }, table);
+  // One memory of measured results for the whole render: planning and drawing measure alike.
+  const memo = new Map<string, unknown>();
+  const choice = choose(fields.value, brief, { style, measure, lenient, forms: FORMS, memo }, table);
   all.push(...locate(choice.diagnostics));
   lap('choose');
   if (!choice.ok) return { brief, rationale: [], diagnostics: all };
   const { rationale } = choice.value;
   const form = formNamed(choice.value.form)!;
-  const ctx: LayoutContext = { brief, style, measure, id: idMaker() };
+  const ctx: LayoutContext = { brief, style, measure, id: idMaker(), memo };
   const derived = form.derive(table, choice.value.plan, ctx);
   all.push(...locate(derived.diagnostics));
   lap('derive');

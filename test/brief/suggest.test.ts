@@ -28,3 +28,18 @@ describe('near-miss suggestions', () => {
     expect(editDistance('kitten', 'sitting')).toBe(3);
   });
 });
+
+describe('typos of swapped letters', () => {
+  // Found in a new-user trial: the README promises "did you mean" for misspelt names, but two
+  // swapped letters counted as two edits, past the limit for short names.
+  it('count one swap of neighbouring letters as one edit', () => {
+    expect(editDistance('titel', 'title')).toBe(1);
+    expect(editDistance('cuont', 'count')).toBe(1);
+    expect(editDistance('ca', 'abc')).toBe(3); // optimal string alignment: no edit of a swapped pair twice
+  });
+
+  it('suggest the option or column a swap misspelt', () => {
+    expect(nearestName('titel', ['title', 'subtitle', 'source'])).toBe('title');
+    expect(nearestName('cuont', ['species', 'count'])).toBe('count');
+  });
+});
