@@ -118,7 +118,7 @@ export function checkBriefValue(value: unknown, parsed?: ParsedBrief, vocabulary
     })]);
   }
   const raw = value as Record<string, unknown>;
-  const problems = [...validateAgainstSchema(raw, briefSchema(vocabulary)).map((d) => notSupportedYet(d, vocabulary)), ...checkDataSource(raw), ...checkFormats(raw)];
+  const problems = [...validateAgainstSchema(raw, vocabulary.schema ?? briefSchema(vocabulary)).map((d) => notSupportedYet(d, vocabulary)), ...checkDataSource(raw), ...checkFormats(raw)];
   const diagnostics = withPositions(problems, located);
   if (hasErrors(diagnostics)) return failure(diagnostics);
   return success({ brief: resolveBrief(raw), parsed: located }, diagnostics);

@@ -98,6 +98,8 @@ export interface ResolvedBrief {
 export interface BriefVocabulary {
   intents: readonly Intent[];
   forms: readonly FormName[];
+  /** The schema over this vocabulary, when it is built once ahead (it is rebuilt per brief otherwise). */
+  schema?: import('./schema.js').BriefSchema;
 }
 
 /** Intent-specific options that name a column of the data. */

@@ -42,7 +42,7 @@ function fitBandLabels(channel: BandChannel, band: BandScale, body: Box, ctx: La
   const twoLines = band.step >= 2 * lineHeight(tick, style.spacing.lineHeight);
   // A long label wraps onto a second line where the band is tall enough, and is shortened only beyond that.
   const lines = twoLines ? 2 : 1;
-  const fitted = channel.domain.map((label) => memoized(ctx, `fit\u0000${maxLabel}\u0000${lines}\u0000${label}`, () => fitLabel(measure, capText(label), tick, maxLabel, lines)));
+  const fitted = channel.domain.map((label) => fitLabel(measure, capText(label), tick, maxLabel, lines));
   const truncated = fitted.filter((l) => l.shortened).length;
   const diagnostics = truncated ? [diagnostic('layout.label-truncated', `${truncated} key label${truncated === 1 ? ' is' : 's are'} longer than ${Math.round(maxLabel)} px${twoLines ? ' on two lines' : ''} and shortened with "…"; the full text stays in the SVG title of each bar`, { field: channel.field, hint: 'use shorter labels, or a wider chart with `size:`' })] : [];
   return { band, lines: fitted.map((f) => f.lines), shortened: fitted.map((f) => f.shortened), diagnostics };
@@ -77,7 +77,9 @@ export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext
     left = { kind: 'time', probe };
     leftWidth = max(probe.labels, (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
   } else {
-    const fitted = fitBandLabels(domains.left, bandScale(domains.left.domain, [top, bottom], style.spacing.bandPadding), body, ctx);
+    const band = bandScale(domains.left.domain, [top, bottom], style.spacing.bandPadding);
+    // Planning and drawing fit the same labels to the same column: once per render.
+    const fitted = memoized(ctx, `band-labels\u0000${body.width}\u0000${top}\u0000${bottom}\u0000${domains.left.domain.join('\u0000')}`, () => fitBandLabels(domains.left as BandChannel, band, body, ctx));
     left = { kind: 'band', ...fitted };
     leftWidth = max(fitted.lines.flat(), (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
   }

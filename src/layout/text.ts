@@ -1,4 +1,4 @@
-import type { TextMeasurer, TextRuler } from '../font/measurer.js';
+import { WIDTH_CACHE_MAX_TEXT, type TextMeasurer, type TextRuler } from '../font/measurer.js';
 import type { Role, TextNode } from '../scene/types.js';
 import type { TextStyle } from '../style/types.js';
 
@@ -117,6 +117,13 @@ function wrapLines(measure: TextMeasurer, text: string, style: TextStyle, maxWid
   const restFrom = (p: number, tail: string) => [tail, ...paragraphs.slice(p + 1)].filter(Boolean).join(' ');
   let rest = restAfter === 0 ? restFrom(-1, '') : '';
   for (let p = 0; p < paragraphs.length && lines.length < maxLines; p++) {
+    // A short paragraph that fits is one line: its width comes from the cache (the ruler gives the
+    // same width), and titles and notes mostly fit.
+    if (paragraphs[p]!.length <= WIDTH_CACHE_MAX_TEXT && measure.width(paragraphs[p]!, style.size, style.weight) <= maxWidth) {
+      lines.push(paragraphs[p]!);
+      if (lines.length === restAfter) rest = restFrom(p, '');
+      continue;
+    }
     const r = measure.ruler(paragraphs[p]!, style.size, style.weight);
     wrapParagraph(r, maxWidth, (start, end) => {
       lines.push(r.slice(start, end));

@@ -3,8 +3,10 @@ import type { BriefVocabulary } from '../brief/types.js';
 import { supportedIntents } from '../choose/rules.js';
 import { FORMS } from '../forms/registry.js';
 
-/** What a brief may name today: the intents the rule table answers and the forms the registry draws. */
-export const VOCABULARY: BriefVocabulary = { intents: supportedIntents(), forms: FORMS.map((f) => f.name) };
+const words = { intents: supportedIntents(), forms: FORMS.map((f) => f.name) };
 
 /** The JSON Schema of a brief, as printed by `chartwright schema`: it offers only what is drawn. */
-export const BRIEF_SCHEMA: BriefSchema = briefSchema(VOCABULARY);
+export const BRIEF_SCHEMA: BriefSchema = briefSchema(words);
+
+/** What a brief may name today: the intents the rule table answers and the forms the registry draws (with their schema). */
+export const VOCABULARY: BriefVocabulary = { ...words, schema: BRIEF_SCHEMA };
