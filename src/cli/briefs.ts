@@ -58,6 +58,8 @@ export function readBriefFile(file: string, maxBytes: number = INPUT_LIMITS.brie
     return { problem: diagnostic('cli.brief-too-large', `the brief file is larger than ${describeBytes(maxBytes)}`, { file, expected: `at most ${describeBytes(maxBytes)}`, hint: `put large data in a data file (data: table.csv), or raise the limit with ${INPUT_LIMITS.brief.variable}=<bytes>` }) };
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    return { problem: diagnostic('brief.not-found', code === 'ENOENT' ? 'the brief file does not exist' : `the brief file cannot be read (${code})`, { file, hint: 'check the path; briefs are .yaml, .yml or .json files' }) };
+    const why = code === 'ENOENT' ? 'the brief file does not exist' : code === 'EISDIR' ? 'this is a folder, not a brief file' : `the brief file cannot be read (${code})`;
+    const hint = code === 'EISDIR' ? 'name one brief file here (render and check also take folders of briefs)' : 'check the path; briefs are .yaml, .yml or .json files';
+    return { problem: diagnostic('brief.not-found', why, { file, hint }) };
   }
 }

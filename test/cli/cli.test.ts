@@ -182,6 +182,16 @@ describe('chartwright explain', () => {
     expect(JSON.parse(t.out()).diagnostics.map((d: { code: string }) => d.code)).toEqual(['brief.unknown-column', 'choice.baseline-fit-refused']);
   });
 
+  // Found in a new-user trial: `explain folder/` printed a raw "(EISDIR)".
+  it('says a folder is not a brief file, in words', async () => {
+    const dir = workspace();
+    mkdirSync(join(dir, 'briefs'));
+    const t = io(dir);
+    expect(await runCli(['explain', 'briefs'], t.io)).toBe(EXIT.FAILED);
+    expect(t.out()).toContain('this is a folder, not a brief file');
+    expect(t.out()).not.toContain('EISDIR');
+  });
+
   it('explains in words, and fails for a brief with errors', async () => {
     const dir = workspace();
     const t = io(dir);
