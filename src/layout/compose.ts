@@ -139,7 +139,7 @@ export function placeLegend(spec: LegendSpec | undefined, body: Box, ctx: Layout
  * rest are left out, never drawn on top of another (common practice for chart labels).
  */
 export function placeFormLabels(labels: readonly TextNode[], fixed: readonly SceneNode[], size: { width: number; height: number }, drop: ReadonlySet<string> = new Set()): { kept: TextNode[]; dropped: TextNode[] } {
-  const obstacles = fixed.flatMap((n) => (n.kind === 'text' ? [n.box] : []));
+  const obstacles = fixed.filter((n): n is TextNode => n.kind === 'text').map((n) => n.box);
   // Most forms place their labels clear of everything already: a sweep finds that without building an index.
   const inside = (b: Box) => b.x >= -1e-6 && b.y >= -1e-6 && b.x + b.width <= size.width + 1e-6 && b.y + b.height <= size.height + 1e-6;
   if (drop.size === 0 && labels.every((l) => inside(l.box)) && overlappingBoxes([...labels.map((l) => l.box), ...obstacles]).length === 0) return { kept: [...labels], dropped: [] };
