@@ -8,7 +8,7 @@ import { asBand, asLinear } from '../layout/scales.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
 import { barDescription, barValueTitle, foldNote, foldOf } from './bar-text.js';
-import { planBar, type BarPlan } from './bar-plan.js';
+import { barGroups, planBar, type BarPlan } from './bar-plan.js';
 import type { FormDef } from './types.js';
 
 /** The narrowest bar band drawn, in px; more bars than fit at this step are folded. */
@@ -114,7 +114,7 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
   noun: 'bar chart',
   traits: { lengthCoded: true, connectsKey: false, radial: false, coloursCategories: false, axisPerValue: false },
   plan: planBar,
-  derive: (table, plan, ctx) => deriveBars(table, plan, capacityFor(plan, ctx)),
+  derive: (table, plan, ctx) => deriveBars(table, plan, capacityFor(plan, ctx), barGroups(table, plan.key, plan.value, ctx)),
   domains: (derived) => domainsOf(derived, derived.query.orientation === 'vertical'),
   room: labelRoom,
   layout(derived, area, ctx) {
