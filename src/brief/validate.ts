@@ -13,7 +13,10 @@ function ownChild(map: Record<string, SchemaNode> | undefined, key: string): Sch
 
 /** Appends a key to a JSON-pointer path, escaping `~` and `/` as RFC 6901 asks. */
 export function pointer(path: string, key: string | number): string {
-  return `${path}/${String(key).replace(/~/g, '~0').replace(/\//g, '~1')}`;
+  const text = String(key);
+  // Most keys have neither: every row of inline data gets a path per cell, so skip the two passes.
+  if (!text.includes('~') && !text.includes('/')) return `${path}/${text}`;
+  return `${path}/${text.replace(/~/g, '~0').replace(/\//g, '~1')}`;
 }
 
 function typeName(value: unknown): string {
@@ -112,7 +115,6 @@ function checkArray(value: unknown[], schema: SchemaNode, path: string): Diagnos
 
 function checkObject(value: Record<string, unknown>, schema: SchemaNode, path: string): Diagnostic[] {
   const problems: Diagnostic[] = [];
-  const known = Object.keys(schema.properties ?? {});
   for (const name of schema.required ?? []) {
     if (!Object.hasOwn(value, name)) {
       const child = ownChild(schema.properties, name) ?? {};
@@ -127,6 +129,7 @@ function checkObject(value: Record<string, unknown>, schema: SchemaNode, path: s
       problems.push(...validateNode(item, child, pointer(path, key)));
     } else if (schema.additionalProperties === false) {
       // Past the number shown, a suggestion would be computed only to be dropped.
+      const known = Object.keys(schema.properties ?? {});
       const hint = ++unknown <= MAX_BRIEF_PROBLEMS ? suggestionHint(key, known, 'option') : 'remove it';
       problems.push(diagnostic('brief.unknown-option', `\`${key}\` is not a brief option${path ? ` under ${path}` : ''}`, {
         path: pointer(path, key), found: key, expected: `one of ${known.join(', ')}`, hint,

@@ -1,8 +1,15 @@
 import { readdirSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
+import type { ParsedBrief } from '../brief/parse.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { describeBytes, INPUT_LIMITS, readBounded } from '../io/bounded-read.js';
 import { canonicalPath } from './outputs.js';
+
+/** A brief file's text and its parse, read once for both planning and rendering. */
+export interface BriefSource {
+  text: string;
+  parsed: ParsedBrief;
+}
 
 /** One brief of a run: its file, or what is wrong with the path that should have given briefs. */
 export interface BriefEntry {

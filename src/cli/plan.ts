@@ -2,7 +2,7 @@ import { basename, dirname, extname, isAbsolute, join, relative, resolve } from 
 import { readBrief, withPositions } from '../brief/resolve.js';
 import type { ResolvedBrief } from '../brief/types.js';
 import { diagnostic, inFile, type Diagnostic } from '../diagnostics/diagnostic.js';
-import { readBriefFile, type BriefEntry } from './briefs.js';
+import { readBriefFile, type BriefEntry, type BriefSource } from './briefs.js';
 import { canonicalPath, plannedOutputs, type OutputRules, type PlannedFile } from './outputs.js';
 
 /** What a run will do with one brief, decided before anything is written. */
@@ -16,6 +16,11 @@ export interface BriefPlan {
   inputs: string[];
   /** Set when the entry is not a brief at all (an unreadable or empty folder): nothing to render. */
   failed?: Diagnostic;
+  /**
+   * The brief as read and parsed for planning, when it parsed: rendered from these, so the file
+   * is read and parsed once and the outputs planned are those of the text rendered.
+   */
+  source?: BriefSource;
 }
 
 /** How a run writes. */
@@ -45,11 +50,12 @@ function planBrief(entry: BriefEntry, many: boolean, opts: PlanOptions, cwd: str
   if (entry.problem) return { file, files: [], problems: [], inputs: [], failed: entry.problem };
   const read = readBriefFile(file, opts.maxBriefBytes);
   const parsed = 'text' in read ? readBrief(read.text) : undefined;
-  if (!parsed?.ok) return { file, files: [], problems: [], inputs: [file] };
+  if (!('text' in read) || !parsed?.ok) return { file, files: [], problems: [], inputs: [file] };
   const { brief } = parsed.value;
   const outputs = plannedOutputs(file, brief.output, opts);
   const files = opts.scene ? [...outputs.files, sceneFile(opts.scene, file, many, cwd)] : outputs.files;
-  return { file, files, problems: inFile(withPositions(outputs.problems, parsed.value.parsed), file), inputs: inputsOf(file, brief) };
+  const source = { text: read.text, parsed: parsed.value.parsed };
+  return { file, files, problems: inFile(withPositions(outputs.problems, parsed.value.parsed), file), inputs: inputsOf(file, brief), source };
 }
 
 function collisionProblem(path: string, others: string[], cwd: string, file?: string): Diagnostic {

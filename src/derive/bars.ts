@@ -5,7 +5,7 @@ import type { FieldRef } from '../fields/types.js';
 import type { Table } from '../table/types.js';
 import { AGGREGATORS } from './aggregate.js';
 import { firstUnevenStep } from './dates.js';
-import { groupRows, type RowGroup } from './group.js';
+import { groupRows, type Grouped, type RowGroup } from './group.js';
 import { compareNatural, compareText } from './order.js';
 
 /** What the bar derivation needs from the plan. */
@@ -194,9 +194,11 @@ function combineGroups(groups: RowGroup[], query: BarQuery, problems: Diagnostic
 /**
  * The derive stage for bars: rows → one bar per key, combined by the aggregate, in the chosen
  * order, folded to what the plot can show. Missing values are left out, never drawn as 0.
+ * `grouped` is the table's rows grouped by the query's key and value, when already at hand.
  */
-export function deriveBars<Q extends BarQuery>(table: Table, query: Q, capacityFor: CapacityFor): Outcome<DerivedBars<Q>> {
-  const { groups, diagnostics: problems } = groupRows(table, { keys: [query.key], value: query.value });
+export function deriveBars<Q extends BarQuery>(table: Table, query: Q, capacityFor: CapacityFor, grouped: Grouped = groupRows(table, { keys: [query.key], value: query.value })): Outcome<DerivedBars<Q>> {
+  const { groups } = grouped;
+  const problems = [...grouped.diagnostics];
   const valueName = query.value?.name ?? 'count';
   if (groups.length === 0) {
     problems.push(diagnostic('derive.no-rows', 'no row has both a key and a usable value, so there is nothing to draw', {

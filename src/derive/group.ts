@@ -38,12 +38,18 @@ function missingDiagnostic(rows: number[], noun: 'line' | 'row', what: string, t
   });
 }
 
+/** A table's rows in groups, and what was left out of them. */
+export interface Grouped {
+  groups: RowGroup[];
+  diagnostics: Diagnostic[];
+}
+
 /**
  * Groups a table's rows by their key labels, keeping each group's values and source rows, in
  * order of first appearance. Rows with no key or no usable value are left out, each kind named
  * in one diagnostic. Every form groups through here.
  */
-export function groupRows(table: Table, query: GroupQuery): { groups: RowGroup[]; diagnostics: Diagnostic[] } {
+export function groupRows(table: Table, query: GroupQuery): Grouped {
   const keyColumns = query.keys.map((k) => columnOf(table, k.name)!);
   const valueColumn = query.value ? columnOf(table, query.value.name)! : undefined;
   const orders = query.keys.map((k, i) => keyOrderOf(k, keyColumns[i]!));

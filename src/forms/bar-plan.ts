@@ -3,12 +3,13 @@ import type { Aggregate } from '../brief/types.js';
 import type { Decision } from '../choose/types.js';
 import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import { AGGREGATORS } from '../derive/aggregate.js';
-import { groupRows } from '../derive/group.js';
+import { groupRows, type Grouped } from '../derive/group.js';
 import { isOrdered, refOf, type Field, type FieldRef } from '../fields/types.js';
 import { plotFor } from '../layout/compose.js';
-import type { LayoutContext } from '../layout/kit-types.js';
+import { memoized, type LayoutContext } from '../layout/kit-types.js';
 import { capText } from '../layout/text.js';
 import { idMaker } from '../scene/ids.js';
+import type { Table } from '../table/types.js';
 import type { Planned, PlanInput } from './types.js';
 
 /** How bars are laid out and ordered. */
@@ -22,9 +23,14 @@ export interface BarPlan {
   aggregate: Aggregate;
 }
 
+/** The table's rows grouped by the bars' key, once per render: planning and deriving both need them. */
+export function barGroups(table: Table, key: FieldRef, value: FieldRef | undefined, ctx: Pick<LayoutContext, 'memo'>): Grouped {
+  return memoized(ctx, `bar\u0000groups\u0000${key.name}\u0000${value?.name ?? ''}`, () => groupRows(table, { keys: [key], value }));
+}
+
 /** The bars' labels and the value extent they span, combined as they will be drawn. */
 function barsOf(input: PlanInput, key: Field, value: Field | undefined): { labels: string[]; extent: [number, number] } {
-  const { groups } = groupRows(input.table, { keys: [refOf(key)], value: value && refOf(value) });
+  const { groups } = barGroups(input.table, refOf(key), value && refOf(value), input);
   const combine = AGGREGATORS[input.brief.aggregate].combine;
   // d3-array's extent loops; Math.min(...values) overflows the stack beyond about 120,000 keys.
   const [lo, hi] = extent(groups, (g) => combine(g.values));

@@ -8,7 +8,7 @@ import { asBand, asLinear } from '../layout/scales.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
 import { barDescription, barValueTitle, foldNote, foldOf } from './bar-text.js';
-import { planBar, type BarPlan } from './bar-plan.js';
+import { barGroups, planBar, type BarPlan } from './bar-plan.js';
 import type { FormDef } from './types.js';
 
 /** The narrowest bar band drawn, in px; more bars than fit at this step are folded. */
@@ -81,12 +81,14 @@ function barRect(derived: DerivedBars<BarPlan>, bar: BarDatum, area: PlotArea, c
   const [band, value] = vertical ? [asBand(area.x), asLinear(area.y)] : [asBand(area.y), asLinear(area.x)];
   const [v0, v1] = [value.map(0), value.map(bar.value)];
   const [b0, thickness] = [band.start(bar.label), band.bandwidth];
-  const geometry = vertical
-    ? { x: b0, y: Math.min(v0, v1), width: thickness, height: Math.abs(v1 - v0) }
-    : { x: Math.min(v0, v1), y: b0, width: Math.abs(v1 - v0), height: thickness };
+  const [low, length] = [Math.min(v0, v1), Math.abs(v1 - v0)];
   const { palette } = ctx.style;
   const fill = bar.folds !== undefined ? palette.others : bar.value < 0 ? palette.negative : palette.primary;
-  return { kind: 'rect', id: ctx.id('bar', bar.label), role: 'bar', datum: barDatum(derived, bar), ...geometry, fill };
+  const id = ctx.id('bar', bar.label);
+  const datum = barDatum(derived, bar);
+  return vertical
+    ? { kind: 'rect', id, role: 'bar', datum, x: b0, y: low, width: thickness, height: length, fill }
+    : { kind: 'rect', id, role: 'bar', datum, x: low, y: b0, width: length, height: thickness, fill };
 }
 
 /** A bar's value label just beyond its end: above or below upright bars, right or left of lying ones. */
@@ -99,10 +101,9 @@ function valueLabel(derived: DerivedBars<BarPlan>, bar: BarDatum, text: string, 
   const end = value.map(bar.value);
   const middle = band.center(bar.label);
   const box = textBoxHeight(measure, label);
-  const place = vertical
-    ? { x: middle, top: bar.value >= 0 ? end - gap - box : end + gap, anchor: 'middle' as const }
-    : { x: bar.value >= 0 ? end + gap : end - gap, top: middle - box / 2, anchor: bar.value >= 0 ? ('start' as const) : ('end' as const) };
-  return textNode(measure, { id: ctx.id('label', bar.label), role: 'label', text, style: label, ...place });
+  const id = ctx.id('label', bar.label);
+  if (vertical) return textNode(measure, { id, role: 'label', text, style: label, x: middle, top: bar.value >= 0 ? end - gap - box : end + gap, anchor: 'middle' });
+  return textNode(measure, { id, role: 'label', text, style: label, x: bar.value >= 0 ? end + gap : end - gap, top: middle - box / 2, anchor: bar.value >= 0 ? 'start' : 'end' });
 }
 
 /**
@@ -114,7 +115,7 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
   noun: 'bar chart',
   traits: { lengthCoded: true, connectsKey: false, radial: false, coloursCategories: false, axisPerValue: false },
   plan: planBar,
-  derive: (table, plan, ctx) => deriveBars(table, plan, capacityFor(plan, ctx)),
+  derive: (table, plan, ctx) => deriveBars(table, plan, capacityFor(plan, ctx), barGroups(table, plan.key, plan.value, ctx)),
   domains: (derived) => domainsOf(derived, derived.query.orientation === 'vertical'),
   room: labelRoom,
   layout(derived, area, ctx) {

@@ -11,20 +11,26 @@ export type BoundedText = { ok: true; text: string } | { ok: false; tooLarge: tr
 export function readBounded(path: string, limit: number): BoundedText {
   const fd = openSync(path, 'r');
   try {
-    const buffer = Buffer.allocUnsafe(Math.min(limit + 1, 64 * 1024));
-    const chunks: Buffer[] = [];
-    let total = 0;
-    while (total <= limit) {
-      const n = readSync(fd, buffer, 0, Math.min(buffer.length, limit + 1 - total), null);
-      if (n === 0) break;
-      chunks.push(Buffer.from(buffer.subarray(0, n)));
-      total += n;
-    }
-    if (total > limit) return { ok: false, tooLarge: true };
-    return { ok: true, text: Buffer.concat(chunks, total).toString('utf8') };
+    const bytes = readUpTo(fd, limit + 1);
+    if (bytes.length > limit) return { ok: false, tooLarge: true };
+    return { ok: true, text: bytes.toString('utf8') };
   } finally {
     closeSync(fd);
   }
+}
+
+/** At most `limit` bytes of an open file, read from its current position until its end. */
+export function readUpTo(fd: number, limit: number): Buffer {
+  const buffer = Buffer.allocUnsafe(Math.max(0, Math.min(limit, 64 * 1024)));
+  const chunks: Buffer[] = [];
+  let total = 0;
+  while (total < limit) {
+    const n = readSync(fd, buffer, 0, Math.min(buffer.length, limit - total), null);
+    if (n === 0) break;
+    chunks.push(Buffer.from(buffer.subarray(0, n)));
+    total += n;
+  }
+  return Buffer.concat(chunks, total);
 }
 
 /** Input size limits, in bytes, and the environment variables that raise them. */

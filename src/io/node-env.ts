@@ -1,4 +1,4 @@
-import { createReadStream, readdirSync, readFileSync } from 'node:fs';
+import { closeSync, constants, createReadStream, fstatSync, openSync, readdirSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, isAbsolute, join, resolve } from 'node:path';
 import { diagnostic, failure, type Outcome } from '../diagnostics/diagnostic.js';
@@ -11,7 +11,7 @@ import { resolveStyle } from '../style/resolve.js';
 import type { Style, Weight } from '../style/types.js';
 import type { OutlineSet } from '../svg/glyphs.js';
 import { DEFAULT_MAX_DATA_BYTES, type TableEnv } from '../table/load.js';
-import { describeBytes, INPUT_LIMITS, readBounded } from './bounded-read.js';
+import { describeBytes, INPUT_LIMITS, readBounded, readUpTo } from './bounded-read.js';
 import { packageRoot } from './package-root.js';
 
 /** Style presets shipped in templates/styles. */
@@ -35,6 +35,26 @@ async function readAtMost(stream: AsyncIterable<Buffer | string>, limit: number)
   return all.subarray(0, Math.min(limit, all.length));
 }
 
+/** Largest regular file read in one go; a larger one streams, so a library caller's event loop keeps turning. */
+const DIRECT_READ_BYTES = 1 << 20;
+
+/**
+ * A data file's bytes, at most `limit`. A small regular file (as fstat says) is read directly:
+ * a stream costs a cold CLI run milliseconds to set up. Anything else (a FIFO, a device, a large
+ * file) streams and stops at the limit. The file is opened without blocking, so a FIFO with no
+ * writer yet cannot stall the open.
+ */
+async function readFileAtMost(path: string, limit: number): Promise<Uint8Array> {
+  const fd = openSync(path, constants.O_RDONLY | (constants.O_NONBLOCK ?? 0));
+  try {
+    const stat = fstatSync(fd);
+    if (stat.isFile() && stat.size <= DIRECT_READ_BYTES) return readUpTo(fd, limit);
+  } finally {
+    closeSync(fd);
+  }
+  return readAtMost(createReadStream(path, { highWaterMark: 1 << 20 }), limit);
+}
+
 /** The data size limit: CHARTWRIGHT_MAX_DATA_BYTES when it is a positive whole number, else the default. */
 function maxDataBytes(): number {
   const set = Number(process.env.CHARTWRIGHT_MAX_DATA_BYTES);
@@ -44,7 +64,7 @@ function maxDataBytes(): number {
 /** Reads data files and stdin as bytes, at most the limit the table stage asks for. */
 export function nodeTableEnv(): TableEnv {
   return {
-    readBytes: (path, limit) => readAtMost(createReadStream(path, { highWaterMark: 1 << 20 }), limit),
+    readBytes: readFileAtMost,
     readStdin: (limit) => readAtMost(process.stdin, limit),
     maxDataBytes: maxDataBytes(),
   };

@@ -33,10 +33,10 @@ function thinned(field: string, k: number, total: number, shown: number): Diagno
 function axisTitleNode(side: 'left' | 'bottom', channel: Channel, plot: Box, body: Box, ctx: LayoutContext): TextNode {
   const { style, measure } = ctx;
   const { tickGap, lineHeight: factor } = style.spacing;
-  const base = { id: `axis-title-${channel.name}`, role: 'axis-title' as const, text: channel.title, style: style.text.axisTitle };
-  if (side === 'left') return textNode(measure, { ...base, x: body.x, top: body.y });
+  const title = (x: number, top: number, anchor: TextNode['anchor']) => textNode(measure, { id: `axis-title-${channel.name}`, role: 'axis-title', text: channel.title, style: style.text.axisTitle, x, top, anchor });
+  if (side === 'left') return title(body.x, body.y, 'start');
   const bottom = plot.y + plot.height;
-  return textNode(measure, { ...base, x: plot.x + plot.width / 2, top: bottom + tickGap + lineHeight(style.text.tick, factor) + tickGap, anchor: 'middle' });
+  return title(plot.x + plot.width / 2, bottom + tickGap + lineHeight(style.text.tick, factor) + tickGap, 'middle');
 }
 
 /** A linear axis: a gridline across the plot at each tick (but zero, where a zero line is drawn instead), and each shown tick's label. */

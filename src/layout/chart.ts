@@ -1,6 +1,6 @@
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Box, PanelInfo, Scene, SceneNode } from '../scene/types.js';
-import { nodesOf } from '../scene/walk.js';
+import { allNodes } from '../scene/walk.js';
 import { checkScene } from './checks.js';
 import { layoutCartesian, placeFormLabels, placeLegend, withUnplacedNote, type CartesianForm, type Composed } from './compose.js';
 import { layoutFrame } from './frame.js';
@@ -36,7 +36,7 @@ function composeBody<D>(form: BodyForm<D>, derived: D, ctx: LayoutContext, extra
   const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: [...words.notes, ...extraNotes] }, style, brief.size, measure);
   const { body, legend } = placeLegend(form.legend?.(derived, ctx), frame.body, ctx);
   const drawn = form.layoutBody(derived, body, ctx);
-  const fixed = [...drawn.guides.flatMap(nodesOf), ...(legend?.nodes.flatMap(nodesOf) ?? []), ...frame.texts];
+  const fixed = [...allNodes(drawn.guides), ...allNodes(legend?.nodes ?? []), ...frame.texts];
   const { kept, dropped } = placeFormLabels(drawn.labels, fixed, brief.size, drop);
   const children: SceneNode[] = [...drawn.guides.filter((n) => n.kind !== 'text'), ...drawn.marks, ...drawn.guides.filter((n) => n.kind === 'text'), ...kept, ...(legend?.nodes ?? []), ...frame.texts];
   const first = drawn.panels[0]!;
@@ -47,7 +47,7 @@ function composeBody<D>(form: BodyForm<D>, derived: D, ctx: LayoutContext, extra
       root: { kind: 'group', id: 'chart', role: 'chart', children }, axes: first.axes, plot: first.plot,
       panels: drawn.panels, legends: legend ? [legend.info] : [],
     },
-    diagnostics: [...drawn.diagnostics, ...checkScene(children.flatMap(nodesOf), first.plot, brief.size, measure)],
+    diagnostics: [...drawn.diagnostics, ...checkScene(allNodes(children), first.plot, brief.size, measure)],
     dropped,
   };
 }

@@ -37,13 +37,14 @@ export function textsOffCanvas(texts: readonly TextNode[], size: { width: number
 function overlappingBy<T>(items: readonly T[], box: (t: T) => Box): [T, T][] {
   const eps = 0.01;
   const pairs: [T, T][] = [];
-  // Sorted by left edge, each box is compared only with those that start before it ends.
-  const sorted = [...items].sort((a, b) => box(a).x - box(b).x);
+  // Sorted by left edge, each box is compared only with those that start before it ends. Each
+  // box is looked up once: through the accessor in the sort and sweep it was most of the cost.
+  const sorted = items.map((item) => ({ item, box: box(item) })).sort((a, b) => a.box.x - b.box.x);
   for (let i = 0; i < sorted.length; i++) {
-    const a = box(sorted[i]!);
-    for (let j = i + 1; j < sorted.length && box(sorted[j]!).x < a.x + a.width - eps; j++) {
-      const b = box(sorted[j]!);
-      if (a.y < b.y + b.height - eps && b.y < a.y + a.height - eps) pairs.push([sorted[i]!, sorted[j]!]);
+    const a = sorted[i]!.box;
+    for (let j = i + 1; j < sorted.length && sorted[j]!.box.x < a.x + a.width - eps; j++) {
+      const b = sorted[j]!.box;
+      if (a.y < b.y + b.height - eps && b.y < a.y + a.height - eps) pairs.push([sorted[i]!.item, sorted[j]!.item]);
     }
   }
   return pairs;

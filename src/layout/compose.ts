@@ -2,7 +2,7 @@ import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import { diagnostic } from '../diagnostics/diagnostic.js';
 import { idMaker } from '../scene/ids.js';
 import type { Box, Scene, SceneNode, TextNode } from '../scene/types.js';
-import { nodesOf } from '../scene/walk.js';
+import { allNodes } from '../scene/walk.js';
 import type { ValueTicks } from './axis.js';
 import { drawBottomBandAxis, drawLeftBandAxis, drawLinearAxis, drawTimeAxis, rule, type DrawnAxis } from './axes.js';
 import { checkScene, overlappingBoxes } from './checks.js';
@@ -139,7 +139,7 @@ export function placeLegend(spec: LegendSpec | undefined, body: Box, ctx: Layout
  * rest are left out, never drawn on top of another (common practice for chart labels).
  */
 export function placeFormLabels(labels: readonly TextNode[], fixed: readonly SceneNode[], size: { width: number; height: number }, drop: ReadonlySet<string> = new Set()): { kept: TextNode[]; dropped: TextNode[] } {
-  const obstacles = fixed.flatMap((n) => (n.kind === 'text' ? [n.box] : []));
+  const obstacles = fixed.filter((n): n is TextNode => n.kind === 'text').map((n) => n.box);
   // Most forms place their labels clear of everything already: a sweep finds that without building an index.
   const inside = (b: Box) => b.x >= -1e-6 && b.y >= -1e-6 && b.x + b.width <= size.width + 1e-6 && b.y + b.height <= size.height + 1e-6;
   if (drop.size === 0 && labels.every((l) => inside(l.box)) && overlappingBoxes([...labels.map((l) => l.box), ...obstacles]).length === 0) return { kept: [...labels], dropped: [] };
@@ -198,18 +198,18 @@ function compose<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext, extr
   }
   const { frame, body, legend, box } = placed;
   const sides = domains.first === 'left' ? (['left', 'bottom'] as const) : (['bottom', 'left'] as const);
-  const axes = sides.map((side) => drawAxis(side, domains, scales, box, body, ctx));
+  const [one, two] = sides.map((side) => drawAxis(side, domains, scales, box, body, ctx)) as [DrawnAxis, DrawnAxis];
   const drawn = form.layout(derived, { plot: box.plot, x: scales.x, y: scales.y, room: scales.room }, ctx);
-  const guides: SceneNode[] = [...axes.flatMap((a) => a.labels), ...axes.map((a) => a.title), ...(legend?.nodes.flatMap(nodesOf) ?? []), ...frame.texts];
+  const guides: SceneNode[] = [...one.labels, ...two.labels, one.title, two.title, ...allNodes(legend?.nodes ?? []), ...frame.texts];
   const { kept, dropped } = placeFormLabels(drawn.labels, guides, brief.size, drop);
   const children: SceneNode[] = [
-    ...axes.flatMap((a) => a.grid), ...drawn.marks, ...zeroLine(domains, scales, box.plot, ctx), ...axes.flatMap((a) => a.tickMarks),
-    ...axes.flatMap((a) => a.labels), ...kept, ...axes.map((a) => a.title), ...(legend?.nodes ?? []), ...frame.texts,
+    ...one.grid, ...two.grid, ...drawn.marks, ...zeroLine(domains, scales, box.plot, ctx), ...one.tickMarks, ...two.tickMarks,
+    ...one.labels, ...two.labels, ...kept, one.title, two.title, ...(legend?.nodes ?? []), ...frame.texts,
   ];
-  const info = axes.map((a) => a.info);
-  const checks = checkScene(children.flatMap(nodesOf), box.plot, brief.size, measure);
+  const info = [one.info, two.info];
+  const checks = checkScene(allNodes(children), box.plot, brief.size, measure);
   // In a frame too small for its words, thinned or shortened labels are symptoms of that one error.
-  const diagnostics = checks.some((d) => d.code === 'layout.frame-too-small') ? checks : [...axes.flatMap((a) => a.diagnostics), ...drawn.diagnostics, ...checks];
+  const diagnostics = checks.some((d) => d.code === 'layout.frame-too-small') ? checks : [...one.diagnostics, ...two.diagnostics, ...drawn.diagnostics, ...checks];
   return {
     scene: {
       form: form.name, width: brief.size.width, height: brief.size.height, background: style.background,

@@ -17,6 +17,8 @@ export interface FittedBandLabels {
   lines: string[][];
   /** Which labels were shortened with an ellipsis. */
   shortened: boolean[];
+  /** Width of the widest line, in px. */
+  widest: number;
   diagnostics: Diagnostic[];
 }
 
@@ -45,7 +47,9 @@ function fitBandLabels(channel: BandChannel, band: BandScale, body: Box, ctx: La
   const fitted = channel.domain.map((label) => fitLabel(measure, capText(label), tick, maxLabel, lines));
   const truncated = fitted.filter((l) => l.shortened).length;
   const diagnostics = truncated ? [diagnostic('layout.label-truncated', `${truncated} key label${truncated === 1 ? ' is' : 's are'} longer than ${Math.round(maxLabel)} px${twoLines ? ' on two lines' : ''} and shortened with "…"; the full text stays in the SVG title of each bar`, { field: channel.field, hint: 'use shorter labels, or a wider chart with `size:`' })] : [];
-  return { band, lines: fitted.map((f) => f.lines), shortened: fitted.map((f) => f.shortened), diagnostics };
+  let widest = 0;
+  for (const f of fitted) for (const line of f.lines) widest = Math.max(widest, measure.width(line, tick.size, tick.weight));
+  return { band, lines: fitted.map((f) => f.lines), shortened: fitted.map((f) => f.shortened), widest, diagnostics };
 }
 
 /**
@@ -81,7 +85,7 @@ export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext
     // Planning and drawing fit the same labels to the same column: once per render.
     const fitted = memoized(ctx, `band-labels\u0000${body.width}\u0000${top}\u0000${bottom}\u0000${domains.left.domain.join('\u0000')}`, () => fitBandLabels(domains.left as BandChannel, band, body, ctx));
     left = { kind: 'band', ...fitted };
-    leftWidth = max(fitted.lines.flat(), (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
+    leftWidth = fitted.widest;
   }
   const x = body.x + Math.max(leftWidth, minLeftWidth) + tickGap;
   const right = body.x + body.width - Math.max(0, domains.rightGutter ?? 0);

@@ -1,4 +1,4 @@
-import { scaleBand, scaleLinear } from 'd3-scale';
+import { scaleLinear } from 'd3-scale';
 import type { ValueTicks } from './axis.js';
 import type { TimeScale } from './time-scale.js';
 
@@ -46,15 +46,29 @@ export function linearScale(ticks: ValueTicks, range: [number, number]): LinearS
 
 /**
  * A band scale over categories with the style's padding: `padding` between bands and half of it
- * outside the first and last, so the step is exactly the range divided by the count.
+ * outside the first and last, so the step is exactly the range divided by the count. The
+ * arithmetic is d3-scale's `scaleBand` (align 0.5, no rounding) step for step, written out
+ * because building a d3 band scale rescales on every setter and interns the domain twice, and
+ * layout builds one per plot box it tries. A repeated category keeps its first band, as in d3.
  */
 export function bandScale(domain: readonly string[], range: [number, number], padding: number): BandScale {
-  const band = scaleBand<string>().domain(domain).range(range).paddingInner(padding).paddingOuter(padding / 2);
-  const width = band.bandwidth();
-  return {
-    kind: 'band', domain: band.domain(), range, step: band.step(), bandwidth: width,
-    start: (c) => band(c)!, center: (c) => band(c)! + width / 2,
+  const index = new Map<string, number>();
+  const unique: string[] = [];
+  for (const c of domain) if (!index.has(c)) index.set(c, unique.push(c) - 1);
+  const n = unique.length;
+  const [r0, r1] = range;
+  const reverse = r1 < r0;
+  const stop = reverse ? r0 : r1;
+  let start = reverse ? r1 : r0;
+  const [inner, outer] = [Math.min(1, padding), padding / 2];
+  const step = (stop - start) / Math.max(1, n - inner + outer * 2);
+  start += (stop - start - step * (n - inner)) * 0.5;
+  const width = step * (1 - inner);
+  const at = (c: string) => {
+    const i = index.get(c);
+    return i === undefined ? NaN : start + step * (reverse ? n - 1 - i : i);
   };
+  return { kind: 'band', domain: unique, range, step, bandwidth: width, start: at, center: (c) => at(c) + width / 2 };
 }
 
 /** The scale as a band scale; a form asking for the wrong kind is a defect in that form. */

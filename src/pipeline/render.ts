@@ -23,6 +23,11 @@ import { VOCABULARY } from './vocabulary.js';
 export interface RenderRequest {
   /** Brief text (JSON or YAML), or a brief object. */
   brief: string | Record<string, unknown>;
+  /**
+   * The brief text already parsed, as `parseBriefText` gives it (the CLI parses a brief once to
+   * plan its outputs). Only with a text brief. Default: the text is parsed here.
+   */
+  parsed?: ParsedBrief;
   /** Path of the brief file: data and style paths in it are relative to this. Default: none. */
   file?: string;
   /** Rows to chart when the brief names no data (library use). Default: none. */
@@ -89,7 +94,7 @@ function strictly(diagnostics: Diagnostic[], strict: boolean | undefined): Diagn
 }
 
 function briefStage(req: RenderRequest) {
-  if (typeof req.brief === 'string') return readBrief(req.brief, undefined, VOCABULARY);
+  if (typeof req.brief === 'string') return readBrief(req.brief, req.parsed, VOCABULARY);
   const value = req.rows && req.brief.data === undefined && req.brief.rows === undefined ? { ...req.brief, rows: req.rows } : req.brief;
   return checkBriefValue(value, undefined, VOCABULARY);
 }

@@ -26,8 +26,15 @@ export function slug(text: string): string {
  */
 export function idMaker(): (prefix: string, text: string) => string {
   const used = new Map<string, number>();
+  // A chart asks for ids of one text under several prefixes (bar, label, tick): slugged once.
+  const slugs = new Map<string, string>();
+  const slugOf = (text: string) => {
+    let s = slugs.get(text);
+    if (s === undefined) slugs.set(text, (s = slug(text)));
+    return s;
+  };
   return (prefix, text) => {
-    const base = `${prefix}-${slug(text)}`;
+    const base = `${prefix}-${slugOf(text)}`;
     const n = (used.get(base) ?? 0) + 1;
     used.set(base, n);
     return n === 1 ? base : `${base}-${n}`;

@@ -13,7 +13,8 @@ const WEIGHT_NUMBER = { regular: 400, semibold: 600 } as const;
 
 function datumTitle(datum: Datum | undefined): string {
   if (!datum) return '';
-  const text = Object.entries(datum).map(([k, v]) => `${k}: ${v}`).join(', ');
+  let text = '';
+  for (const key of Object.keys(datum)) text += `${text ? ', ' : ''}${key}: ${datum[key]}`;
   return `<title>${escapeXml(text)}</title>`;
 }
 
@@ -47,11 +48,17 @@ function withDatum(open: string, tag: string, datum: Datum | undefined): string 
   return datum ? `${open}>${datumTitle(datum)}</${tag}>` : `${open}/>`;
 }
 
+function writeNodes(nodes: readonly SceneNode[], mode: TextMode, defs: GlyphDefs | undefined): string {
+  let out = '';
+  for (const node of nodes) out += writeNode(node, mode, defs);
+  return out;
+}
+
 function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined): string {
   const cls = ` class="${escapeXml(node.role)}"`;
   switch (node.kind) {
     case 'group':
-      return `<g${cls}>${node.children.map((c) => writeNode(c, mode, defs)).join('')}</g>`;
+      return `<g${cls}>${writeNodes(node.children, mode, defs)}</g>`;
     case 'rect':
       return withDatum(`<rect${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" fill="${node.fill}"${paintAttributes(node)}`, 'rect', node.datum);
     case 'path':

@@ -34,16 +34,22 @@ function readAs(type: ColumnType, cell: RawCell, readNumber: NumberReader): Read
   return { value: String(cell).trim() };
 }
 
-function share(type: ColumnType, cells: RawCell[], readNumber: NumberReader): { present: number; readable: number } {
+/**
+ * Whether at least MOSTLY of the present cells read as numbers. Stops once that share is out of
+ * reach even if every cell left read as a number (a text column is settled in a few cells).
+ */
+function mostlyNumbers(cells: RawCell[], readNumber: NumberReader): boolean {
   let present = 0;
   let readable = 0;
-  for (const cell of cells) {
-    const r = readAs(type, cell, readNumber);
+  for (let i = 0; i < cells.length; i++) {
+    const r = readAs('number', cells[i]!, readNumber);
     if (r === null) continue;
     present++;
     if (r !== undefined) readable++;
+    const left = cells.length - 1 - i;
+    if ((readable + left) / (present + left) < MOSTLY) return false;
   }
-  return { present, readable };
+  return present > 0 && readable / present >= MOSTLY;
 }
 
 /** The storage type a field hint forces, if any. */
@@ -69,8 +75,7 @@ function guessType(cells: RawCell[], readNumber: NumberReader): { type: ColumnTy
   for (const type of ['number', 'date', 'boolean'] as const) {
     if (allRead(type, cells, readNumber)) return { type, mixed: false };
   }
-  const { present, readable } = share('number', cells, readNumber);
-  if (present > 0 && readable / present >= MOSTLY) return { type: 'number', mixed: true };
+  if (mostlyNumbers(cells, readNumber)) return { type: 'number', mixed: true };
   return { type: 'text', mixed: false };
 }
 

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { Ajv2020 } from 'ajv/dist/2020.js';
 import { readBrief, checkBriefValue } from '../../src/brief/resolve.js';
 import { BRIEF_SCHEMA } from '../../src/pipeline/vocabulary.js';
+import { pointer } from '../../src/brief/validate.js';
 
 const ok = (text: string) => {
   const r = readBrief(text);
@@ -106,4 +107,13 @@ describe('brief schema', () => {
       expect(ours.length === 0).toBe(validate(doc));
     });
   }
+});
+
+describe('paths of brief problems', () => {
+  // RFC 6901 §3: "~" is written "~0" and "/" is written "~1" in a JSON pointer's reference token.
+  it('escape ~ and / in keys as a JSON pointer does, and leave other keys as they are', () => {
+    expect(pointer('/fields', 'a/b~c')).toBe('/fields/a~1b~0c');
+    expect(pointer('/rows', 3)).toBe('/rows/3');
+    expect(pointer('', 'size')).toBe('/size');
+  });
 });

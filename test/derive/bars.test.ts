@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { resolveBrief } from '../../src/brief/resolve.js';
-import type { BarPlan } from '../../src/forms/bar-plan.js';
+import { barGroups, type BarPlan } from '../../src/forms/bar-plan.js';
 import { refOf } from '../../src/fields/types.js';
 import { deriveBars } from '../../src/derive/bars.js';
 import { compareNatural } from '../../src/derive/order.js';
@@ -118,5 +118,24 @@ describe('derive stage for bars', () => {
 
   it('compares digits as numbers in natural order', () => {
     expect(['b2', 'b10', 'a', 'B1'].sort(compareNatural)).toEqual(['a', 'B1', 'b2', 'b10']);
+  });
+});
+
+describe('bars derived from rows grouped once per render (the plan groups them first)', () => {
+  it('are the bars and diagnostics of grouping afresh, however often the grouped rows are reused', async () => {
+    const rows = [{ k: 'b', v: 2 }, { k: 'a', v: null }, { k: 'b', v: 3 }, { k: 'c', v: 1 }];
+    const resolved = resolveBrief({ intent: 'compare', rows, keys: 'k', values: 'v' });
+    const t = await readTable(resolved.data, resolved.fields, undefined, memoryFiles({}));
+    const f = t.ok ? inferFields(t.value, resolved) : undefined;
+    if (!t.ok || !f?.ok) throw new Error('table');
+    const plan: BarPlan = { key: refOf(f.value.keys[0]!), value: refOf(f.value.values[0]!), orientation: 'vertical', order: 'value', aggregate: 'sum' };
+    const memo = new Map<string, unknown>();
+    const fresh = deriveBars(t.value, plan, () => 100);
+    const first = deriveBars(t.value, plan, () => 100, barGroups(t.value, plan.key, plan.value, { memo }));
+    const again = deriveBars(t.value, plan, () => 100, barGroups(t.value, plan.key, plan.value, { memo }));
+    expect(memo.size).toBe(1);
+    expect(first).toEqual(fresh);
+    expect(again).toEqual(fresh);
+    expect(fresh.diagnostics.map((d) => d.code)).toEqual(['derive.missing-values', 'derive.aggregated']);
   });
 });

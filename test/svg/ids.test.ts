@@ -32,3 +32,15 @@ describe('ids from very long labels', () => {
     expect(id('bar', long)).not.toBe(id('bar', `${long}x`));
   });
 });
+
+describe('ids under several prefixes', () => {
+  it('count one id however its prefix and text divide it, so ids stay unique', () => {
+    const id = idMaker();
+    expect([id('tick-key', 'a'), id('tick', 'key a'), id('tick', 'Key-A')]).toEqual(['tick-key-a', 'tick-key-a-2', 'tick-key-a-3']);
+  });
+
+  it('slug one text alike under every prefix', () => {
+    const id = idMaker();
+    expect([id('bar', 'Café Über'), id('label', 'Café Über'), id('bar', 'Café Über')]).toEqual(['bar-cafe-uber', 'label-cafe-uber', 'bar-cafe-uber-2']);
+  });
+});

@@ -1,5 +1,6 @@
-import { spawn } from 'node:child_process';
+import { execFileSync, spawn } from 'node:child_process';
 import { openSync, writeFileSync } from 'node:fs';
+import { writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { nodeTableEnv } from '../../src/io/node-env.js';
@@ -57,6 +58,26 @@ describe('size limits on data', () => {
     const file = join(tempDir(), 't.csv');
     writeFileSync(file, 'k,v\na,1\n');
     expect(new TextDecoder().decode(await nodeTableEnv().readBytes(file, 1000))).toBe('k,v\na,1\n');
+  });
+
+  it('reads no more than the limit of a regular file read directly', async () => {
+    const file = join(tempDir(), 't.csv');
+    writeFileSync(file, 'k,v\na,1\nb,2\n');
+    expect(new TextDecoder().decode(await nodeTableEnv().readBytes(file, 6))).toBe('k,v\na,');
+  });
+
+  it('reads a data file larger than a direct read through the stream, up to the limit', async () => {
+    const file = join(tempDir(), 'big.csv');
+    writeFileSync(file, Buffer.alloc(3 * 1024 * 1024, 0x61));
+    expect((await nodeTableEnv().readBytes(file, 2 * 1024 * 1024 + 1)).length).toBe(2 * 1024 * 1024 + 1);
+  });
+
+  it.skipIf(process.platform === 'win32')('reads a FIFO whose writer comes after the read began (its open does not block)', async () => {
+    const fifo = join(tempDir(), 'rows.csv');
+    execFileSync('mkfifo', [fifo]);
+    const reading = nodeTableEnv().readBytes(fifo, 1000);
+    await writeFile(fifo, 'k,v\na,1\n');
+    expect(new TextDecoder().decode(await reading)).toBe('k,v\na,1\n');
   });
 
   it('the CLI stops reading stdin from /dev/zero and reports the limit (it once read 7.5 GiB)', async () => {

@@ -107,6 +107,20 @@ describe('table stage: type inference', () => {
     expect(columnOf(await table('t.csv', 'y\n2024\n2025\n'), 'y')!.type).toBe('number');
   });
 
+  it('takes a column as numbers when exactly 80% of its present cells are, wherever the others sit', async () => {
+    for (const cells of [['x', '1', '2', '3', '4'], ['1', '2', '3', '4', 'x'], ['x', 'NA', 'y', '1', '2', '3', '4', '5', '6', '7', '8']]) {
+      const t = await table('t.csv', `v\n${cells.join('\n')}\n`);
+      expect(columnOf(t, 'v')!.type).toBe('number');
+    }
+  });
+
+  it('takes a column as text when under 80% of its present cells are numbers, wherever they sit', async () => {
+    for (const cells of [['x', '1', '2', '3'], ['1', '2', '3', 'x'], ['x', 'y', '1', '2', '3', '4', '5', '6', '7', 'NA']]) {
+      const t = await table('t.csv', `v\n${cells.join('\n')}\n`);
+      expect(columnOf(t, 'v')!.type).toBe('text');
+    }
+  });
+
   it('warns about a mostly numeric column and names the rows that are not numbers', async () => {
     const r = await read('t.csv', 'v\n1\n2\n3\n4\nabout 5\n6\n7\n8\n9\n10\n');
     expect(r.ok).toBe(true);
