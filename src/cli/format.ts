@@ -9,8 +9,10 @@ const COLOURS = { error: '\u001b[31m', warning: '\u001b[33m', info: '\u001b[36m'
 
 // C0 controls, DEL and C1 controls: ESC and BEL in a column name could retitle the window or
 // clear the screen, and a C1 CSI (U+009B) does the same on 8-bit terminals.
-const CONTROLS = /[\u0000-\u001f\u007f-\u009f]/g;
-const CONTROLS_BUT_NEWLINE = /[\u0000-\u0009\u000b-\u001f\u007f-\u009f]/g;
+// Bidirectional overrides and isolates (U+202A–U+202E, U+2066–U+2069) reorder what follows them,
+// so a file name could show as another ("Trojan Source"); they are escaped too.
+const CONTROLS = /[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g;
+const CONTROLS_BUT_NEWLINE = /[\u0000-\u0009\u000b-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g;
 
 /**
  * Text made safe for a terminal: every control character (C0, DEL, C1) is shown as a `\u001b`

@@ -1,4 +1,5 @@
 import { checkBriefValue, readBrief, withPositions } from '../brief/resolve.js';
+import { capProblems } from '../brief/validate.js';
 import type { ParsedBrief } from '../brief/parse.js';
 import type { ResolvedBrief } from '../brief/types.js';
 import { checkBriefRules } from '../choose/checks.js';
@@ -177,7 +178,10 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
   const watch = stopwatch(req.clock);
   const loaded = await loadInputs(req, env, watch.lap);
   const finish = (result: Omit<RenderResult, 'ok' | 'timings'>): RenderResult => {
-    const diagnostics = strictly(result.diagnostics, req.strict);
+    // A failing brief reports at most MAX_BRIEF_PROBLEMS problems, however many it has (100,000
+    // unknown columns); a brief that renders keeps all its warnings.
+    const all = strictly(result.diagnostics, req.strict);
+    const diagnostics = hasErrors(all) ? capProblems(all) : all;
     return { ...result, ok: !hasErrors(diagnostics) && result.svg !== undefined, diagnostics, ...(req.clock ? { timings: watch.timings } : {}) };
   };
   if (!loaded.inputs) return finish({ ...(loaded.brief ? { brief: loaded.brief } : {}), rationale: [], diagnostics: loaded.diagnostics });

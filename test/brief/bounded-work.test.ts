@@ -84,3 +84,16 @@ describe('duplicate keys in a brief', () => {
     expect(codes(readBrief('intent: compare\nsize: {width: 300, width: 400}\n'))).toEqual(['brief.parse-error']);
   });
 });
+
+describe('problems reported per brief, from any stage', () => {
+  // The brief stage capped its own problems; 100,000 `fields:` entries naming unknown columns
+  // still gave 100,000 diagnostics from the fields stage.
+  it('a failing brief reports at most 50 problems and one line counting the rest', async () => {
+    const { renderRows } = await import('../helpers.js');
+    const fields = Object.fromEntries(Array.from({ length: 2_000 }, (_, i) => [`nope${i}`, { unit: 'u' }]));
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v', fields }, [{ k: 'a', v: 1 }]);
+    expect(r.ok).toBe(false);
+    expect(r.diagnostics).toHaveLength(51);
+    expect(r.diagnostics[50]).toMatchObject({ code: 'brief.too-many-problems', found: '2000 problems' });
+  });
+});

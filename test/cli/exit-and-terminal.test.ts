@@ -148,3 +148,11 @@ describe('results as each brief finishes, and -q/--quiet', () => {
     expect(readFileSync(join(dir, 'warn.svg'), 'utf8')).toMatch(/^<svg /);
   });
 });
+
+describe('bidirectional controls in printed text', () => {
+  // A file or column name with U+202E could print as another name ("Trojan Source" reordering).
+  it('are escaped like other controls', () => {
+    expect(printable('report\u202egpj.svg')).toBe('report\\u202egpj.svg');
+    expect(printable('a\u2066b\u2069c')).toBe('a\\u2066b\\u2069c');
+  });
+});
