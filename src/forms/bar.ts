@@ -4,7 +4,7 @@ import { plotFor } from '../layout/compose.js';
 import { memoized, type CartesianDomains, type LabelRoom, type LayoutContext, type PlotArea, type ScaleProbe } from '../layout/kit-types.js';
 import { valueFormatter } from '../layout/number-format.js';
 import { MAX_LABEL_SHARE } from '../layout/plot-box.js';
-import { asBand, asLinear } from '../layout/scales.js';
+import { asBand, asLinear, type BandScale, type LinearScale } from '../layout/scales.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
 import { barDescription, barValueTitle, foldNote, foldOf } from './bar-text.js';
@@ -75,10 +75,15 @@ function barDatum(derived: DerivedBars<BarPlan>, bar: BarDatum): Datum {
   return datum;
 }
 
+/** The band (key) and value scales of a bar chart, by its orientation. */
+function barScales(derived: DerivedBars<BarPlan>, area: PlotArea): { vertical: boolean; band: BandScale; value: LinearScale } {
+  const vertical = derived.query.orientation === 'vertical';
+  return vertical ? { vertical, band: asBand(area.x), value: asLinear(area.y) } : { vertical, band: asBand(area.y), value: asLinear(area.x) };
+}
+
 /** One bar from the zero of the value scale to its value, across its band. */
 function barRect(derived: DerivedBars<BarPlan>, bar: BarDatum, area: PlotArea, ctx: LayoutContext): SceneNode {
-  const vertical = derived.query.orientation === 'vertical';
-  const [band, value] = vertical ? [asBand(area.x), asLinear(area.y)] : [asBand(area.y), asLinear(area.x)];
+  const { vertical, band, value } = barScales(derived, area);
   const [v0, v1] = [value.map(0), value.map(bar.value)];
   const [b0, thickness] = [band.start(bar.label), band.bandwidth];
   const [low, length] = [Math.min(v0, v1), Math.abs(v1 - v0)];
@@ -96,8 +101,7 @@ function valueLabel(derived: DerivedBars<BarPlan>, bar: BarDatum, text: string, 
   const { measure, style } = ctx;
   const { label } = style.text;
   const gap = style.spacing.labelGap;
-  const vertical = derived.query.orientation === 'vertical';
-  const [band, value] = vertical ? [asBand(area.x), asLinear(area.y)] : [asBand(area.y), asLinear(area.x)];
+  const { vertical, band, value } = barScales(derived, area);
   const end = value.map(bar.value);
   const middle = band.center(bar.label);
   const box = textBoxHeight(measure, label);

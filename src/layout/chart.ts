@@ -2,8 +2,7 @@ import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Box, PanelInfo, Scene, SceneNode } from '../scene/types.js';
 import { allNodes } from '../scene/walk.js';
 import { checkScene } from './checks.js';
-import { layoutCartesian, placeFormLabels, placeLegend, withUnplacedNote, type CartesianForm, type Composed } from './compose.js';
-import { layoutFrame } from './frame.js';
+import { frameFor, layoutCartesian, placeFormLabels, sceneOf, withUnplacedNote, type CartesianForm, type Composed } from './compose.js';
 import type { FormMarks, FormWords, LayoutContext } from './kit-types.js';
 import type { LegendSpec } from './legend.js';
 
@@ -31,22 +30,16 @@ export interface BodyForm<D> {
 export type ChartForm<D> = CartesianForm<D> | BodyForm<D>;
 
 function composeBody<D>(form: BodyForm<D>, derived: D, ctx: LayoutContext, extraNotes: string[], drop: ReadonlySet<string>): Composed {
-  const { brief, style, measure } = ctx;
+  const { brief, measure } = ctx;
   const words = form.words(derived, ctx);
-  const frame = layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes: [...words.notes, ...extraNotes] }, style, brief.size, measure);
-  const { body, legend } = placeLegend(form.legend?.(derived, ctx), frame.body, ctx);
+  const { frame, body, legend } = frameFor(form.legend?.(derived, ctx), [...words.notes, ...extraNotes], ctx);
   const drawn = form.layoutBody(derived, body, ctx);
   const fixed = [...allNodes(drawn.guides), ...allNodes(legend?.nodes ?? []), ...frame.texts];
   const { kept, dropped } = placeFormLabels(drawn.labels, fixed, brief.size, drop);
   const children: SceneNode[] = [...drawn.guides.filter((n) => n.kind !== 'text'), ...drawn.marks, ...drawn.guides.filter((n) => n.kind === 'text'), ...kept, ...(legend?.nodes ?? []), ...frame.texts];
   const first = drawn.panels[0]!;
   return {
-    scene: {
-      form: form.name, width: brief.size.width, height: brief.size.height, background: style.background,
-      title: brief.title ?? words.title, description: brief.description ?? words.description,
-      root: { kind: 'group', id: 'chart', role: 'chart', children }, axes: first.axes, plot: first.plot,
-      panels: drawn.panels, legends: legend ? [legend.info] : [],
-    },
+    scene: sceneOf(form.name, words, children, drawn.panels, legend, ctx),
     diagnostics: [...drawn.diagnostics, ...checkScene(allNodes(children), first.plot, brief.size, measure)],
     dropped,
   };

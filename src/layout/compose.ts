@@ -1,7 +1,7 @@
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import { diagnostic } from '../diagnostics/diagnostic.js';
 import { idMaker } from '../scene/ids.js';
-import type { Box, Scene, SceneNode, TextNode } from '../scene/types.js';
+import type { Box, PanelInfo, Scene, SceneNode, TextNode } from '../scene/types.js';
 import { allNodes } from '../scene/walk.js';
 import type { ValueTicks } from './axis.js';
 import { drawBottomBandAxis, drawLeftBandAxis, drawLinearAxis, drawTimeAxis, rule, type DrawnAxis } from './axes.js';
@@ -35,25 +35,30 @@ function leftLinear(channel: LinearChannel, plot: Box, room: LabelRoom, ctx: Lay
   return linearScale(vt, [rangeBottom, rangeTop]);
 }
 
-/** The bottom axis's linear scale: inset so the end tick labels and the form's labels stay inside the plot's width. */
-function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], room: LabelRoom, ctx: LayoutContext): LinearScale {
+/**
+ * The pixel range of a bottom axis inside the plot's width: inset at each end by half its end
+ * tick label (a gap's worth less at the left, where the left axis's labels end) or by the room
+ * the form's labels take there, whichever is more.
+ */
+function bottomRange(plot: Box, probeLabels: readonly string[], room: LabelRoom, ctx: LayoutContext): [number, number] {
   const { tick } = ctx.style.text;
-  const [left, right] = [plot.x, plot.x + plot.width];
-  const halfTick = (i: number) => ctx.measure.width(probeLabels[i]!, tick.size, tick.weight) / 2;
-  const rangeLeft = left + Math.max(room.show ? room.low : 0, halfTick(0) - ctx.style.spacing.tickGap);
-  const rangeRight = right - Math.max(room.show ? room.high : 0, halfTick(probeLabels.length - 1));
+  const half = (i: number) => (probeLabels.length ? ctx.measure.width(probeLabels[i]!, tick.size, tick.weight) / 2 : 0);
+  const rangeLeft = plot.x + Math.max(room.show ? room.low : 0, half(0) - ctx.style.spacing.tickGap);
+  const rangeRight = plot.x + plot.width - Math.max(room.show ? room.high : 0, half(probeLabels.length - 1));
+  return [rangeLeft, rangeRight];
+}
+
+/** The bottom axis's linear scale, inset so the end tick labels and the form's labels stay inside the plot's width. */
+function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], room: LabelRoom, ctx: LayoutContext): LinearScale {
+  const [rangeLeft, rangeRight] = bottomRange(plot, probeLabels, room, ctx);
   const vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel.format);
   return linearScale(vt, [rangeLeft, rangeRight]);
 }
 
 /** A bottom time axis, inset like a linear one so its end labels stay inside the plot's width. */
 function bottomTime(channel: TimeChannel, plot: Box, ctx: LayoutContext): TimeScale {
-  const { tick } = ctx.style.text;
-  const [left, right] = [plot.x, plot.x + plot.width];
-  const probe = timeScale(channel.extent, [left, right], tickCount(plot.width, 'horizontal'));
-  const half = (i: number) => (probe.labels.length ? ctx.measure.width(probe.labels[i]!, tick.size, tick.weight) / 2 : 0);
-  const rangeLeft = left + Math.max(0, half(0) - ctx.style.spacing.tickGap);
-  const rangeRight = right - Math.max(0, half(probe.labels.length - 1));
+  const probe = timeScale(channel.extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'));
+  const [rangeLeft, rangeRight] = bottomRange(plot, probe.labels, NO_ROOM, ctx);
   return timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'));
 }
 
@@ -163,11 +168,32 @@ export interface PlotLayout {
  * so what is planned is what is drawn.
  */
 export function plotFor(domains: CartesianDomains, notes: string[], ctx: LayoutContext, minLeftWidth = 0): PlotLayout {
+  const framed = frameFor(domains.legend, notes, ctx);
+  return { ...framed, box: plotBox(framed.body, domains, ctx, minLeftWidth) };
+}
+
+/**
+ * The frame (title, subtitle, notes, source) and the legend, and the body they leave: the start
+ * of every composition. The frame depends only on its notes within one render, so it is laid out
+ * once for planning and drawing.
+ */
+export function frameFor(legendSpec: LegendSpec | undefined, notes: string[], ctx: LayoutContext): Omit<PlotLayout, 'box'> {
   const { brief, style, measure } = ctx;
-  // The frame depends only on its notes within one render: laid out once for planning and drawing.
   const frame = memoized(ctx, `frame\u0000${notes.join('\u0000')}`, () => layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes }, style, brief.size, measure));
-  const { body, legend } = placeLegend(domains.legend, frame.body, ctx);
-  return { frame, body, ...(legend ? { legend } : {}), box: plotBox(body, domains, ctx, minLeftWidth) };
+  const { body, legend } = placeLegend(legendSpec, frame.body, ctx);
+  return { frame, body, ...(legend ? { legend } : {}) };
+}
+
+/** A finished scene: the chart's words and tree, its panels (the first gives `plot` and `axes`) and its legend. */
+export function sceneOf(form: string, words: FormWords, children: SceneNode[], panels: PanelInfo[], legend: LegendLayout | undefined, ctx: LayoutContext): Scene {
+  const { brief, style } = ctx;
+  const first = panels[0]!;
+  return {
+    form, width: brief.size.width, height: brief.size.height, background: style.background,
+    title: brief.title ?? words.title, description: brief.description ?? words.description,
+    root: { kind: 'group', id: 'chart', role: 'chart', children }, axes: first.axes, plot: first.plot,
+    panels, legends: legend ? [legend.info] : [],
+  };
 }
 
 /** Widest label a left linear axis draws, when wider than the column its plot box left for it. */
@@ -184,7 +210,7 @@ function widerLeftLabels(scales: FittedScales, placed: PlotLayout, ctx: LayoutCo
 export interface Composed { scene: Scene; diagnostics: Diagnostic[]; dropped: TextNode[] }
 
 function compose<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext, extraNotes: string[], drop: ReadonlySet<string> = new Set()): Composed {
-  const { brief, style, measure } = ctx;
+  const { brief, measure } = ctx;
   const words = form.words(derived, ctx);
   const domains = form.domains(derived, ctx);
   const notes = [...words.notes, ...extraNotes];
@@ -211,12 +237,7 @@ function compose<D>(form: CartesianForm<D>, derived: D, ctx: LayoutContext, extr
   // In a frame too small for its words, thinned or shortened labels are symptoms of that one error.
   const diagnostics = checks.some((d) => d.code === 'layout.frame-too-small') ? checks : [...one.diagnostics, ...two.diagnostics, ...drawn.diagnostics, ...checks];
   return {
-    scene: {
-      form: form.name, width: brief.size.width, height: brief.size.height, background: style.background,
-      title: brief.title ?? words.title, description: brief.description ?? words.description,
-      root: { kind: 'group', id: 'chart', role: 'chart', children }, axes: info, plot: box.plot,
-      panels: [{ id: 'panel', plot: box.plot, axes: info }], legends: legend ? [legend.info] : [],
-    },
+    scene: sceneOf(form.name, words, children, [{ id: 'panel', plot: box.plot, axes: info }], legend, ctx),
     diagnostics,
     dropped,
   };
