@@ -1,11 +1,15 @@
 // Rewrites golden/ from the demo gallery: <case>/<case>.svg (live text) and <case>/<case>.png
 // (scale 2, outline text). Run only on purpose, then look at every changed PNG before committing.
+// With case names (`npm run golden:update -- line-trend`), rewrites only those cases.
 import { mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { createNodeEnv, outlineSvg, rasterize, renderBrief } from '../dist/chartwright.js';
 
 const env = createNodeEnv();
-const briefs = readdirSync('demo-data').filter((f) => f.endsWith('.yaml')).sort();
+const only = new Set(process.argv.slice(2));
+const briefs = readdirSync('demo-data')
+  .filter((f) => f.endsWith('.yaml') && (only.size === 0 || only.has(basename(f, '.yaml'))))
+  .sort();
 for (const name of briefs) {
   const file = join('demo-data', name);
   const result = await renderBrief({ brief: readFileSync(file, 'utf8'), file }, env);
