@@ -35,6 +35,7 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     form: raw.form as ResolvedBrief['form'],
     order: (raw.order ?? 'auto') as ResolvedBrief['order'],
     baseline: (raw.baseline ?? 'zero') as ResolvedBrief['baseline'],
+    notation: (raw.notation ?? 'auto') as ResolvedBrief['notation'],
     aggregate: (raw.aggregate ?? 'sum') as ResolvedBrief['aggregate'],
     style: (raw.style ?? 'report') as string,
     size: { width: size.width ?? DEFAULT_SIZE.width, height: size.height ?? DEFAULT_SIZE.height },

@@ -1,4 +1,4 @@
-import { AGGREGATES, FIELD_TYPES, ORDERS, type BriefVocabulary } from './types.js';
+import { AGGREGATES, FIELD_TYPES, NOTATIONS, ORDERS, type BriefVocabulary } from './types.js';
 
 /** The subset of JSON Schema the brief schema uses, and `validateAgainstSchema` understands. */
 export interface SchemaNode {
@@ -66,6 +66,7 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
       form: { type: 'string', enum: FORM_NAMES, description: 'Pin a chart form; the hard rules still apply.' },
       order: { type: 'string', enum: ORDERS, default: 'auto', description: 'Order of bars or rows.' },
       baseline: { type: 'string', enum: ['zero', 'fit'], default: 'zero', description: 'Value-axis baseline; never fit for length-coded marks.' },
+      notation: { type: 'string', enum: [...NOTATIONS], default: 'auto', description: 'How large and small numbers are written: words (k, m, bn, tn), si (SI prefix joined to an SI unit, 3.5 GWh), digits (every digit), or auto (si for SI units, words otherwise).' },
       aggregate: { type: 'string', enum: AGGREGATES, default: 'sum', description: 'How rows sharing a key are combined.' },
       style: { type: 'string', minLength: 1, default: 'report', description: 'Style preset name or path to a style file.' },
       size: {

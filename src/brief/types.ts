@@ -23,6 +23,15 @@ export type FieldType = (typeof FIELD_TYPES)[number];
 export const ORDERS = ['auto', 'value', 'label', 'data', 'cluster'] as const;
 export type Order = (typeof ORDERS)[number];
 
+/**
+ * How large and small numbers are written: `words` divides by thousand, million, billion,
+ * trillion (k, m, bn, tn; for money and counts), `si` joins an SI prefix to an SI unit
+ * (3.5 GWh), `digits` writes every digit (2,000,000), and `auto` picks `si` for SI units and
+ * `words` otherwise.
+ */
+export const NOTATIONS = ['auto', 'words', 'si', 'digits'] as const;
+export type Notation = (typeof NOTATIONS)[number];
+
 export const AGGREGATES = ['sum', 'mean', 'count', 'max', 'min'] as const;
 export type Aggregate = (typeof AGGREGATES)[number];
 
@@ -73,6 +82,8 @@ export interface ResolvedBrief {
   form: FormName | undefined;
   /** Bar or row order. Default: 'auto' (by value for categorical keys, key order otherwise). */
   order: Order;
+  /** How large and small numbers are written (k, m, bn, tn; SI prefixes; every digit). Default: 'auto' (SI prefixes for SI units, words otherwise). */
+  notation: Notation;
   /** Value-axis baseline. Default: 'zero'. 'fit' is refused for length-coded marks. */
   baseline: 'zero' | 'fit';
   /** How rows with the same key are combined. Default: 'sum'. */

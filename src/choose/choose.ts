@@ -1,3 +1,4 @@
+import { notationDecision } from './notation.js';
 import type { ResolvedBrief } from '../brief/types.js';
 import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
@@ -50,5 +51,7 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext,
   problems.push(...planned.diagnostics);
   if (!planned.ok || hasErrors(problems)) return failure(problems);
   rationale.push(...planned.value.decisions);
+  const numbers = notationDecision(fields);
+  if (numbers) rationale.push(numbers);
   return success({ form: form.name, intent: brief.intent, rule: rule?.id ?? 'pinned', plan: planned.value.plan, rationale }, problems);
 }

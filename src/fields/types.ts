@@ -1,4 +1,4 @@
-import type { FieldType } from '../brief/types.js';
+import type { FieldType, Notation } from '../brief/types.js';
 import type { Column } from '../table/types.js';
 
 /** The part a field plays in the chart. */
@@ -13,17 +13,19 @@ export interface Field {
   role: FieldRole;
   unit: string | undefined;
   format: string | undefined;
+  /** How its large and small numbers are written (the brief's `notation`). */
+  notation: Notation;
   /** For categorical, ordinal and cyclic fields: the levels, in their meaningful order (first appearance for categorical). */
   levels: string[];
   column: Column;
 }
 
 /** A field as plans refer to it: its name and presentation, never its column of data. */
-export type FieldRef = Pick<Field, 'name' | 'label' | 'type' | 'unit' | 'format' | 'levels'>;
+export type FieldRef = Pick<Field, 'name' | 'label' | 'type' | 'unit' | 'format' | 'levels'> & Partial<Pick<Field, 'notation'>>;
 
 /** The reference to a field that a plan keeps. */
 export function refOf(field: Field): FieldRef {
-  return { name: field.name, label: field.label, type: field.type, unit: field.unit, format: field.format, levels: field.levels };
+  return { name: field.name, label: field.label, type: field.type, unit: field.unit, format: field.format, notation: field.notation, levels: field.levels };
 }
 
 /** The fields of a brief: its keys and values in brief order, then every other column. */

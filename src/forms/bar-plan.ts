@@ -78,7 +78,7 @@ function chooseOrientation(input: PlanInput, key: Field, value: Field | undefine
   if (bandNeeded * n > widthBound) return lying(`at most ${px(widthBound / n)} each`);
   const ctx: LayoutContext = { brief, style, measure, id: idMaker(), ...(input.memo ? { memo: input.memo } : {}) };
   const { plot } = plotFor({
-    left: { kind: 'linear', name: 'value', field: value?.name ?? 'count', title: '', extent: [Math.min(0, lo), Math.max(0, hi)], format: value?.format },
+    left: { kind: 'linear', name: 'value', field: value?.name ?? 'count', title: '', extent: [Math.min(0, lo), Math.max(0, hi)], format: value?.format, unit: value?.unit },
     bottom: { kind: 'band', name: 'key', field: key.name, title: '', domain: labels }, first: 'left',
   }, [], ctx).box;
   if (bandNeeded * n <= plot.width) return { vertical: true, decision: { decision: 'vertical bars', rule: `all ${labels.length} labels fit upright: the widest needs ${px(bandNeeded)} and each band has ${px(plot.width / n)}` } };

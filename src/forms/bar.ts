@@ -21,14 +21,14 @@ function domainOf(bars: readonly BarDatum[]): [number, number] {
 
 function domainsOf(derived: { query: BarPlan; bars: readonly BarDatum[]; valueName: string }, vertical: boolean): CartesianDomains {
   const key = { kind: 'band' as const, name: 'key', field: derived.query.key.name, title: derived.query.key.label, domain: derived.bars.map((b) => b.label) };
-  const value = { kind: 'linear' as const, name: 'value', field: derived.valueName, title: barValueTitle(derived.query), extent: domainOf(derived.bars), format: derived.query.value?.format };
+  const value = { kind: 'linear' as const, name: 'value', field: derived.valueName, title: barValueTitle(derived.query), extent: domainOf(derived.bars), format: derived.query.value?.format, unit: derived.query.value?.unit };
   return vertical ? { left: value, bottom: key, first: 'left', zeroLine: 'left' } : { left: key, bottom: value, first: 'bottom', zeroLine: 'bottom' };
 }
 
 /** Each bar's value as its label shows it (formatted once per render: the bars drawn are fixed once derived). */
 function valueTexts(derived: DerivedBars<BarPlan>, ctx: LayoutContext): Map<BarDatum, string> {
   return memoized(ctx, 'bar\u0000value-texts', () => {
-    const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format);
+    const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value);
     return new Map(derived.bars.map((b) => [b, fmt(b.value)]));
   });
 }
@@ -40,7 +40,7 @@ function valueTexts(derived: DerivedBars<BarPlan>, ctx: LayoutContext): Map<BarD
 function capacityFor(plan: BarPlan, ctx: LayoutContext): CapacityFor {
   const valueTitle = barValueTitle(plan);
   return (fold, bars) => {
-    const notes = foldNote(plan, fold, valueTitle, valueFormatter([fold?.total ?? 0, ...(fold?.range ?? [])], plan.value?.format));
+    const notes = foldNote(plan, fold, valueTitle, valueFormatter([fold?.total ?? 0, ...(fold?.range ?? [])], plan.value));
     const { plot } = plotFor(domainsOf({ query: plan, bars, valueName: plan.value?.name ?? 'count' }, plan.orientation === 'vertical'), notes, ctx).box;
     return Math.floor((plan.orientation === 'vertical' ? plot.width : plot.height) / MIN_BAND_PX);
   };
@@ -134,11 +134,11 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
   },
   words(derived) {
     const valueTitle = barValueTitle(derived.query);
-    const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format);
+    const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value);
     return {
       title: `${valueTitle} by ${derived.query.key.label.toLowerCase()}`,
       description: barDescription(derived, valueTitle, fmt),
-      notes: foldNote(derived.query, foldOf(derived), valueTitle, valueFormatter([derived.foldedTotal ?? 0, ...(derived.foldedRange ?? [])], derived.query.value?.format)),
+      notes: foldNote(derived.query, foldOf(derived), valueTitle, valueFormatter([derived.foldedTotal ?? 0, ...(derived.foldedRange ?? [])], derived.query.value)),
     };
   },
 };

@@ -1,7 +1,7 @@
 import type { TextMeasurer } from '../font/measurer.js';
 import type { FieldRef } from '../fields/types.js';
 import type { TextStyle } from '../style/types.js';
-import { tickFormatter } from './number-format.js';
+import { tickFormatter, type NumberStyle } from './number-format.js';
 import { niceTicks } from './ticks.js';
 
 /** Pixels per tick the value axis aims for, vertical and horizontal (common practice: about 1 tick per 50–100 px). */
@@ -53,7 +53,7 @@ function labelsThatFit(ticks: number[], sizes: number[], length: number, gap: nu
  * is fitted to the outer ticks. Fewer ticks are tried until no two labels overlap; where even
  * two do not fit, only the labels that clear each other are printed.
  */
-export function valueTicks(lo: number, hi: number, length: number, direction: 'vertical' | 'horizontal', style: TextStyle, measure: TextMeasurer, specifier?: string): ValueTicks {
+export function valueTicks(lo: number, hi: number, length: number, direction: 'vertical' | 'horizontal', style: TextStyle, measure: TextMeasurer, specifier?: string | NumberStyle): ValueTicks {
   const gap = style.size * 0.5;
   // A non-finite length (a defect upstream) must not leave m as NaN, which never reaches 2.
   const wanted = Number.isFinite(length) ? Math.round(length / PX_PER_TICK[direction]) + 1 : 2;

@@ -31,7 +31,7 @@ function leftLinear(channel: LinearChannel, plot: Box, room: LabelRoom, ctx: Lay
   const [top, bottom] = [plot.y, plot.y + plot.height];
   const rangeBottom = bottom - (room.show ? room.low : 0);
   const rangeTop = top + (room.show ? room.high : 0);
-  const vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeBottom - rangeTop, 'vertical', channel.format);
+  const vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeBottom - rangeTop, 'vertical', channel);
   return linearScale(vt, [rangeBottom, rangeTop]);
 }
 
@@ -51,7 +51,7 @@ function bottomRange(plot: Box, probeLabels: readonly string[], room: LabelRoom,
 /** The bottom axis's linear scale, inset so the end tick labels and the form's labels stay inside the plot's width. */
 function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], room: LabelRoom, ctx: LayoutContext): LinearScale {
   const [rangeLeft, rangeRight] = bottomRange(plot, probeLabels, room, ctx);
-  const vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel.format);
+  const vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel);
   return linearScale(vt, [rangeLeft, rangeRight]);
 }
 
@@ -88,7 +88,7 @@ function fitScales<D>(form: CartesianForm<D>, derived: D, domains: CartesianDoma
   const { plot, left } = box;
   const bottomBand = domains.bottom.kind === 'band' ? bandScale(domains.bottom.domain, [plot.x, plot.x + plot.width], ctx.style.spacing.bandPadding) : undefined;
   const leftBand: BandScale | undefined = left.kind === 'band' ? left.band : undefined;
-  const bottomProbe = domains.bottom.kind === 'linear' ? ticksFor(ctx, domains.bottom.extent[0], domains.bottom.extent[1], plot.width, 'horizontal', domains.bottom.format) : undefined;
+  const bottomProbe = domains.bottom.kind === 'linear' ? ticksFor(ctx, domains.bottom.extent[0], domains.bottom.extent[1], plot.width, 'horizontal', domains.bottom) : undefined;
   const probe: ScaleProbe | undefined = left.kind === 'linear'
     ? { plot, side: 'left', band: bottomBand, linear: linearScale(left.probe, [plot.y + plot.height, plot.y]) }
     : bottomProbe ? { plot, side: 'bottom', band: leftBand, linear: linearScale(bottomProbe, [plot.x, plot.x + plot.width]) } : undefined;

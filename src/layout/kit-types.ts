@@ -5,6 +5,7 @@ import type { Box, SceneNode, TextNode } from '../scene/types.js';
 import type { Style } from '../style/types.js';
 import { valueTicks, type ValueTicks } from './axis.js';
 import type { LegendSpec } from './legend.js';
+import type { NumberStyle } from './number-format.js';
 import type { BandScale, LinearScale, Scale } from './scales.js';
 
 /** What every layout step receives: the brief, the style, the text measurer, and the chart's id maker. */
@@ -42,6 +43,8 @@ export interface LinearChannel {
   extent: [number, number];
   /** The field's d3-format specifier, if any. */
   format?: string;
+  /** The field's unit, if any: an SI unit takes SI prefixes in the tick labels (see number-format.ts). */
+  unit?: string;
 }
 
 /** A categorical channel: one band per category, in order. */
@@ -127,6 +130,13 @@ export interface FormWords {
 }
 
 /** The ticks of a value axis of this extent and length, chosen once per render (the tick search is the costly part of layout). */
-export function ticksFor(ctx: LayoutContext, lo: number, hi: number, length: number, direction: 'vertical' | 'horizontal', format: string | undefined): ValueTicks {
-  return memoized(ctx, `ticks\u0000${lo}\u0000${hi}\u0000${length}\u0000${direction}\u0000${format ?? ''}`, () => valueTicks(lo, hi, length, direction, ctx.style.text.tick, ctx.measure, format));
+export function ticksFor(ctx: LayoutContext, lo: number, hi: number, length: number, direction: 'vertical' | 'horizontal', number: string | NumberStyle | undefined): ValueTicks {
+  const style = numberStyleIn(ctx, number);
+  return memoized(ctx, `ticks\u0000${lo}\u0000${hi}\u0000${length}\u0000${direction}\u0000${style.format ?? ''}\u0000${style.unit ?? ''}\u0000${style.notation ?? ''}`, () => valueTicks(lo, hi, length, direction, ctx.style.text.tick, ctx.measure, style));
+}
+
+/** How a channel's numbers are written in this chart: its format and unit, and the brief's notation. */
+export function numberStyleIn(ctx: Pick<LayoutContext, 'brief'>, number: string | NumberStyle | undefined): NumberStyle {
+  const style = typeof number === 'object' ? number : { format: number };
+  return { ...style, notation: style.notation ?? ctx.brief.notation };
 }

@@ -1,5 +1,13 @@
 import { format as d3format, formatSpecifier } from 'd3-format';
 
+import { notationFor, type NumberStyle } from '../fields/notation.js';
+
+export type { NumberStyle };
+
+function styleOf(style: string | NumberStyle | undefined): NumberStyle {
+  return typeof style === 'string' ? { format: style } : (style ?? {});
+}
+
 /** Decimals needed to write every number exactly, up to `limit`; `limit + 1` if that is not enough. */
 export function decimalsNeeded(values: readonly number[], limit = 6): number {
   for (let d = 0; d <= limit; d++) {
@@ -35,28 +43,31 @@ function exponentTicks(ticks: readonly number[]): (n: number) => string {
   return exponentForm(12);
 }
 
+/** The first formatter that writes distinct values as distinct labels (the last one offered otherwise). */
+function firstDistinct(values: readonly number[], candidates: readonly ((n: number) => string)[]): (n: number) => string {
+  const distinct = new Set(values).size;
+  return candidates.find((f) => new Set(values.map(f)).size === distinct) ?? candidates[candidates.length - 1]!;
+}
+
 /** Exponent form for data values: three significant digits, more where needed to keep them apart. */
 function exponentValues(values: readonly number[]): (n: number) => string {
-  const distinct = new Set(values).size;
-  for (let p = 2; p < 12; p++) {
-    const f = exponentForm(p);
-    if (new Set(values.map(f)).size === distinct) return f;
-  }
-  return exponentForm(12);
+  return firstDistinct(values, [2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12].map(exponentForm));
 }
 
 /** Largest magnitude among numbers, by a loop: spreading a column into Math.max overflows the stack. */
 function maxAbsOf(values: readonly number[]): number {
   let m = 0;
-  for (const v of values) m = Math.max(m, Math.abs(v));
+  for (const v of values) if (Number.isFinite(v)) m = Math.max(m, Math.abs(v));
   return m;
 }
 
 /**
  * From a thousand trillion up, scale words stop helping (1e308 would read "1e+299bn"): such
- * numbers are written in exponent form. Common practice; the notation is to be redesigned.
+ * numbers are written in exponent form. Common practice.
  */
 const EXPONENT_FROM = 1e15;
+/** Below a million, every digit is written: six digits read at a glance (common practice). */
+const WORDS_FROM = 1e6;
 
 /**
  * The user's d3-format specifier. A percent of a value beyond about 1.8e306 overflows to
@@ -70,42 +81,124 @@ function userFormatter(specifier: string): (n: number) => string {
   return (n) => (Number.isFinite(n * 100) ? f(n) : `${e(n).replace(/e\+(\d+)$/, (_, x: string) => `e+${Number(x) + 2}`)}%`);
 }
 
-/** A scale word for large numbers: values are shown divided by `divisor` with `suffix`. */
-interface Magnitude { divisor: number; suffix: string }
+/** A scale step: numbers from `from` up are divided by it and written with `suffix`. */
+interface Step { from: number; suffix: string }
 
-function magnitudeFor(maxAbs: number): Magnitude {
-  if (maxAbs >= 1e9) return { divisor: 1e9, suffix: 'bn' };
-  if (maxAbs >= 1e6) return { divisor: 1e6, suffix: 'M' };
-  return { divisor: 1, suffix: '' };
+/** Thousand, million, billion, trillion (short scale), as money and counts are written. */
+const WORD_STEPS: readonly Step[] = [
+  { from: 1e12, suffix: 'tn' }, { from: 1e9, suffix: 'bn' }, { from: 1e6, suffix: 'm' }, { from: 1e3, suffix: 'k' },
+];
+
+/** SI prefixes (BIPM SI Brochure, 9th ed., table 7), joined to the unit after a space: "3.5 GWh". */
+const SI_STEPS: readonly Step[] = [
+  { from: 1e24, suffix: 'Y' }, { from: 1e21, suffix: 'Z' }, { from: 1e18, suffix: 'E' }, { from: 1e15, suffix: 'P' },
+  { from: 1e12, suffix: 'T' }, { from: 1e9, suffix: 'G' }, { from: 1e6, suffix: 'M' }, { from: 1e3, suffix: 'k' },
+  { from: 1, suffix: '' }, { from: 1e-3, suffix: 'm' }, { from: 1e-6, suffix: 'µ' }, { from: 1e-9, suffix: 'n' },
+  { from: 1e-12, suffix: 'p' },
+];
+
+/** The step a number is written in: the largest whose threshold it reaches. */
+function stepFor(n: number, steps: readonly Step[]): Step | undefined {
+  return steps.find((s) => Math.abs(n) >= s.from);
 }
 
 /**
- * A formatter for the tick values of one axis: the user's d3-format specifier when given,
- * otherwise grouped digits with just enough decimals, and M or bn for millions and billions.
- * Minus signs are U+2212, as d3-format writes them.
+ * Writes each number in its own step, so that €350 thousand next to €4.2 billion reads "350k",
+ * never "0.00bn". `digits(x)` writes the divided number; below the smallest step, `small(n)`.
  */
-export function tickFormatter(ticks: readonly number[], specifier?: string): (n: number) => string {
-  if (specifier) return userFormatter(specifier);
-  const maxAbs = maxAbsOf(ticks);
-  if (maxAbs >= EXPONENT_FROM) return exponentTicks(ticks);
-  const { divisor, suffix } = magnitudeFor(maxAbs);
-  const decimals = decimalsNeeded(ticks.map((t) => t / divisor));
-  const f = d3format(`,.${decimals}f`);
-  const format = (n: number) => (n === 0 ? '0' : `${f(n / divisor)}${suffix}`);
-  // Steps finer than a millionth would print as rows of zeros (at 1e-300, every tick as "0").
-  if (decimals > 6 || new Set(ticks.map(format)).size < new Set(ticks).size) return exponentTicks(ticks);
-  return format;
+function stepped(steps: readonly Step[], digits: (x: number) => string, small: (n: number) => string, join: (text: string, suffix: string) => string): (n: number) => string {
+  const round = (x: number) => readBack(digits(x).replaceAll(',', ''));
+  return (n) => {
+    if (n === 0) return '0';
+    const step = stepFor(n, steps);
+    if (!step) return small(n);
+    const x = n / step.from;
+    // Rounding may carry into the next step: 999,999 at 3 digits is "1m", not "1,000k".
+    const written = round(x);
+    const bigger = steps[steps.indexOf(step) - 1];
+    if (bigger && Math.abs(written) * step.from >= bigger.from) return join(digits(n / bigger.from), bigger.suffix);
+    return join(digits(x), step.suffix);
+  };
 }
 
-/** A formatter for data values shown as labels: up to 2 decimals, as the data needs; significant digits for tiny values. */
-export function valueFormatter(values: readonly number[], specifier?: string): (n: number) => string {
-  if (specifier) return userFormatter(specifier);
-  const maxAbs = maxAbsOf(values);
-  if (maxAbs >= EXPONENT_FROM) return exponentValues(values);
-  // Values all below 0.01 would read "0.00": three significant digits instead.
-  if (maxAbs > 0 && maxAbs < 0.01) return d3format('.3~g');
-  const { divisor, suffix } = magnitudeFor(maxAbs);
-  const decimals = divisor > 1 ? Math.min(2, Math.max(1, decimalsNeeded(values.map((v) => v / divisor)))) : Math.min(2, decimalsNeeded(values));
+const joinWord = (text: string, suffix: string) => `${text}${suffix}`;
+const joinUnit = (unit: string) => (text: string, prefix: string) => `${text} ${prefix}${unit}`;
+
+/** Grouped digits with up to `max` decimals, trailing zeros dropped; a non-zero number never reads 0. */
+function plainDigits(max: number): (n: number) => string {
+  const f = d3format(`,.${max}~f`);
+  const tiny = d3format('.3~g');
+  return (n) => {
+    const s = f(n);
+    return n !== 0 && /^[\u2212-]?0(\.0*)?$/.test(s) ? tiny(n) : s;
+  };
+}
+
+/** Digits for tick values divided by a step: exactly as many decimals as the ticks need. */
+function tickDigits(scaled: readonly number[]): (x: number) => string {
+  return d3format(`,.${Math.min(6, decimalsNeeded(scaled))}~f`);
+}
+
+/** Formatter for the ticks of one axis in words or SI; undefined when the ticks cannot be written exactly that way. */
+function steppedTicks(ticks: readonly number[], steps: readonly Step[], join: (t: string, s: string) => string): ((n: number) => string) | undefined {
+  const scaled = ticks.filter((t) => t !== 0).map((t) => {
+    const s = steps.find((st) => Math.abs(t) >= st.from);
+    return s ? t / s.from : t;
+  });
+  if (decimalsNeeded(scaled) > 6) return undefined;
+  const digits = tickDigits(scaled);
+  return stepped(steps, digits, digits, join);
+}
+
+/**
+ * A formatter for the tick values of one axis: the user's d3-format specifier when given;
+ * otherwise grouped digits with just enough decimals below a million, and from there each tick
+ * in its own step (500k, 1m, 1.5m; 500bn, 1tn) or SI prefix (500 MWh, 1 GWh). Every tick is
+ * written exactly. Minus signs are U+2212, as d3-format writes them.
+ */
+export function tickFormatter(ticks: readonly number[], style?: string | NumberStyle): (n: number) => string {
+  const { format, unit } = styleOf(style);
+  if (format) return userFormatter(format);
+  const notation = notationFor(styleOf(style));
+  const maxAbs = maxAbsOf(ticks);
+  const exact = (f: (n: number) => string) => new Set(ticks.map(f)).size === new Set(ticks).size;
+  if (notation === 'si' && unit && (maxAbs >= 1e4 || (maxAbs > 0 && maxAbs < 0.1)) && maxAbs < 1e27) {
+    const f = steppedTicks(ticks, SI_STEPS, joinUnit(unit.trim()));
+    if (f && exact(f)) return f;
+  }
+  if (notation === 'words' && maxAbs >= WORDS_FROM && maxAbs < EXPONENT_FROM) {
+    const f = steppedTicks(ticks, WORD_STEPS, joinWord);
+    if (f && exact(f)) return f;
+  }
+  if (maxAbs >= EXPONENT_FROM && notation !== 'digits') return exponentTicks(ticks);
+  const decimals = decimalsNeeded(ticks);
   const f = d3format(`,.${decimals}f`);
-  return (n) => `${f(n / divisor)}${suffix}`;
+  const format0 = (n: number) => (n === 0 ? '0' : f(n));
+  // Steps finer than a millionth would print as rows of zeros (at 1e-300, every tick as "0").
+  if (decimals > 6 || !exact(format0)) return exponentTicks(ticks);
+  return format0;
+}
+
+/**
+ * A formatter for data values shown as labels: the user's specifier when given; otherwise below
+ * a million up to 2 decimals as the data needs (three significant digits for a number that would
+ * read 0), and from there each value in its own step with three significant digits, more where
+ * two values would read alike (4.2m, 350k, 1.83bn), or an SI prefix joined to an SI unit.
+ */
+export function valueFormatter(values: readonly number[], style?: string | NumberStyle): (n: number) => string {
+  const { format, unit } = styleOf(style);
+  if (format) return userFormatter(format);
+  const notation = notationFor(styleOf(style));
+  const maxAbs = maxAbsOf(values);
+  const plain = plainDigits(Math.min(2, decimalsNeeded(values)));
+  const significant = (p: number) => d3format(`,.${p}~r`);
+  if (notation === 'si' && unit && (maxAbs >= 1e4 || (maxAbs > 0 && maxAbs < 0.1)) && maxAbs < 1e27) {
+    return firstDistinct(values, [3, 4, 5, 6].map((p) => stepped(SI_STEPS, significant(p), plain, joinUnit(unit.trim()))));
+  }
+  if (notation === 'digits' || maxAbs < WORDS_FROM) return plain;
+  const words = firstDistinct(values.filter((v) => Math.abs(v) < EXPONENT_FROM), [3, 4, 5, 6].map((p) => stepped(WORD_STEPS, significant(p), plain, joinWord)));
+  if (maxAbs < EXPONENT_FROM) return words;
+  // Beyond a thousand trillion, exponent form; the smaller values of the same chart keep their words.
+  const huge = exponentValues(values.filter((v) => Math.abs(v) >= EXPONENT_FROM));
+  return (n) => (Math.abs(n) >= EXPONENT_FROM ? huge(n) : words(n));
 }

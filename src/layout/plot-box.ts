@@ -73,7 +73,7 @@ export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext
   let leftWidth: number;
   if (domains.left.kind === 'linear') {
     const [lo, hi] = domains.left.extent;
-    const probe = ticksFor(ctx, lo, hi, bottom - top, 'vertical', domains.left.format);
+    const probe = ticksFor(ctx, lo, hi, bottom - top, 'vertical', domains.left);
     left = { kind: 'linear', probe };
     leftWidth = max(probe.labels, (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
   } else if (domains.left.kind === 'time') {

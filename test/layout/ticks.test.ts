@@ -77,8 +77,8 @@ describe('number formats', () => {
     expect([0, 0.25, 0.5].map(tickFormatter([0, 0.25, 0.5]))).toEqual(['0', '0.25', '0.50']);
   });
 
-  it('writes millions and billions with M and bn', () => {
-    expect(tickFormatter([0, 2e6, 4e6])(2e6)).toBe('2M');
+  it('writes millions and billions with m and bn', () => {
+    expect(tickFormatter([0, 2e6, 4e6])(2e6)).toBe('2m');
     expect(tickFormatter([0, 1.5e9, 3e9])(1.5e9)).toBe('1.5bn');
   });
 
