@@ -39,6 +39,7 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     aggregate: (raw.aggregate ?? 'sum') as ResolvedBrief['aggregate'],
     style: (raw.style ?? 'report') as string,
     size: { width: size.width ?? DEFAULT_SIZE.width, height: size.height ?? DEFAULT_SIZE.height },
+    sizeFixed: { width: size.width !== undefined, height: size.height !== undefined },
     output: asList(raw.output),
     index: raw.index as ResolvedBrief['index'],
     start: raw.start as string | undefined,

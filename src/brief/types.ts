@@ -92,6 +92,8 @@ export interface ResolvedBrief {
   style: string;
   /** Frame size in CSS pixels. Default: { width: 720, height: 440 }. */
   size: { width: number; height: number };
+  /** Which sides of the frame the brief sets; a form may grow a side the brief leaves open (lying bars grow in height to name every bar). */
+  sizeFixed: { width: boolean; height: boolean };
   /** Output files, relative to the brief (or -o DIR). Default: [] (the brief's name with .svg). */
   output: string[];
   /** For intent change: the base of the index. Default: undefined. */

@@ -53,5 +53,6 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext,
   rationale.push(...planned.value.decisions);
   const numbers = notationDecision(fields);
   if (numbers) rationale.push(numbers);
-  return success({ form: form.name, intent: brief.intent, rule: rule?.id ?? 'pinned', plan: planned.value.plan, rationale }, problems);
+  const { size } = planned.value;
+  return success({ form: form.name, intent: brief.intent, rule: rule?.id ?? 'pinned', plan: planned.value.plan, rationale, ...(size ? { size } : {}) }, problems);
 }

@@ -11,6 +11,6 @@ export function notationDecision(fields: Fields): Decision | undefined {
   const asked = value.notation !== 'auto';
   const unit = value.unit ? `the unit ${value.unit}` : 'no unit';
   const why = asked ? 'the brief asks for it (`notation:`)' : isSiUnit(value.unit) ? `${unit} is an SI unit, so large and small values take SI prefixes joined to it` : `${unit} is not an SI unit, so large values are written as thousands, millions, billions and trillions`;
-  const words = { words: 'from a million up, each number in its own step: k, m, bn, tn (three significant digits, more where two would read alike)', si: 'SI prefixes joined to the unit (3.5 GWh, 2 ms)', digits: 'every digit, grouped by thousands' }[chosen];
-  return { decision: `numbers written with ${words}`, rule: why };
+  const words = { words: 'numbers from a million up written each in its own step, k, m, bn or tn, to three significant digits (more where two would read alike)', si: 'numbers written with SI prefixes joined to the unit (3.5 GWh, 2 ms)', digits: 'numbers written with every digit, grouped by thousands' }[chosen];
+  return { decision: words, rule: why };
 }

@@ -45,6 +45,8 @@ export interface PlanInput {
 export interface Planned<Plan> {
   plan: Plan;
   decisions: Decision[];
+  /** The frame the form needs, when it grows a side the brief leaves open. Default: the brief's size. */
+  size?: { width: number; height: number };
 }
 
 /** What the choice stage needs of a form: its name, its traits, and its plan. The registry's forms are passed in. */
@@ -64,4 +66,6 @@ export interface Choice<Plan = unknown> {
   rule: string;
   plan: Plan;
   rationale: Decision[];
+  /** The frame the chart is drawn in, when the form grew it beyond the brief's default. */
+  size?: { width: number; height: number };
 }

@@ -141,7 +141,17 @@ export function summaryOf(folded: Folded, anyNegative: boolean): FoldSummary {
   return { mode: folded.foldMode, count: folded.foldedKeys.length, total: folded.foldedTotal, range: folded.foldedRange, nearZero: anyNegative };
 }
 
-function foldDiagnostic(total: number, query: BarQuery, folded: Folded, capacity: number, valueName: string, nearZero: boolean): Diagnostic {
+/** How the bars' room is measured, for the words of a fold: the least band a bar gets, and the frame that would hold them all. */
+export interface BandNeed {
+  /** Least band per bar, in px (3 for unnamed slots, a readable row for named bars). */
+  px: number;
+  /** Why that band: e.g. "so that each name reads". Default: none. */
+  why?: string;
+  /** The frame height that would show every bar, when the height is what limits them. */
+  heightForAll?: (bars: number) => number;
+}
+
+function foldDiagnostic(total: number, query: BarQuery, folded: Folded, capacity: number, valueName: string, nearZero: boolean, need: BandNeed): Diagnostic {
   const n = folded.foldedKeys.length;
   const which = nearZero ? `${n} closest to zero` : `${n} smallest`;
   const why = {
@@ -151,8 +161,10 @@ function foldDiagnostic(total: number, query: BarQuery, folded: Folded, capacity
     mixed: `the ${which} are left out and their range is stated in a note, because they mix positive and negative values that one "Others" bar would net out`,
     none: '',
   }[folded.foldMode];
-  return diagnostic('derive.others-folded', `${total} bars do not fit at 3 px each; ${why}`, {
-    field: query.key.name, found: `${total} bars`, expected: `at most ${capacity}`, hint: 'make the chart larger with `size:`, or filter the table to the keys that matter',
+  const all = need.heightForAll?.(total);
+  const larger = all === undefined ? 'make the chart larger with `size:`' : `a height of ${all} px would name all ${total} (\`size: { height: ${all} }\`)`;
+  return diagnostic('derive.others-folded', `${total} bars do not fit at ${need.px} px each${need.why ? ` ${need.why}` : ''}; ${why}`, {
+    field: query.key.name, found: `${total} bars`, expected: `at most ${capacity}`, hint: `${larger}, or filter the table to the keys that matter`,
   });
 }
 
@@ -196,7 +208,7 @@ function combineGroups(groups: RowGroup[], query: BarQuery, problems: Diagnostic
  * order, folded to what the plot can show. Missing values are left out, never drawn as 0.
  * `grouped` is the table's rows grouped by the query's key and value, when already at hand.
  */
-export function deriveBars<Q extends BarQuery>(table: Table, query: Q, capacityFor: CapacityFor, grouped: Grouped = groupRows(table, { keys: [query.key], value: query.value })): Outcome<DerivedBars<Q>> {
+export function deriveBars<Q extends BarQuery>(table: Table, query: Q, capacityFor: CapacityFor, grouped: Grouped = groupRows(table, { keys: [query.key], value: query.value }), need: BandNeed = { px: 3 }): Outcome<DerivedBars<Q>> {
   const { groups } = grouped;
   const problems = [...grouped.diagnostics];
   const valueName = query.value?.name ?? 'count';
@@ -223,6 +235,6 @@ export function deriveBars<Q extends BarQuery>(table: Table, query: Q, capacityF
     return failure(problems);
   }
   const { capacity, folded } = settleCapacity(sorted, query, capacityFor);
-  problems.push(foldDiagnostic(sorted.length, query, folded, capacity, valueName, anyNegative));
+  problems.push(foldDiagnostic(sorted.length, query, folded, capacity, valueName, anyNegative, need));
   return success({ query, valueName, capacity, anyNegative, ...folded }, problems);
 }

@@ -8,6 +8,7 @@ import { isOrdered, refOf, type Field, type FieldRef } from '../fields/types.js'
 import { plotFor } from '../layout/compose.js';
 import { memoized, type LayoutContext } from '../layout/kit-types.js';
 import { capText } from '../layout/text.js';
+import { readableStep } from '../layout/axes.js';
 import { idMaker } from '../scene/ids.js';
 import type { Table } from '../table/types.js';
 import type { Planned, PlanInput } from './types.js';
@@ -85,6 +86,45 @@ function chooseOrientation(input: PlanInput, key: Field, value: Field | undefine
   return lying(`${px(plot.width / n)} each`);
 }
 
+/**
+ * Tallest frame lying bars grow to when the brief leaves the height open: about 85 named rows
+ * at the report style's type, two pages of a report column (common practice). Beyond it, bars fold.
+ */
+export const MAX_GROWN_HEIGHT = 1600;
+
+/** A band in which a lying bar's name reads: the least step at which the left band axis prints every name. */
+export const readableBand = readableStep;
+
+/**
+ * The frame lying bars need so that every bar gets a readable band, when the brief leaves the
+ * height open: the height outside the plot (measured with the composer's plot box) plus one band
+ * per bar, and one band of slack for a note. Never lower than the brief's, never above MAX_GROWN_HEIGHT.
+ */
+function grownFrame(input: PlanInput, key: Field, value: Field | undefined): { size?: { width: number; height: number }; decision?: Decision } {
+  const { brief } = input;
+  const { labels, extent: [lo, hi] } = barsOf(input, key, value);
+  const ctx: LayoutContext = { brief, style: input.style, measure: input.measure, id: idMaker(), ...(input.memo ? { memo: input.memo } : {}) };
+  const band = Math.ceil(readableBand(ctx));
+  const { plot } = plotFor({
+    left: { kind: 'band', name: 'key', field: key.name, title: '', domain: labels },
+    bottom: { kind: 'linear', name: 'value', field: value?.name ?? 'count', title: '', extent: [Math.min(0, lo), Math.max(0, hi)], format: value?.format, unit: value?.unit }, first: 'bottom',
+  }, [], ctx).box;
+  const needed = Math.ceil(brief.size.height - plot.height + (labels.length + 1) * band);
+  if (needed <= brief.size.height) return {};
+  const height = Math.min(needed, MAX_GROWN_HEIGHT);
+  const all = height === needed;
+  if (brief.sizeFixed.height) return {};
+  return {
+    size: { width: brief.size.width, height },
+    decision: {
+      decision: `frame grown to ${height} px high`,
+      rule: all
+        ? `every one of the ${labels.length} bars gets a band of ${Math.round(band)} px in which its name reads; the brief sets no height`
+        : `the brief sets no height, so the frame grows to its limit of ${MAX_GROWN_HEIGHT} px; ${labels.length} named bars would need ${needed} px, so the smallest are folded`,
+    },
+  };
+}
+
 /** The bar form's plan: its order, orientation and how rows combine, each decision with its rule. */
 export function planBar(input: PlanInput): Outcome<Planned<BarPlan>> {
   const { fields, brief } = input;
@@ -96,9 +136,12 @@ export function planBar(input: PlanInput): Outcome<Planned<BarPlan>> {
   if (problems.some((p) => p.severity === 'error')) return failure(problems);
   const orientation = chooseOrientation(input, key, value);
   decisions.push(orientation.decision);
+  const grown = orientation.vertical || key.type === 'temporal' || key.type === 'quantitative' ? {} : grownFrame(input, key, value);
+  if (grown.decision) decisions.push(grown.decision);
   if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });
   return success({
     plan: { key: refOf(key), value: value && refOf(value), orientation: orientation.vertical ? 'vertical' : 'horizontal', order, aggregate: brief.aggregate },
     decisions,
+    ...(grown.size ? { size: grown.size } : {}),
   }, problems);
 }

@@ -1,5 +1,7 @@
 import { max, min } from 'd3-array';
-import { deriveBars, type BarDatum, type CapacityFor, type DerivedBars } from '../derive/bars.js';
+import { deriveBars, type BandNeed, type BarDatum, type CapacityFor, type DerivedBars } from '../derive/bars.js';
+import type { Outcome } from '../diagnostics/diagnostic.js';
+import type { Table } from '../table/types.js';
 import { plotFor } from '../layout/compose.js';
 import { memoized, type CartesianDomains, type LabelRoom, type LayoutContext, type PlotArea, type ScaleProbe } from '../layout/kit-types.js';
 import { valueFormatter } from '../layout/number-format.js';
@@ -8,7 +10,7 @@ import { asBand, asLinear, type BandScale, type LinearScale } from '../layout/sc
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
 import { barDescription, barValueTitle, foldNote, foldOf } from './bar-text.js';
-import { barGroups, planBar, type BarPlan } from './bar-plan.js';
+import { barGroups, planBar, readableBand, type BarPlan } from './bar-plan.js';
 import type { FormDef } from './types.js';
 
 /** The narrowest bar band drawn, in px; more bars than fit at this step are folded. */
@@ -34,16 +36,33 @@ function valueTexts(derived: DerivedBars<BarPlan>, ctx: LayoutContext): Map<BarD
 }
 
 /**
- * How many bars the key axis holds at MIN_BAND_PX, with the note a fold would print: measured
- * with the composer's own plot box, so the bars drawn are never thinner than planned.
+ * The least band a bar gets: a readable row for lying bars, whose names must all be printed
+ * (a categorical name is never thinned away), MIN_BAND_PX for upright bars (their labels were
+ * measured to fit when the orientation was chosen, or their key is ordered and may thin).
  */
-function capacityFor(plan: BarPlan, ctx: LayoutContext): CapacityFor {
+function bandNeed(plan: BarPlan, ctx: LayoutContext): BandNeed {
+  if (plan.orientation === 'vertical') return { px: MIN_BAND_PX };
+  const px = Math.ceil(readableBand(ctx));
+  const plotHeight = plotFor(domainsOf({ query: plan, bars: [], valueName: plan.value?.name ?? 'count' }, false), [], ctx).box.plot.height;
+  return { px, why: 'so that each name reads', heightForAll: (n) => Math.ceil(ctx.brief.size.height - plotHeight + (n + 1) * px) };
+}
+
+/**
+ * How many bars the key axis holds at their least band, with the note a fold would print:
+ * measured with the composer's own plot box, so the bars drawn are never thinner than planned.
+ */
+function capacityFor(plan: BarPlan, ctx: LayoutContext, px: number): CapacityFor {
   const valueTitle = barValueTitle(plan);
   return (fold, bars) => {
     const notes = foldNote(plan, fold, valueTitle, valueFormatter([fold?.total ?? 0, ...(fold?.range ?? [])], plan.value));
     const { plot } = plotFor(domainsOf({ query: plan, bars, valueName: plan.value?.name ?? 'count' }, plan.orientation === 'vertical'), notes, ctx).box;
-    return Math.floor((plan.orientation === 'vertical' ? plot.width : plot.height) / MIN_BAND_PX);
+    return Math.floor((plan.orientation === 'vertical' ? plot.width : plot.height) / px);
   };
+}
+
+function deriveBarChart(table: Table, plan: BarPlan, ctx: LayoutContext): Outcome<DerivedBars<BarPlan>> {
+  const need = bandNeed(plan, ctx);
+  return deriveBars(table, plan, capacityFor(plan, ctx, need.px), barGroups(table, plan.key, plan.value, ctx), need);
 }
 
 /** Room for value labels beyond the bar ends, taken from the plot only where they would not fit; none when they do not fit their bands. */
@@ -119,7 +138,7 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
   noun: 'bar chart',
   traits: { lengthCoded: true, connectsKey: false, radial: false, coloursCategories: false, axisPerValue: false },
   plan: planBar,
-  derive: (table, plan, ctx) => deriveBars(table, plan, capacityFor(plan, ctx), barGroups(table, plan.key, plan.value, ctx)),
+  derive: deriveBarChart,
   domains: (derived) => domainsOf(derived, derived.query.orientation === 'vertical'),
   room: labelRoom,
   layout(derived, area, ctx) {

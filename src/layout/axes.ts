@@ -134,13 +134,18 @@ function labelLines(ctx: LayoutContext, stem: string, category: string, lines: s
   return lines.map((text, j) => textNode(measure, { id: id(stem, category), role: 'tick', text, style: tick, x, top: middle - (lines.length * lh) / 2 + j * lh + (lh - box) / 2, anchor: 'end' }));
 }
 
+/** The least band step in which a left band axis prints every name: one line of tick text and a pixel between. */
+export function readableStep(ctx: Pick<LayoutContext, 'style' | 'measure'>): number {
+  return textBoxHeight(ctx.measure, ctx.style.text.tick) + 1;
+}
+
 /** A left band axis: the fitted (wrapped or shortened) labels right-aligned beside their bands, thinned when bands are thinner than a line. */
 export function drawLeftBandAxis(fitted: FittedBandLabels, channel: BandChannel, plot: Box, body: Box, ctx: LayoutContext): DrawnAxis {
-  const { style, measure, id } = ctx;
+  const { style, id } = ctx;
   const gap = style.spacing.tickGap;
   const { band } = fitted;
   const left = plot.x;
-  const k = thinningStep(textBoxHeight(measure, style.text.tick), band.step, 1);
+  const k = thinningStep(readableStep(ctx) - 1, band.step, 1);
   const labels: TextNode[] = [];
   const tickMarks: SceneNode[] = [];
   channel.domain.forEach((category, i) => {

@@ -179,7 +179,7 @@ export function plotFor(domains: CartesianDomains, notes: string[], ctx: LayoutC
  */
 export function frameFor(legendSpec: LegendSpec | undefined, notes: string[], ctx: LayoutContext): Omit<PlotLayout, 'box'> {
   const { brief, style, measure } = ctx;
-  const frame = memoized(ctx, `frame\u0000${notes.join('\u0000')}`, () => layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes }, style, brief.size, measure));
+  const frame = memoized(ctx, `frame\u0000${brief.size.width}\u0000${brief.size.height}\u0000${notes.join('\u0000')}`, () => layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes }, style, brief.size, measure));
   const { body, legend } = placeLegend(legendSpec, frame.body, ctx);
   return { frame, body, ...(legend ? { legend } : {}) };
 }

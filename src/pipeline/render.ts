@@ -148,7 +148,9 @@ export function renderInputs(inputs: RenderInputs, measure: TextMeasurer, opts: 
   if (!choice.ok) return { brief, rationale: [], diagnostics: all };
   const { rationale } = choice.value;
   const form = formNamed(choice.value.form)!;
-  const ctx: LayoutContext = { brief, style, measure, id: idMaker(), memo };
+  // A form may grow a side of the frame the brief leaves open; layout draws in that frame.
+  const frameSize = choice.value.size;
+  const ctx: LayoutContext = { brief: frameSize ? { ...brief, size: frameSize } : brief, style, measure, id: idMaker(), memo };
   const derived = form.derive(table, choice.value.plan, ctx);
   all.push(...locate(derived.diagnostics));
   lap('derive');

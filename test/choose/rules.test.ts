@@ -1,3 +1,4 @@
+import { nodesOf } from '../../src/scene/walk.js';
 import type { BarPlan } from '../../src/forms/bar-plan.js';
 import { describe, expect, it } from 'vitest';
 import { codes, renderRows } from '../helpers.js';
@@ -45,14 +46,16 @@ describe('rules for the compare intent', () => {
     expect((r.choice!.plan as BarPlan).orientation).toBe('horizontal');
   });
 
-  it('many bars beyond the 3 px capacity are folded into top N and "Others", with a warning', async () => {
+  it('many named bars beyond the readable capacity are folded into top N and "Others", with a warning', async () => {
     const rows = Array.from({ length: 300 }, (_, i) => ({ k: `Key ${i}`, n: i + 1 }));
     const r = await renderRows({ intent: 'compare', keys: 'k', values: 'n' }, rows);
     expect(r.ok).toBe(true);
     expect(codes(r)).toContain('derive.others-folded');
-    // As many bars as the plot holds at 3 px each, not one more.
-    const drawn = r.scene!.root.children.filter((n) => n.role === 'bar').length;
-    expect(drawn).toBe(Math.floor(r.scene!.plot.height / 3));
+    // As many lying bars as the plot holds at one readable row each (a tick label's box and a pixel), not one more.
+    const tick = nodesOf(r.scene!.root).find((n) => n.role === 'tick' && n.kind === 'text');
+    const row = Math.ceil((tick as { box: { height: number } }).box.height + 1);
+    const drawn = nodesOf(r.scene!.root).filter((n) => n.role === 'bar').length;
+    expect(drawn).toBe(Math.floor(r.scene!.plot.height / row));
   });
 
   it('chooses for a table of 200,000 rows and 100,000 keys without overflowing the stack', async () => {

@@ -23,9 +23,13 @@ describe('property: planned bar capacity is the drawn capacity', () => {
         }
         const bars = nodesOf(r.scene!.root).filter((n) => n.role === 'bar');
         if (!codes(r).includes('derive.others-folded')) return;
-        const length = r.scene!.plot.height;
-        expect(bars.length * MIN_BAND_PX).toBeLessThanOrEqual(length + 1e-9);
-        expect((bars.length + 1) * MIN_BAND_PX).toBeGreaterThan(length);
+        // Lying bars get a readable row each (a tick label's box and a pixel); upright ones MIN_BAND_PX.
+        const vertical = r.scene!.axes.some((a) => a.orient === 'bottom' && a.scale === 'band');
+        const tick = nodesOf(r.scene!.root).find((n) => n.role === 'tick' && n.kind === 'text') as { box: { height: number } } | undefined;
+        const band = vertical ? MIN_BAND_PX : Math.ceil(tick!.box.height + 1);
+        const length = vertical ? r.scene!.plot.width : r.scene!.plot.height;
+        expect(bars.length * band).toBeLessThanOrEqual(length + 1e-9);
+        expect((bars.length + 1) * band).toBeGreaterThan(length);
       },
     ), { numRuns: runs(40) });
   });
