@@ -34,7 +34,7 @@ export function checkCompareShape(fields: Fields, brief: ResolvedBrief): Diagnos
     if (value.type !== 'quantitative') {
       problems.push(diagnostic('choice.value-not-quantitative', `the value \`${value.name}\` is ${value.type}, but bar lengths need numbers`, {
         path: '/values', field: value.name, found: value.type, expected: 'a quantitative column',
-        hint: `use \`aggregate: count\` to count rows per key, or set \`fields.${value.name}.type: quantitative\` if it holds numbers`,
+        hint: `set \`fields.${value.name}.type: quantitative\` to read it as numbers: the cells that are not numbers are then named by line (61.2%, 1,212, $640 and 1 050 all read as numbers)`,
       }));
     }
   }
@@ -72,10 +72,29 @@ export function checkIntentOptions(brief: ResolvedBrief): Diagnostic[] {
  */
 export function checkValueUnit(fields: Fields): Diagnostic[] {
   const value = fields.values[0];
-  if (!value || value.unit || /[([].+[)\]]/.test(`${value.name} ${value.label}`)) return [];
+  if (value?.unit === '%') return checkPercentOfFractions(value);
+  if (!value || value.unit || /[([].+[)\]]/.test(`${value.name} ${value.label}`) || isPercentFormat(value.format)) return [];
   return [diagnostic('choice.unit-missing', `the value \`${value.name}\` has no unit, so its axis title cannot say what is counted or measured`, {
     path: `/fields/${value.name}/unit`, field: value.name, expected: 'a unit such as "crossings per day", "€" or "%"',
     hint: `add \`fields: { ${value.name}: { unit: … } }\``,
+  })];
+}
+
+/** True for a d3-format specifier that writes numbers as percentages (its numbers are fractions, the unit is in the labels). */
+function isPercentFormat(format: string | undefined): boolean {
+  return format !== undefined && /[%p]$/.test(format);
+}
+
+/**
+ * A value in % whose numbers all lie within 0–1 (and are not all 0 or 1) is most likely a
+ * fraction: 0.34 labelled under "(%)" reads as a third of a percent. Warned, with the two fixes.
+ */
+function checkPercentOfFractions(value: Fields['values'][number]): Diagnostic[] {
+  const numbers = value.column.values.filter((v): v is number => typeof v === 'number');
+  if (isPercentFormat(value.format) || numbers.length === 0 || numbers.some((v) => v < 0 || v > 1) || numbers.every((v) => v === 0 || v === 1)) return [];
+  return [diagnostic('choice.percent-of-fractions', `the value \`${value.name}\` has unit % but every number lies between 0 and 1 (e.g. ${numbers.find((v) => v > 0 && v < 1)}), so it is probably a fraction and would be labelled as under one percent`, {
+    path: `/fields/${value.name}/unit`, field: value.name, found: 'numbers between 0 and 1', expected: 'percentages from 0 to 100',
+    hint: `write it as a percentage with \`fields: { ${value.name}: { format: ".0%" } }\` and remove \`unit: "%"\`, or multiply the column by 100`,
   })];
 }
 

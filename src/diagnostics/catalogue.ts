@@ -55,6 +55,7 @@ export const CATALOGUE = {
   'choice.order-not-applicable': 'error',
   'choice.lenient-fallback': 'warning',
   'choice.unit-missing': 'warning',
+  'choice.percent-of-fractions': 'warning',
   'choice.no-rule': 'error',
   'choice.line-on-categorical': 'error',
   'choice.radial-not-cyclic': 'error',

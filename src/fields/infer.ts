@@ -85,7 +85,7 @@ export function inferFields(table: Table, brief: ResolvedBrief): Outcome<Fields>
     const role: FieldRole = brief.keys.includes(column.name) ? 'key' : brief.values.includes(column.name) ? 'value' : 'other';
     return {
       name: column.name, label: hint?.label ?? readableName(column.name), type, role,
-      unit: hint?.unit, format: hint?.format, notation: brief.notation, levels: levelsOf(column, type, hint, problems), column,
+      unit: hint?.unit ?? column.unit, format: hint?.format, notation: brief.notation, levels: levelsOf(column, type, hint, problems), column,
     };
   });
   if (hasErrors(problems)) return failure(problems);

@@ -1,3 +1,4 @@
+import { splitAffix } from './affix.js';
 import type { DateGrain } from './types.js';
 
 /** Cell texts read as "no value" in any column (common practice in CSV exports from R, spreadsheets and databases). */
@@ -22,10 +23,11 @@ const INFINITE = /^[+-]?(inf|infinity)$/i;
  * Reads a number cell: a finite number, `Infinity` for non-finite spellings, or undefined if not
  * a number. With a decimal point (the default) "1,234.5" groups thousands by commas; with a
  * decimal comma, as semicolon-separated files write numbers, "1.234,5" groups them by dots and
- * "1,25" is 1.25. A leading U+2212 minus sign (as chartwright writes it) reads as "-".
+ * "1,25" is 1.25. A leading U+2212 minus sign (as chartwright writes it) reads as "-". A currency
+ * or percent sign and thousands grouped by spaces are read past (see affix.ts).
  */
 export function parseNumberText(text: string, decimal: DecimalMark = '.'): number | undefined {
-  const t = text.trim().replace(/^\u2212/, '-');
+  const t = splitAffix(text).core.replace(/^\u2212/, '-');
   if (decimal === '.') {
     if (PLAIN_NUMBER.test(t)) return Number(t);
     if (GROUPED_NUMBER.test(t)) return Number(t.replace(/,/g, ''));

@@ -1,5 +1,6 @@
 import type { FieldType } from '../brief/types.js';
 import { describeRows, diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { splitAffix } from './affix.js';
 import { isMissingText, parseBooleanText, parseIsoDate } from './cells.js';
 import { decimalMarkOf, eitherMark, numberReader, type NumberReader } from './decimal.js';
 import type { RawCell, RawTable } from './parse.js';
@@ -87,9 +88,13 @@ function buildColumn(name: string, type: ColumnType, cells: RawCell[], readNumbe
   const missing: number[] = [];
   const unreadable: number[] = [];
   let grain: DateGrain | undefined;
+  let unit: string | undefined;
   cells.forEach((cell, i) => {
     text.push(cell === null || (typeof cell === 'number' && !Number.isFinite(cell)) ? null : String(cell).trim());
-    const r = readAs(type, cell, readNumber);
+    let r = readAs(type, cell, readNumber);
+    // One column, one unit sign: "$640" beside "€4.2" is not a number to compare.
+    const sign = type === 'number' && r && typeof cell === 'string' ? splitAffix(cell).unit : undefined;
+    if (sign !== undefined && (unit ??= sign) !== sign) r = undefined;
     const finite = r && (typeof r.value !== 'number' || Number.isFinite(r.value));
     if (r && finite) {
       values.push(r.value);
@@ -102,6 +107,7 @@ function buildColumn(name: string, type: ColumnType, cells: RawCell[], readNumbe
   });
   const column: Column = { name, type, values, text, missing };
   if (type === 'date') column.grain = grain ?? 'day';
+  if (unit !== undefined) column.unit = unit;
   return { column, unreadable };
 }
 

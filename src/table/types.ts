@@ -14,6 +14,8 @@ export interface Column {
   text: (string | null)[];
   /** Row indexes (0-based) whose cell is missing or could not be read as the column's type. */
   missing: number[];
+  /** For `number` columns: the currency or percent sign its cells are written with ("61.2%", "$640"), if any. */
+  unit?: string;
   /** For `date` columns: the finest grain any value is given at. */
   grain?: DateGrain;
 }
