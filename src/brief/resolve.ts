@@ -37,6 +37,7 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     baseline: (raw.baseline ?? 'zero') as ResolvedBrief['baseline'],
     notation: (raw.notation ?? 'auto') as ResolvedBrief['notation'],
     aggregate: (raw.aggregate ?? 'sum') as ResolvedBrief['aggregate'],
+    aggregateStated: raw.aggregate !== undefined,
     style: (raw.style ?? 'report') as string,
     size: { width: size.width ?? DEFAULT_SIZE.width, height: size.height ?? DEFAULT_SIZE.height },
     sizeFixed: { width: size.width !== undefined, height: size.height !== undefined },

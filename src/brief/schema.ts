@@ -34,6 +34,7 @@ const fieldHint: SchemaNode = {
     format: { type: 'string', description: 'd3-format specifier for numbers, e.g. ",d".' },
     order: { type: 'array', items: { anyOf: [{ type: 'string' }, { type: 'number' }] }, description: 'Level order for ordinal or cyclic fields.' },
     label: { type: 'string', description: 'Readable name used in axis titles.' },
+    additive: { type: 'boolean', description: 'Whether values of this column may be added up (false for rates, shares, temperatures, pH). Default: false for the units %, ‰, °C, °F, K, pH and dB, true otherwise.' },
   },
 };
 

@@ -47,6 +47,8 @@ export interface FieldHint {
   order?: (string | number)[];
   /** Human-readable name used in titles. Default: the column name made readable. */
   label?: string;
+  /** Whether values may be added up; a sum of a non-additive value is refused. Default: false for the units %, ‰, °C, °F, K, pH and dB, true otherwise. */
+  additive?: boolean;
 }
 
 /** Where the table comes from. */
@@ -88,6 +90,8 @@ export interface ResolvedBrief {
   baseline: 'zero' | 'fit';
   /** How rows with the same key are combined. Default: 'sum'. */
   aggregate: Aggregate;
+  /** Whether the brief states `aggregate:` (rows sharing a key are then combined without a warning). */
+  aggregateStated: boolean;
   /** Style preset name (from templates/styles) or a path to a style file. Default: 'report'. */
   style: string;
   /** Frame size in CSS pixels. Default: { width: 720, height: 440 }. */

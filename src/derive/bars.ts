@@ -6,6 +6,7 @@ import type { Table } from '../table/types.js';
 import { AGGREGATORS } from './aggregate.js';
 import { firstUnevenStep } from './dates.js';
 import { groupRows, type Grouped, type RowGroup } from './group.js';
+import type { Combined } from './group.js';
 import { compareNatural, compareText } from './order.js';
 
 /** What the bar derivation needs from the plan. */
@@ -16,6 +17,12 @@ export interface BarQuery {
   /** value: largest first; label: A→Z; data: as the rows give them; key: the key's own order. */
   order: 'value' | 'label' | 'data' | 'key';
   aggregate: Aggregate;
+  /** Whether the brief stated the aggregate; when not, the plan has already warned about combined rows. Default: stated. */
+  aggregateStated?: boolean;
+  /** Rows sharing a key that are combined, as the plan found them. Default: none. */
+  combined?: Combined;
+  /** Keys with no usable value in any row. Default: none. */
+  noData?: string[];
 }
 
 /** One bar: its label, the value it shows, and the rows behind it. */
@@ -189,7 +196,7 @@ function unevenDates(bars: BarDatum[], keyOf: Map<string, number>, query: BarQue
 function combineGroups(groups: RowGroup[], query: BarQuery, problems: Diagnostic[]): BarDatum[] | undefined {
   const aggregator = AGGREGATORS[query.aggregate];
   const combined = groups.filter((g) => g.values.length > 1);
-  if (combined.length && query.value) {
+  if (combined.length && query.value && query.aggregateStated !== false) {
     problems.push(diagnostic('derive.aggregated', `${combined.length} key${combined.length === 1 ? '' : 's'} ha${combined.length === 1 ? 's' : 've'} several rows (first: ${JSON.stringify(combined[0]!.labels[0])}, ${combined[0]!.values.length} rows); their values are ${aggregator.verb} (aggregate: ${query.aggregate})`, {
       field: query.key.name, hint: 'set `aggregate:` to sum, mean, count, max or min',
     }));

@@ -38,10 +38,19 @@ function missingDiagnostic(rows: number[], noun: 'line' | 'row', what: string, t
   });
 }
 
+/** How many keys had several rows combined, how many rows at most, and whether every key had that many ("3 rows per lab"). */
+export interface Combined {
+  keys: number;
+  most: number;
+  every: boolean;
+}
+
 /** A table's rows in groups, and what was left out of them. */
 export interface Grouped {
   groups: RowGroup[];
   diagnostics: Diagnostic[];
+  /** Keys (labels joined by " / ") whose rows all lack a usable value: nothing of them is drawn. */
+  noValue: string[];
 }
 
 /**
@@ -55,14 +64,15 @@ export function groupRows(table: Table, query: GroupQuery): Grouped {
   const orders = query.keys.map((k, i) => keyOrderOf(k, keyColumns[i]!));
   const groups = new Map<string, RowGroup>();
   const missingValue: number[] = [];
+  const missingValueKeys = new Map<string, string[]>();
   const missingKey: number[][] = query.keys.map(() => []);
   for (let i = 0; i < table.rowCount; i++) {
     const labels = keyColumns.map((c) => keyText(c, i));
     const absent = labels.findIndex((l) => l === null);
     if (absent >= 0) { missingKey[absent]!.push(table.rowPositions[i]!); continue; }
     const raw = valueColumn ? valueColumn.values[i] : 1;
-    if (typeof raw !== 'number') { missingValue.push(table.rowPositions[i]!); continue; }
     const id = labels.length === 1 ? labels[0]! : JSON.stringify(labels);
+    if (typeof raw !== 'number') { missingValue.push(table.rowPositions[i]!); missingValueKeys.set(id, labels as string[]); continue; }
     let g = groups.get(id);
     if (!g) { g = { labels: labels as string[], sortKeys: orders.map((o) => o(i)), values: [], rows: [] }; groups.set(id, g); }
     g.values.push(raw);
@@ -74,5 +84,6 @@ export function groupRows(table: Table, query: GroupQuery): Grouped {
   query.keys.forEach((k, i) => {
     if (missingKey[i]!.length) diagnostics.push(missingDiagnostic(missingKey[i]!, noun, `no \`${k.name}\``, table, k.name, 'give every row a key', false));
   });
-  return { groups: [...groups.values()], diagnostics };
+  const noValue = [...missingValueKeys].filter(([id]) => !groups.has(id)).map(([, labels]) => labels.join(' / '));
+  return { groups: [...groups.values()], diagnostics, noValue };
 }

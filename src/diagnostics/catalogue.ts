@@ -56,6 +56,8 @@ export const CATALOGUE = {
   'choice.lenient-fallback': 'warning',
   'choice.unit-missing': 'warning',
   'choice.percent-of-fractions': 'warning',
+  'choice.sum-not-additive': 'error',
+  'choice.keys-repeat': 'warning',
   'choice.no-rule': 'error',
   'choice.line-on-categorical': 'error',
   'choice.radial-not-cyclic': 'error',

@@ -4,6 +4,7 @@ import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome 
 import { suggestionHint } from '../diagnostics/suggest.js';
 import type { Column, Table } from '../table/types.js';
 import { cycleOrder } from './cyclic.js';
+import { isAdditiveUnit } from './notation.js';
 import type { Field, FieldRole, Fields } from './types.js';
 
 /** "crossings_per_day" → "Crossings per day". */
@@ -85,7 +86,7 @@ export function inferFields(table: Table, brief: ResolvedBrief): Outcome<Fields>
     const role: FieldRole = brief.keys.includes(column.name) ? 'key' : brief.values.includes(column.name) ? 'value' : 'other';
     return {
       name: column.name, label: hint?.label ?? readableName(column.name), type, role,
-      unit: hint?.unit ?? column.unit, format: hint?.format, notation: brief.notation, levels: levelsOf(column, type, hint, problems), column,
+      unit: hint?.unit ?? column.unit, format: hint?.format, notation: brief.notation, additive: hint?.additive ?? isAdditiveUnit(hint?.unit ?? column.unit), levels: levelsOf(column, type, hint, problems), column,
     };
   });
   if (hasErrors(problems)) return failure(problems);

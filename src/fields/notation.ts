@@ -27,3 +27,14 @@ export function notationFor(style: NumberStyle): Exclude<Notation, 'auto'> {
   if (style.notation && style.notation !== 'auto') return style.notation;
   return isSiUnit(style.unit) ? 'si' : 'words';
 }
+
+/**
+ * Units whose values do not add up: shares, ratios on a log scale, and temperatures on interval
+ * scales (three labs' pH of 7 is not a pH of 21). Common practice.
+ */
+const NON_ADDITIVE_UNITS = new Set(['%', '‰', '°c', '°f', 'k', 'ph', 'db', 'percent', 'per cent']);
+
+/** Whether values in this unit may be summed (true when there is no unit); "pH units" reads as pH. */
+export function isAdditiveUnit(unit: string | undefined): boolean {
+  return unit === undefined || !NON_ADDITIVE_UNITS.has(unit.trim().toLowerCase().replace(/\s+units?$/, ''));
+}

@@ -13,6 +13,8 @@ export interface Field {
   role: FieldRole;
   unit: string | undefined;
   format: string | undefined;
+  /** Whether its values may be added up (the hint's `additive`, else false for units such as %, °C, pH). */
+  additive: boolean;
   /** How its large and small numbers are written (the brief's `notation`). */
   notation: Notation;
   /** For categorical, ordinal and cyclic fields: the levels, in their meaningful order (first appearance for categorical). */
@@ -21,11 +23,11 @@ export interface Field {
 }
 
 /** A field as plans refer to it: its name and presentation, never its column of data. */
-export type FieldRef = Pick<Field, 'name' | 'label' | 'type' | 'unit' | 'format' | 'levels'> & Partial<Pick<Field, 'notation'>>;
+export type FieldRef = Pick<Field, 'name' | 'label' | 'type' | 'unit' | 'format' | 'levels'> & Partial<Pick<Field, 'notation' | 'additive'>>;
 
 /** The reference to a field that a plan keeps. */
 export function refOf(field: Field): FieldRef {
-  return { name: field.name, label: field.label, type: field.type, unit: field.unit, format: field.format, notation: field.notation, levels: field.levels };
+  return { name: field.name, label: field.label, type: field.type, unit: field.unit, format: field.format, notation: field.notation, additive: field.additive, levels: field.levels };
 }
 
 /** The fields of a brief: its keys and values in brief order, then every other column. */

@@ -3,7 +3,7 @@ import type { Aggregate } from '../brief/types.js';
 import type { Decision } from '../choose/types.js';
 import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import { AGGREGATORS } from '../derive/aggregate.js';
-import { groupRows, type Grouped } from '../derive/group.js';
+import { groupRows, type Combined, type Grouped } from '../derive/group.js';
 import { isOrdered, refOf, type Field, type FieldRef } from '../fields/types.js';
 import { plotFor } from '../layout/compose.js';
 import { memoized, type LayoutContext } from '../layout/kit-types.js';
@@ -11,6 +11,7 @@ import { capText } from '../layout/text.js';
 import { readableStep } from '../layout/axes.js';
 import { idMaker } from '../scene/ids.js';
 import type { Table } from '../table/types.js';
+import { barNotes } from './bar-text.js';
 import type { Planned, PlanInput } from './types.js';
 
 /** How bars are laid out and ordered. */
@@ -22,6 +23,41 @@ export interface BarPlan {
   /** value: largest first; label: A→Z; data: as the rows give them; key: the key's own order. */
   order: 'value' | 'label' | 'data' | 'key';
   aggregate: Aggregate;
+  aggregateStated?: boolean;
+  /** Rows sharing a key that are combined: how many keys have several rows and the most rows of one key. Default: none. */
+  combined?: Combined;
+  /** Keys with no usable value in any row, said in the chart's note. Default: none. */
+  noData?: string[];
+}
+
+/** What combining rows by key does to the chart: which keys repeat, which have no data. */
+function combinedOf(grouped: Grouped): Combined | undefined {
+  const repeated = grouped.groups.filter((g) => g.values.length > 1);
+  if (repeated.length === 0) return undefined;
+  const most = max(repeated, (g) => g.values.length)!;
+  return { keys: repeated.length, most, every: grouped.groups.every((g) => g.values.length === most) };
+}
+
+/**
+ * Rows sharing a key are combined by the aggregate: a sum of a value that does not add up
+ * (shares, pH, temperatures) is refused with a mean offered; combining when the brief states no
+ * `aggregate:` is warned about, so it is never a surprise.
+ */
+function checkCombining(input: PlanInput, key: Field, value: Field | undefined, combined: Combined | undefined): Diagnostic[] {
+  const { brief } = input;
+  if (!combined || !value) return [];
+  const rows = `${combined.keys} ${key.label.toLowerCase()} value${combined.keys === 1 ? ' has' : 's have'} several rows (up to ${combined.most})`;
+  if (brief.aggregate === 'sum' && !value.additive) {
+    return [diagnostic('choice.sum-not-additive', `${rows}, and \`${value.name}\`${value.unit ? ` in ${value.unit}` : ''} does not add up: a sum of it means nothing`, {
+      path: brief.aggregateStated ? '/aggregate' : `/fields/${value.name}`, field: value.name, found: 'aggregate: sum', expected: 'mean, max or min',
+      hint: `use \`aggregate: mean\`, or set \`fields.${value.name}.additive: true\` if its values do add up`,
+    })];
+  }
+  if (brief.aggregateStated) return [];
+  return [diagnostic('choice.keys-repeat', `${rows}; they are ${AGGREGATORS[brief.aggregate].verb}, and the chart's note says so`, {
+    field: key.name, found: `${combined.keys} repeated keys`, expected: 'one row per key, or a stated `aggregate:`',
+    hint: `state how to combine them with \`aggregate: sum\` (or mean, max, min, count)`,
+  })];
 }
 
 /** The table's rows grouped by the bars' key, once per render: planning and deriving both need them. */
@@ -100,20 +136,20 @@ export const readableBand = readableStep;
  * height open: the height outside the plot (measured with the composer's plot box) plus one band
  * per bar, and one band of slack for a note. Never lower than the brief's, never above MAX_GROWN_HEIGHT.
  */
-function grownFrame(input: PlanInput, key: Field, value: Field | undefined): { size?: { width: number; height: number }; decision?: Decision } {
+function grownFrame(input: PlanInput, key: Field, value: Field | undefined, notes: string[]): { size?: { width: number; height: number }; decision?: Decision } {
   const { brief } = input;
+  if (brief.sizeFixed.height) return {};
   const { labels, extent: [lo, hi] } = barsOf(input, key, value);
   const ctx: LayoutContext = { brief, style: input.style, measure: input.measure, id: idMaker(), ...(input.memo ? { memo: input.memo } : {}) };
   const band = Math.ceil(readableBand(ctx));
   const { plot } = plotFor({
     left: { kind: 'band', name: 'key', field: key.name, title: '', domain: labels },
     bottom: { kind: 'linear', name: 'value', field: value?.name ?? 'count', title: '', extent: [Math.min(0, lo), Math.max(0, hi)], format: value?.format, unit: value?.unit }, first: 'bottom',
-  }, [], ctx).box;
+  }, notes, ctx).box;
   const needed = Math.ceil(brief.size.height - plot.height + (labels.length + 1) * band);
   if (needed <= brief.size.height) return {};
   const height = Math.min(needed, MAX_GROWN_HEIGHT);
   const all = height === needed;
-  if (brief.sizeFixed.height) return {};
   return {
     size: { width: brief.size.width, height },
     decision: {
@@ -133,14 +169,19 @@ export function planBar(input: PlanInput): Outcome<Planned<BarPlan>> {
   const problems: Diagnostic[] = [];
   const decisions: Decision[] = [];
   const order = chooseOrder(input, key, problems, decisions);
+  const grouped = barGroups(input.table, refOf(key), value && refOf(value), input);
+  const combined = combinedOf(grouped);
+  problems.push(...checkCombining(input, key, value, combined));
   if (problems.some((p) => p.severity === 'error')) return failure(problems);
   const orientation = chooseOrientation(input, key, value);
   decisions.push(orientation.decision);
-  const grown = orientation.vertical || key.type === 'temporal' || key.type === 'quantitative' ? {} : grownFrame(input, key, value);
+  const notes = barNotes({ key: refOf(key), value: value && refOf(value), order, aggregate: brief.aggregate, noData: grouped.noValue, ...(combined ? { combined } : {}) }, undefined, '', String);
+  const grown = orientation.vertical || key.type === 'temporal' || key.type === 'quantitative' ? {} : grownFrame(input, key, value, notes);
   if (grown.decision) decisions.push(grown.decision);
-  if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });
+  if (combined && value) decisions.push({ decision: `rows with the same ${key.label.toLowerCase()} ${AGGREGATORS[brief.aggregate].verb}`, rule: brief.aggregateStated ? 'the brief asks for it (`aggregate:`)' : 'sum is the default for rows sharing a key; the note and the axis title say so' });
+  else if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });
   return success({
-    plan: { key: refOf(key), value: value && refOf(value), orientation: orientation.vertical ? 'vertical' : 'horizontal', order, aggregate: brief.aggregate },
+    plan: { key: refOf(key), value: value && refOf(value), orientation: orientation.vertical ? 'vertical' : 'horizontal', order, aggregate: brief.aggregate, aggregateStated: brief.aggregateStated, noData: grouped.noValue, ...(combined ? { combined } : {}) },
     decisions,
     ...(grown.size ? { size: grown.size } : {}),
   }, problems);

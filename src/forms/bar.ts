@@ -9,7 +9,7 @@ import { MAX_LABEL_SHARE } from '../layout/plot-box.js';
 import { asBand, asLinear, type BandScale, type LinearScale } from '../layout/scales.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
-import { barDescription, barValueTitle, foldNote, foldOf } from './bar-text.js';
+import { barDescription, barNotes, barValueTitle, foldOf } from './bar-text.js';
 import { barGroups, planBar, readableBand, type BarPlan } from './bar-plan.js';
 import type { FormDef } from './types.js';
 
@@ -54,7 +54,7 @@ function bandNeed(plan: BarPlan, ctx: LayoutContext): BandNeed {
 function capacityFor(plan: BarPlan, ctx: LayoutContext, px: number): CapacityFor {
   const valueTitle = barValueTitle(plan);
   return (fold, bars) => {
-    const notes = foldNote(plan, fold, valueTitle, valueFormatter([fold?.total ?? 0, ...(fold?.range ?? [])], plan.value));
+    const notes = barNotes(plan, fold, valueTitle, valueFormatter([fold?.total ?? 0, ...(fold?.range ?? [])], plan.value));
     const { plot } = plotFor(domainsOf({ query: plan, bars, valueName: plan.value?.name ?? 'count' }, plan.orientation === 'vertical'), notes, ctx).box;
     return Math.floor((plan.orientation === 'vertical' ? plot.width : plot.height) / px);
   };
@@ -157,7 +157,7 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
     return {
       title: `${valueTitle} by ${derived.query.key.label.toLowerCase()}`,
       description: barDescription(derived, valueTitle, fmt),
-      notes: foldNote(derived.query, foldOf(derived), valueTitle, valueFormatter([derived.foldedTotal ?? 0, ...(derived.foldedRange ?? [])], derived.query.value)),
+      notes: barNotes(derived.query, foldOf(derived), valueTitle, valueFormatter([derived.foldedTotal ?? 0, ...(derived.foldedRange ?? [])], derived.query.value)),
     };
   },
 };

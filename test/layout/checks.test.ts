@@ -35,7 +35,7 @@ describe('derived numbers beyond the range of doubles', () => {
   it('a sum that overflows is a coded error naming the key, never an Infinity bar', async () => {
     const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v', fields: { v: { unit: 'u' } } }, [{ k: 'a', v: 1.7e308 }, { k: 'a', v: 1.7e308 }, { k: 'b', v: 1 }]);
     expect(r.ok).toBe(false);
-    expect(r.diagnostics).toMatchObject([{ code: 'derive.aggregated' }, { code: 'derive.not-finite', field: 'k' }]);
+    expect(r.diagnostics).toMatchObject([{ code: 'choice.keys-repeat' }, { code: 'derive.not-finite', field: 'k' }]);
     expect(r.diagnostics[1]!.message).toContain('"a"');
   });
 
