@@ -38,6 +38,8 @@ export interface FieldHint {
   order?: (string | number)[];
   /** Human-readable name used in titles. Default: the column name made readable. */
   label?: string;
+  /** Whether the value's zero means "none" ('meaningful') or is an arbitrary point of its scale ('arbitrary', e.g. °C): a line's value axis leaves an arbitrary zero out. Default: 'meaningful'. */
+  zero?: 'meaningful' | 'arbitrary';
 }
 
 /** Where the table comes from. */
@@ -84,7 +86,7 @@ export interface ResolvedBrief {
   /** Output files, relative to the brief (or -o DIR). Default: [] (the brief's name with .svg). */
   output: string[];
   /** For intent change: the base of the index. Default: undefined. */
-  index: { base?: string | number } | undefined;
+  index: { base?: string | number; as?: 'index' | 'percent' } | undefined;
   /** For intent schedule: the columns of each task's start and end. Default: undefined. */
   start: string | undefined;
   end: string | undefined;

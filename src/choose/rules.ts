@@ -31,6 +31,13 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type),
     why: 'one ordered key and one value: bars in key order, because the order of the key carries meaning',
   },
+  {
+    id: 'trend.line',
+    intent: 'trend',
+    form: 'line',
+    applies: (f) => f.keys.length >= 1 && f.keys.length <= 2,
+    why: 'a value over an ordered key (and optionally a series key): a line joins neighbouring keys so the eye follows the change, its slope read as the rate (Cleveland 1993, banking to 45°)',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */

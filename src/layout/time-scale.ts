@@ -70,19 +70,24 @@ const STEPS: readonly TimeStep[] = [
   step('year', utcYear, 1, YEAR),
 ];
 
+/** The grains from finest to coarsest. */
+const GRAIN_ORDER: readonly TimeGrain[] = ['minute', 'hour', 'day', 'week', 'month', 'quarter', 'year'];
+
 /**
  * The calendar step whose length is nearest (by ratio) to span / approxTicks; beyond a year,
- * a nice number of years (1, 2, 5 × 10ⁿ).
+ * a nice number of years (1, 2, 5 × 10ⁿ). No step finer than `finest` (the data's own grain:
+ * monthly data gets no ticks between its months). Default: any step.
  */
-export function timeStep(start: number, stop: number, approxTicks: number): TimeStep {
+export function timeStep(start: number, stop: number, approxTicks: number, finest: TimeGrain = 'minute'): TimeStep {
   const target = Math.abs(stop - start) / Math.max(1, approxTicks);
   const last = STEPS[STEPS.length - 1]!;
   if (target > last.duration) {
     const years = Math.max(1, tickStep(start / YEAR, stop / YEAR, Math.max(1, approxTicks)));
     return step('year', utcYear, years, YEAR);
   }
-  let best = STEPS[0]!;
-  for (const s of STEPS) {
+  const allowed = STEPS.filter((s) => GRAIN_ORDER.indexOf(s.grain) >= GRAIN_ORDER.indexOf(finest));
+  let best = allowed[0]!;
+  for (const s of allowed) {
     if (Math.abs(Math.log(s.duration / target)) < Math.abs(Math.log(best.duration / target))) best = s;
   }
   return best;
@@ -114,15 +119,15 @@ export function timeLabels(ticks: readonly number[], grain: TimeGrain): string[]
  * Ticks are d3-time's own `interval.range`, so they never drift from the calendar; labels
  * are formatted in UTC at the ticks' grain ("2025", "Q1 2025", "Jan 2025" / "Feb", "4 Oct",
  * "06:00"). A domain given high-to-low maps high-to-low; ticks are always ascending. A
- * non-finite domain gets no ticks.
+ * non-finite domain gets no ticks. `finest` is the finest grain ticks may take (the data's own).
  */
-export function timeScale(domain: [number, number], range: [number, number], approxTicks: number): TimeScale {
+export function timeScale(domain: [number, number], range: [number, number], approxTicks: number, finest: TimeGrain = 'minute'): TimeScale {
   const [d0, d1] = domain;
   const [r0, r1] = range;
   const map = (t: number) => (d1 === d0 ? (r0 + r1) / 2 : r0 + ((t - d0) / (d1 - d0)) * (r1 - r0));
   const lo = Math.min(d0, d1);
   const hi = Math.max(d0, d1);
-  const chosen = timeStep(lo, hi, approxTicks);
+  const chosen = timeStep(lo, hi, approxTicks, finest);
   // interval.range stops before its end; + 1 ms lets a tick fall on the domain's last instant.
   const ticks = Number.isFinite(lo) && Number.isFinite(hi)
     ? chosen.interval.range(new Date(lo), new Date(hi + 1)).map((d) => d.getTime())
