@@ -13,6 +13,7 @@ export type Intent = (typeof INTENTS)[number];
 export const FORM_NAMES = [
   'bar', 'grouped-bar', 'stacked-bar', 'normalized-bar', 'line', 'index-line', 'slope', 'gantt',
   'scatter', 'histogram', 'strip', 'box', 'heatmap', 'scatter-matrix', 'parallel', 'stream', 'radial-bar', 'donut',
+  'change-bar',
 ] as const;
 export type FormName = (typeof FORM_NAMES)[number];
 
