@@ -1,10 +1,11 @@
 import type { Aggregate } from '../brief/types.js';
 import { describeRows, diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
-import { keyText } from '../fields/labels.js';
+import { formatDate, keyText } from '../fields/labels.js';
 import type { FieldRef } from '../fields/types.js';
 import { columnOf, type Column, type Table } from '../table/types.js';
 import { AGGREGATORS } from './aggregate.js';
 import { compareText } from './order.js';
+import { breakSkippedPeriods, type SkippedPeriods } from './skipped-periods.js';
 
 /** What the line derivation needs from the plan. */
 export interface LineQuery {
@@ -108,6 +109,16 @@ function combineKeys(b: Bucket, aggregate: Aggregate): { series: Omit<LineSeries
   return { series: out, combined };
 }
 
+/** The warning for whole periods a regular series skips, naming the first. */
+function skippedWarning(skipped: SkippedPeriods[], query: LineQuery, keyColumn: Column): Diagnostic {
+  const first = skipped[0]!;
+  const name = (t: number) => formatDate(t, keyColumn.grain ?? 'day');
+  const who = first.series === undefined ? '' : ` in ${JSON.stringify(first.series)}`;
+  return diagnostic('derive.uneven-dates', `the dates of \`${query.key.name}\` skip ${skipped.length === 1 ? 'a run of periods' : `${skipped.length} runs of periods`}, first${who} between ${name(first.after)} and ${name(first.before)}; the line leaves a gap there rather than join across values it does not have`, {
+    field: query.key.name, hint: 'add rows for the missing periods (NA where there is no value), or aggregate to a coarser period',
+  });
+}
+
 /** The warning for values that leave gaps, naming their rows and keys. */
 function gapWarning(rows: number[], table: Table, query: LineQuery, keyColumn: Column): Diagnostic {
   const positions = rows.map((r) => table.rowPositions[r]!);
@@ -148,11 +159,17 @@ export function deriveLines<Q extends LineQuery>(table: Table, query: Q): Outcom
   const problems = rowProblems(table, query, noKey, noValue, keyColumn);
   const entries = [...buckets].sort((a, b) => a[1].order - b[1].order || (a[1].order === Number.MAX_SAFE_INTEGER ? compareText(a[0], b[0]) : 0));
   let combined = 0;
+  const skipped: SkippedPeriods[] = [];
   const series: LineSeries[] = entries.map(([label, b]) => {
     const c = combineKeys(inKeyOrder(b), query.aggregate);
     combined += c.combined;
-    return { label: query.series ? label : undefined, ...c.series };
+    const line = { label: query.series ? label : undefined, ...c.series };
+    if (keyColumn.type !== 'date') return line;
+    const broken = breakSkippedPeriods(line, keyColumn.grain ?? 'day');
+    skipped.push(...broken.skipped);
+    return broken.series;
   });
+  if (skipped.length) problems.push(skippedWarning(skipped, query, keyColumn));
   if (!series.some((s) => s.ys.some((y) => !Number.isNaN(y)))) {
     problems.push(diagnostic('derive.no-rows', 'no row has both a key and a usable value, so there is nothing to draw', { file: table.origin.file, hint: 'check that the key and value columns are the ones you meant', expected: 'at least one complete row' }));
     return failure(problems);

@@ -31,7 +31,9 @@ export function periodChanges<Q extends LineQuery>(derived: DerivedLines<Q>, tab
     if (Number.isNaN(value)) continue;
     const row = table.rowPositions[s.rows[i - 1]!]!;
     if (Number.isNaN(previous)) {
-      problems.push(diagnostic('derive.index-base-missing', `the change at ${name(s.xs[i]!)} has no previous value: ${name(s.xs[i - 1]!)} (${table.positionNoun} ${row}) is missing`, { path: '/index/base', field, rows: [row], hint: 'fill in the value, or chart the values themselves with intent trend' }));
+      // A period the data skips has no row (rows -1); a missing value has its own.
+      const where = s.rows[i - 1]! < 0 ? 'the period before it is absent from the data' : `${name(s.xs[i - 1]!)} (${table.positionNoun} ${row}) is missing`;
+      problems.push(diagnostic('derive.index-base-missing', `the change at ${name(s.xs[i]!)} has no previous value: ${where}`, { path: '/index/base', field, ...(s.rows[i - 1]! < 0 ? {} : { rows: [row] }), hint: 'fill in the value, or chart the values themselves with intent trend' }));
     } else if (!(previous > 0)) {
       problems.push(diagnostic('derive.index-base-not-positive', `the change at ${name(s.xs[i]!)} would divide by ${previous}, the value at ${name(s.xs[i - 1]!)} (${table.positionNoun} ${row}); a change in % needs a previous value above zero`, { path: '/index/base', field, rows: [row], found: String(previous), expected: 'a value above zero', hint: 'chart the values themselves with intent trend' }));
     } else {

@@ -84,3 +84,19 @@ describe('line chart contracts', () => {
     expect(codes(await renderRows({ intent: 'trend', keys: 'month', values: 'riders', fields: { riders: { unit: 'riders' } } }, months(['2025-01'], { A: () => 1 })))).not.toContain('render.internal');
   });
 });
+
+describe('periods a regular series skips', () => {
+  it('leaves a gap where whole months have no rows, rather than joining across them, and warns', async () => {
+    const r = await renderRows({ intent: 'trend', keys: 'month', values: 'riders', fields: { riders: { unit: 'riders' } } }, months(['2025-01', '2025-02', '2025-03', '2025-06', '2025-07'], { A: (i) => 10 + i }));
+    expect(r.diagnostics.find((d) => d.code === 'derive.uneven-dates')).toMatchObject({ field: 'month' });
+    expect(r.diagnostics.find((d) => d.code === 'derive.uneven-dates')!.message).toMatch(/Mar 2025 and Jun 2025/);
+    const line = lines(dumpScene(r.scene!))[0]!;
+    expect(line.d!.match(/M/g)).toHaveLength(2);
+  });
+
+  it('joins irregular dates that follow no regular step', async () => {
+    const r = await renderRows({ intent: 'trend', keys: 'day', values: 'riders', fields: { riders: { unit: 'riders' } } }, ['2025-01-01', '2025-01-04', '2025-01-06', '2025-01-13', '2025-01-14'].map((day, i) => ({ day, riders: i })));
+    expect(r.diagnostics.map((d) => d.code)).not.toContain('derive.uneven-dates');
+    expect(lines(dumpScene(r.scene!))[0]!.d!.match(/M/g)).toHaveLength(1);
+  });
+});
