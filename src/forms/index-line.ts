@@ -7,7 +7,7 @@ import { asLinear } from '../layout/scales.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import { planIndex, type IndexPlan } from './index-plan.js';
 import { lineChart } from './line-chart.js';
-import { keyName } from './line-text.js';
+import { keyName, lastPresent } from './line-text.js';
 import type { FormDef } from './types.js';
 
 type Derived = DerivedIndex<IndexPlan>;
@@ -17,7 +17,17 @@ export function indexTitle(derived: Derived): string {
   return derived.as === 'index' ? `Index, ${derived.baseLabel} = 100` : `% change since ${derived.baseLabel}`;
 }
 
-/** The reference line at the base (100, or 0 %) across the plot, labelled with the base period just above it (below, near the top). */
+/** Whether most lines end above the reference: its label then goes below it, where the lines are not. */
+function mostEndAbove(derived: Derived): boolean {
+  let above = 0;
+  for (const s of derived.series) {
+    const last = lastPresent(s);
+    if (last !== undefined && s.ys[last]! > derived.reference) above++;
+  }
+  return above * 2 >= derived.series.length;
+}
+
+/** The reference line at the base (100, or 0 %) across the plot, labelled with the base period at its right end, on the side the lines' ends leave free. */
 function referenceLine(derived: Derived, area: PlotArea, ctx: LayoutContext) {
   const { style, measure } = ctx;
   const y = asLinear(area.y).map(derived.reference);
@@ -25,9 +35,9 @@ function referenceLine(derived: Derived, area: PlotArea, ctx: LayoutContext) {
   const line = { ...rule(ctx.id('reference', derived.baseLabel), 'reference', plot.x, y, plot.x + plot.width, y, style.lines.zero, style.lines.zeroWidth), datum: { base: derived.baseLabel } };
   const h = textBoxHeight(measure, style.text.note);
   const gap = style.spacing.labelGap;
-  const top = y - gap - h >= plot.y ? y - gap - h : y + gap;
+  const below = y + gap + h <= plot.y + plot.height && (mostEndAbove(derived) || y - gap - h < plot.y);
   const text = derived.as === 'index' ? `${derived.baseLabel} = 100` : `base: ${derived.baseLabel}`;
-  const label = textNode(measure, { id: ctx.id('label', `reference ${derived.baseLabel}`), role: 'label', text, style: style.text.note, x: plot.x + gap, top });
+  const label = textNode(measure, { id: ctx.id('label', `reference ${derived.baseLabel}`), role: 'label', text, style: style.text.note, x: plot.x + plot.width - gap, top: below ? y + gap : y - gap - h, anchor: 'end' });
   return { marks: [line], labels: [label] };
 }
 
