@@ -13,9 +13,9 @@ export const DOT_RADIUS = 2.5;
  */
 export const M4_COLUMNS_PER_PX = 4;
 /**
- * Points per M4 group above which a run of the line is decimated. M4 keeps at most four points
- * per group, so below four it could drop nothing in the average group; measured (bench/line.js),
- * at four or more points per group writing the kept points is cheaper than writing all of them.
+ * Points per M4 group above which a run of the line is decimated: M4 keeps at most four points
+ * per group, so a run with fewer on average could hardly be shortened. bench/line.js measures
+ * what it saves on a 1,000,000-point line (about 0.14 MB of SVG instead of about 14 MB).
  */
 export const M4_MIN_POINTS_PER_GROUP = 4;
 
