@@ -1,5 +1,5 @@
 import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
-import { keyText } from '../fields/labels.js';
+import { formatDate, keyText } from '../fields/labels.js';
 import type { Table } from '../table/types.js';
 import type { DerivedLines, LineQuery, LineSeries } from './lines.js';
 
@@ -21,15 +21,28 @@ export interface DerivedIndex<Q extends LineQuery = LineQuery> extends DerivedLi
   reference: number;
 }
 
+/**
+ * A base written as an ISO date ("2024", "2024-04", "2024-04-01", or a time with its zone) in
+ * UTC; anything else is NaN. Never Date.parse on free text, which reads it in local time.
+ */
+function isoTime(text: string): number {
+  const m = /^(\d{4})(?:-(\d{2}))?(?:-(\d{2}))?$/.exec(text);
+  if (m) return Date.parse(`${m[1]}-${m[2] ?? '01'}-${m[3] ?? '01'}T00:00Z`);
+  return /^\d{4}-\d{2}-\d{2}T[\d:.]+(Z|[+-]\d{2}:?\d{2})$/.test(text) ? Date.parse(text) : Number.NaN;
+}
+
 /** The key position the base names, if any key of the data is it: by the label a reader sees, the text in the data, or the date or number it means. */
 function findBase(derived: DerivedLines, base: IndexBase, name: (x: number) => string): number | undefined {
   if (base.kind === 'first') return derived.keyExtent[0];
   const wanted = String(base.value);
-  const asDate = derived.keyColumn.type === 'date' ? Date.parse(/^\d{4}$/.test(wanted) ? `${wanted}-01-01T00:00Z` : wanted) : Number.NaN;
+  const column = derived.keyColumn;
+  const asDate = column.type === 'date' ? isoTime(wanted) : Number.NaN;
   for (const s of derived.series) {
     for (let i = 0; i < s.xs.length; i++) {
       const x = s.xs[i]!;
-      if (name(x) === wanted || keyText(derived.keyColumn, s.rows[i]!) === wanted || x === asDate || (derived.keyColumn.type === 'number' && x === Number(wanted))) return x;
+      if (s.rows[i]! < 0) continue;
+      const dateName = column.type === 'date' ? formatDate(x, column.grain ?? 'day') : undefined;
+      if (name(x) === wanted || dateName === wanted || keyText(column, s.rows[i]!) === wanted || x === asDate || (column.type === 'number' && x === Number(wanted))) return x;
     }
   }
   return undefined;

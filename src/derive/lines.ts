@@ -42,6 +42,23 @@ export interface DerivedLines<Q extends LineQuery = LineQuery> {
   valueExtent: [number, number];
   /** Name of the value in data terms: the value column, or "count". */
   valueName: string;
+  /** Whether the key is monthly dates that all start quarters, three months apart somewhere: read as quarters ("Q1 2025"). */
+  quarterly: boolean;
+}
+
+/** Whether monthly keys are quarters: every key starts a quarter, and some two are three months apart. */
+function isQuarterly(series: readonly LineSeries[], keyColumn: Column): boolean {
+  if (keyColumn.type !== 'date' || keyColumn.grain !== 'month') return false;
+  let apart = false;
+  for (const s of series) {
+    for (let i = 0; i < s.xs.length; i++) {
+      if (Number.isNaN(s.ys[i]!) && s.rows[i]! < 0) continue;
+      const d = new Date(s.xs[i]!);
+      if (d.getUTCMonth() % 3 !== 0) return false;
+      if (i > 0 && s.rows[i - 1]! >= 0 && s.xs[i]! - s.xs[i - 1]! < 100 * 86_400_000) apart = true;
+    }
+  }
+  return apart;
 }
 
 interface Bucket { xs: number[]; ys: number[]; rows: number[]; order: number }
@@ -184,5 +201,5 @@ export function deriveLines<Q extends LineQuery>(table: Table, query: Q): Outcom
     problems.push(diagnostic('derive.not-finite', `a combined \`${query.value?.name ?? 'count'}\`${overflow.label === undefined ? '' : ` of ${JSON.stringify(overflow.label)}`} is beyond the range of numbers`, { field: query.key.name, expected: 'a finite number', hint: 'rescale the values (e.g. to thousands or millions) before charting' }));
     return failure(problems);
   }
-  return success({ query, series, keyColumn, keyExtent: extentOf(series, (s) => s.xs), valueExtent: extentOf(series, (s) => s.ys), valueName: query.value?.name ?? 'count' }, problems);
+  return success({ query, series, keyColumn, keyExtent: extentOf(series, (s) => s.xs), valueExtent: extentOf(series, (s) => s.ys), valueName: query.value?.name ?? 'count', quarterly: isQuarterly(series, keyColumn) }, problems);
 }

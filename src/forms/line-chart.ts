@@ -38,7 +38,10 @@ export function seriesColours(derived: DerivedLines, ctx: LayoutContext): string
 function keyChannel(derived: DerivedLines): Channel {
   const { key } = derived.query;
   const base = { name: 'key', field: key.name, title: key.label };
-  if (derived.keyColumn.type === 'date') return { ...base, kind: 'time', extent: derived.keyExtent, ...(derived.keyColumn.grain ? { grain: derived.keyColumn.grain } : {}) };
+  if (derived.keyColumn.type === 'date') {
+    const grain = derived.quarterly ? 'quarter' : derived.keyColumn.grain;
+    return { ...base, kind: 'time', extent: derived.keyExtent, ...(grain ? { grain } : {}) };
+  }
   if (derived.keyColumn.type === 'number') return { ...base, kind: 'linear', extent: derived.keyExtent, format: key.format };
   return { ...base, kind: 'band', domain: key.levels };
 }

@@ -14,6 +14,7 @@ export function lineValueTitle(query: LineQuery): string {
 export function keyName(derived: DerivedLines, x: number): string {
   const { key } = derived.query;
   const column = derived.keyColumn;
+  if (derived.quarterly) return `Q${Math.floor(new Date(x).getUTCMonth() / 3) + 1} ${new Date(x).getUTCFullYear()}`;
   if (column.type === 'date') return formatDate(x, column.grain ?? 'day');
   if (key.type === 'ordinal' || key.type === 'cyclic' || key.type === 'categorical') return key.levels[x] ?? String(x);
   return String(x);

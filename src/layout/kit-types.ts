@@ -61,7 +61,7 @@ export interface TimeChannel {
   title: string;
   extent: [number, number];
   /** The finest calendar grain its ticks may take: the data's own (no ticks between monthly points). Default: any. */
-  grain?: 'year' | 'month' | 'day' | 'minute' | 'second';
+  grain?: 'year' | 'quarter' | 'month' | 'day' | 'minute' | 'second';
 }
 
 /** What a channel of a form spans. */

@@ -13,7 +13,7 @@ const brief = { intent: 'change', keys: ['quarter', 'port'], values: 'tonnes', f
 describe('index line contracts', () => {
   for (const as of ['index', 'percent'] as const) {
     it(`every series passes through exactly ${as === 'index' ? '100' : '0 %'} at the base, on the reference line (as: ${as})`, async () => {
-      const r = await renderRows({ ...brief, index: { base: 'Apr 2024', as } }, rows);
+      const r = await renderRows({ ...brief, index: { base: 'Q2 2024', as } }, rows);
       expect(r.ok, JSON.stringify(r.diagnostics)).toBe(true);
       const dump = dumpScene(r.scene!);
       const reference = dump.marks.find((m) => m.role === 'reference')!;
@@ -23,8 +23,10 @@ describe('index line contracts', () => {
         expect(at.datum![as === 'index' ? 'index' : 'change_percent']).toBe(as === 'index' ? 100 : 0);
         expect(Math.abs(at.y - refY)).toBeLessThanOrEqual(0.01);
       }
-      expect(dump.axes.find((a) => a.orient === 'left')!.title).toBe(as === 'index' ? 'Index, Apr 2024 = 100' : '% change since Apr 2024');
-      expect(dump.texts.some((t) => t.role === 'label' && t.text.includes('Apr 2024'))).toBe(true);
+      expect(dump.axes.find((a) => a.orient === 'left')!.title).toBe(as === 'index' ? 'Index, Q2 2024 = 100' : '% change since Q2 2024');
+      expect(dump.texts.some((t) => t.role === 'label' && t.text.includes('Q2 2024'))).toBe(true);
+      // Quarterly keys are read, and ticked, as quarters.
+      expect(dump.texts.filter((t) => t.role === 'tick' && /\d{4}/.test(t.text)).map((t) => t.text)).toEqual(['Q1 2024', 'Q2 2024', 'Q3 2024', 'Q4 2024', 'Q1 2025']);
       checkLineContracts(dump);
     });
   }
@@ -40,5 +42,16 @@ describe('index line contracts', () => {
     expect(b!.last.datum!.index).toBeCloseTo(180, 9);
     expect(a!.last.datum!.tonnes).toBe(4800);
     expect(r.rationale.some((d) => /leave zero out/.test(d.decision))).toBe(true);
+  });
+
+  it('finds the base by its quarter, its month, or its ISO date alike, and reads free text in no time zone', async () => {
+    const titles = await Promise.all(['Q2 2024', 'Apr 2024', '2024-04', '2024-04-01'].map(async (base) => {
+      const r = await renderRows({ ...brief, index: { base } }, rows);
+      return dumpScene(r.scene!).axes.find((a) => a.orient === 'left')!.title;
+    }));
+    expect(titles).toEqual(Array(4).fill('Index, Q2 2024 = 100'));
+    // "April 1, 2024" is no key as written, and is not guessed at through the local time zone.
+    const free = await renderRows({ ...brief, index: { base: 'April 1, 2024' } }, rows);
+    expect(free.diagnostics).toMatchObject([{ code: 'derive.index-base-missing', path: '/index/base' }]);
   });
 });
