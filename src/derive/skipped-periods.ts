@@ -17,11 +17,23 @@ function regularStep(steps: readonly number[]): number | undefined {
   return step > 0 && count * 2 >= steps.length ? step : undefined;
 }
 
+const DAY = 86_400_000;
+
+/** Whether every day strictly between two days is a Saturday or a Sunday (UTC): business-day data skips weekends by design. */
+function onlyWeekend(from: number, to: number): boolean {
+  for (let t = from + DAY; t < to; t += DAY) {
+    const wd = new Date(t).getUTCDay();
+    if (wd !== 0 && wd !== 6) return false;
+  }
+  return true;
+}
+
 /**
  * A regular series (monthly, daily, yearly: at least half its steps equal) that skips whole
  * periods has no rows for them: they are missing, and the line must not join across them as if
  * it knew their values. Each skipped run becomes a gap (a NaN point one step after the last key
- * present), and is reported. Irregular series (survey dates, times of day) are left as they are.
+ * present), and is reported. Irregular series (survey dates, times of day) are left as they are,
+ * and so are the weekends of a daily series of business days.
  */
 export function breakSkippedPeriods(s: LineSeries, grain: DateGrain): { series: LineSeries; skipped: SkippedPeriods[] } {
   if (grain !== 'year' && grain !== 'month' && grain !== 'day') return { series: s, skipped: [] };
@@ -37,6 +49,7 @@ export function breakSkippedPeriods(s: LineSeries, grain: DateGrain): { series: 
     out.rows.push(s.rows[i]!);
     const d = steps[i];
     if (d === undefined || d <= step || d % step !== 0) continue;
+    if (grain === 'day' && step === 1 && onlyWeekend(s.xs[i]!, s.xs[i + 1]!)) continue;
     // The gap stands between the two keys present; its key is never drawn.
     out.xs.push((s.xs[i]! + s.xs[i + 1]!) / 2);
     out.ys.push(Number.NaN);

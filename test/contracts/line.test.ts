@@ -99,4 +99,12 @@ describe('periods a regular series skips', () => {
     expect(r.diagnostics.map((d) => d.code)).not.toContain('derive.uneven-dates');
     expect(lines(dumpScene(r.scene!))[0]!.d!.match(/M/g)).toHaveLength(1);
   });
+
+  it('joins a series of business days across its weekends, and breaks it where a weekday is missing', async () => {
+    // Mon 6 Jan to Fri 17 Jan 2025, without Wednesday 15 January.
+    const days = ['06', '07', '08', '09', '10', '13', '14', '16', '17'].map((d) => `2025-01-${d}`);
+    const r = await renderRows({ intent: 'trend', keys: 'day', values: 'riders', fields: { riders: { unit: 'riders' } } }, days.map((day, i) => ({ day, riders: i })));
+    expect(r.diagnostics.find((d) => d.code === 'derive.uneven-dates')!.message).toMatch(/14 Jan 2025 and 16 Jan 2025/);
+    expect(lines(dumpScene(r.scene!))[0]!.d!.match(/M/g)).toHaveLength(2);
+  });
 });
