@@ -34,6 +34,8 @@ const cold = coldRuns({
   jsdomCold: ['bench/cold-jsdom.js'],
 }, 15);
 const memory = node(['bench/memory-loop.js', '500']);
+const line = node(['bench/line.js']);
+const mb = (bytes) => `${(bytes / 1e6).toFixed(2)} MB`;
 
 const f = (ms) => (ms < 1 ? ms.toFixed(2) : ms < 10 ? ms.toFixed(1) : ms.toFixed(0));
 const x = (a, b) => `${(a / b).toFixed(2)}×`;
@@ -52,6 +54,8 @@ const table = [
   `| … text as glyph outlines only (resvg's encoder) | ${f(png.outlinesOnly)} ms | | ${x(png.outlinesOnly, png.plain)} of plain |`,
   `| … zlib encoder only (live text, font files) | ${f(png.encoderOnly)} ms | | ${x(png.encoderOnly, png.plain)} of plain |`,
   `| peak RSS over ${memory.renders} brief → PNG renders (scale 2) | ${memory.peakRssMiB.toFixed(0)} MiB | target ≤ 300 MiB | ${f(memory.msPerPng)} ms each |`,
+  `| 1,000,000-point line from rows in memory to SVG, M4 (CPU time) | ${f(line.svgMs)} ms, ${mb(line.svgBytes)} | every point through a string template: ${f(line.plainSvgMs)} ms, ${mb(line.plainSvgBytes)} | ${x(line.svgMs, line.plainSvgMs)} its time, ${x(line.svgBytes, line.plainSvgBytes)} its bytes |`,
+  `| … to PNG at scale 2 (CPU time) | ${f(line.pngMs)} ms | resvg on the every-point SVG: ${f(line.plainPngMs)} ms | ${x(line.pngMs, line.plainPngMs)} of it |`,
 ].join('\n');
 writeFileSync(join(root, 'bench', 'results.md'), `${table}\n`);
 console.log(table);

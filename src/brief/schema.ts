@@ -35,6 +35,7 @@ const fieldHint: SchemaNode = {
     order: { type: 'array', items: { anyOf: [{ type: 'string' }, { type: 'number' }] }, description: 'Level order for ordinal or cyclic fields.' },
     label: { type: 'string', description: 'Readable name used in axis titles.' },
     additive: { type: 'boolean', description: 'Whether values of this column may be added up (false for rates, shares, temperatures, pH). Default: false for the units %, ‰, °C, °F, K, pH and dB, true otherwise.' },
+    zero: { type: 'string', enum: ['meaningful', 'arbitrary'], description: 'Whether zero means none or is an arbitrary point (e.g. °C); a line leaves an arbitrary zero out of its axis.' },
   },
 };
 
@@ -87,7 +88,10 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
         type: 'object',
         additionalProperties: false,
         description: 'For intent change: the base of the index.',
-        properties: { base: { anyOf: [{ type: 'string' }, { type: 'number' }] } },
+        properties: {
+          base: { anyOf: [{ type: 'string' }, { type: 'number' }], description: '"first", "previous" (period-over-period bars), or a key value.' },
+          as: { type: 'string', enum: ['index', 'percent'], description: 'Shown as base = 100 (index) or as % change since the base. Default: index.' },
+        },
       },
       start: { type: 'string', minLength: 1, description: 'For intent schedule: the start column.' },
       end: { type: 'string', minLength: 1, description: 'For intent schedule: the end column.' },

@@ -13,6 +13,7 @@ export type Intent = (typeof INTENTS)[number];
 export const FORM_NAMES = [
   'bar', 'grouped-bar', 'stacked-bar', 'normalized-bar', 'line', 'index-line', 'slope', 'gantt',
   'scatter', 'histogram', 'strip', 'box', 'heatmap', 'scatter-matrix', 'parallel', 'stream', 'radial-bar', 'donut',
+  'change-bar',
 ] as const;
 export type FormName = (typeof FORM_NAMES)[number];
 
@@ -49,6 +50,8 @@ export interface FieldHint {
   label?: string;
   /** Whether values may be added up; a sum of a non-additive value is refused. Default: false for the units %, ‰, °C, °F, K, pH and dB, true otherwise. */
   additive?: boolean;
+  /** Whether the value's zero means "none" ('meaningful') or is an arbitrary point of its scale ('arbitrary', e.g. °C): a line's value axis leaves an arbitrary zero out. Default: 'meaningful'. */
+  zero?: 'meaningful' | 'arbitrary';
 }
 
 /** Where the table comes from. */
@@ -101,7 +104,7 @@ export interface ResolvedBrief {
   /** Output files, relative to the brief (or -o DIR). Default: [] (the brief's name with .svg). */
   output: string[];
   /** For intent change: the base of the index. Default: undefined. */
-  index: { base?: string | number } | undefined;
+  index: { base?: string | number; as?: 'index' | 'percent' } | undefined;
   /** For intent schedule: the columns of each task's start and end. Default: undefined. */
   start: string | undefined;
   end: string | undefined;

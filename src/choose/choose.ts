@@ -32,7 +32,7 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext,
   if (hasErrors(early.problems)) return failure(early.problems);
   const problems: Diagnostic[] = [...early.problems.filter((p) => p.code !== 'choice.lenient-fallback'), ...(SHAPE_CHECKS[brief.intent]?.(fields, brief) ?? [])];
   if (hasErrors(problems)) return failure(problems);
-  const rule = matchRule(brief.intent, fields, brief.form);
+  const rule = matchRule(brief.intent, fields, brief.form, brief);
   const form = ctx.forms.find((f) => f.name === (brief.form ?? rule?.form));
   if (!form) {
     return failure([...problems, diagnostic('choice.no-rule', `no form is drawn for intent ${brief.intent} with this data`, {

@@ -1,4 +1,4 @@
-import type { FormName, Intent } from '../brief/types.js';
+import type { FormName, Intent, ResolvedBrief } from '../brief/types.js';
 import type { Fields } from '../fields/types.js';
 import { isOrdered } from '../fields/types.js';
 
@@ -8,6 +8,8 @@ export interface Rule {
   intent: Intent;
   form: FormName;
   applies(fields: Fields): boolean;
+  /** What the rule asks of the brief beyond intent and data shape, if anything. Default: nothing. */
+  when?(brief: ResolvedBrief): boolean;
   /** The reason, as a reader would accept it. */
   why: string;
 }
@@ -31,11 +33,33 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type),
     why: 'one ordered key and one value: bars in key order, because the order of the key carries meaning',
   },
+  {
+    id: 'trend.line',
+    intent: 'trend',
+    form: 'line',
+    applies: (f) => f.keys.length >= 1 && f.keys.length <= 2,
+    why: 'a value over an ordered key (and optionally a series key): a line joins neighbouring keys so the eye follows the change, its slope read as the rate (Cleveland 1993, banking to 45°)',
+  },
+  {
+    id: 'change.period-over-period',
+    intent: 'change',
+    form: 'change-bar',
+    applies: (f) => f.keys.length >= 1 && f.keys.length <= 2,
+    when: (b) => b.index?.base === 'previous',
+    why: 'change from each period to the next (`index.base: previous`): bars around zero, because each change is a length from no change',
+  },
+  {
+    id: 'change.index-line',
+    intent: 'change',
+    form: 'index-line',
+    applies: (f) => f.keys.length >= 1 && f.keys.length <= 2,
+    why: 'change over an ordered key: each line divided by its value at a common base, so series of different sizes show their growth on one scale',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */
-export function matchRule(intent: Intent, fields: Fields, pinned?: FormName): Rule | undefined {
-  return RULES.find((r) => r.intent === intent && (pinned === undefined || r.form === pinned) && r.applies(fields));
+export function matchRule(intent: Intent, fields: Fields, pinned?: FormName, brief?: ResolvedBrief): Rule | undefined {
+  return RULES.find((r) => r.intent === intent && (pinned === undefined || r.form === pinned) && r.applies(fields) && (!r.when || (brief !== undefined && r.when(brief))));
 }
 
 /** The intents the rule table answers, in table order. */

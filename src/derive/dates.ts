@@ -3,7 +3,7 @@ import type { DateGrain } from '../table/types.js';
 const DAY = 86_400_000;
 
 /** A time as a count of its grain's units: months for month data, days for day data, else ms. */
-function units(time: number, grain: DateGrain): number {
+export function units(time: number, grain: DateGrain): number {
   const d = new Date(time);
   if (grain === 'year') return d.getUTCFullYear();
   if (grain === 'month') return d.getUTCFullYear() * 12 + d.getUTCMonth();

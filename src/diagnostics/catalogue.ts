@@ -62,6 +62,8 @@ export const CATALOGUE = {
   'choice.line-on-categorical': 'error',
   'choice.radial-not-cyclic': 'error',
   'choice.too-many-colours': 'error',
+  'choice.too-many-series': 'warning',
+  'choice.period-change-one-series': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -70,6 +72,8 @@ export const CATALOGUE = {
   'derive.too-many-ordered-bars': 'error',
   'derive.uneven-dates': 'warning',
   'derive.not-finite': 'error',
+  'derive.index-base-missing': 'error',
+  'derive.index-base-not-positive': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',

@@ -12,7 +12,7 @@ import { placeLabels } from './place-labels.js';
 import { memoized, ticksFor, type CartesianDomains, type FormMarks, type FormWords, type LabelRoom, type LayoutContext, type LinearChannel, type PlotArea, type ScaleProbe, type TimeChannel } from './kit-types.js';
 import { plotBox, tickCount, type PlotBox } from './plot-box.js';
 import { bandScale, linearScale, type BandScale, type LinearScale, type Scale } from './scales.js';
-import { timeScale, type TimeScale } from './time-scale.js';
+import { timeScale, type TimeGrain, type TimeScale } from './time-scale.js';
 
 /** What the composer needs of a form drawn on a left and a bottom axis. */
 export interface CartesianForm<D> {
@@ -57,9 +57,15 @@ function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], 
 
 /** A bottom time axis, inset like a linear one so its end labels stay inside the plot's width. */
 function bottomTime(channel: TimeChannel, plot: Box, ctx: LayoutContext): TimeScale {
-  const probe = timeScale(channel.extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'));
+  const finest = finestTick(channel);
+  const probe = timeScale(channel.extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'), finest);
   const [rangeLeft, rangeRight] = bottomRange(plot, probe.labels, NO_ROOM, ctx);
-  return timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'));
+  return timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'), finest);
+}
+
+/** The finest tick grain for a time channel's data grain (seconds are ticked no finer than minutes). */
+function finestTick(channel: TimeChannel): TimeGrain {
+  return channel.grain === undefined || channel.grain === 'second' ? 'minute' : channel.grain;
 }
 
 interface FittedScales { x: Scale; y: Scale; room: LabelRoom }

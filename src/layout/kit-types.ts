@@ -63,6 +63,8 @@ export interface TimeChannel {
   field: string;
   title: string;
   extent: [number, number];
+  /** The finest calendar grain its ticks may take: the data's own (no ticks between monthly points). Default: any. */
+  grain?: 'year' | 'quarter' | 'month' | 'day' | 'minute' | 'second';
 }
 
 /** What a channel of a form spans. */

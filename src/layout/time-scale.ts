@@ -70,19 +70,24 @@ const STEPS: readonly TimeStep[] = [
   step('year', utcYear, 1, YEAR),
 ];
 
+/** The grains from finest to coarsest. */
+const GRAIN_ORDER: readonly TimeGrain[] = ['minute', 'hour', 'day', 'week', 'month', 'quarter', 'year'];
+
 /**
  * The calendar step whose length is nearest (by ratio) to span / approxTicks; beyond a year,
- * a nice number of years (1, 2, 5 × 10ⁿ).
+ * a nice number of years (1, 2, 5 × 10ⁿ). No step finer than `finest` (the data's own grain:
+ * monthly data gets no ticks between its months). Default: any step.
  */
-export function timeStep(start: number, stop: number, approxTicks: number): TimeStep {
+export function timeStep(start: number, stop: number, approxTicks: number, finest: TimeGrain = 'minute'): TimeStep {
   const target = Math.abs(stop - start) / Math.max(1, approxTicks);
   const last = STEPS[STEPS.length - 1]!;
   if (target > last.duration) {
     const years = Math.max(1, tickStep(start / YEAR, stop / YEAR, Math.max(1, approxTicks)));
     return step('year', utcYear, years, YEAR);
   }
-  let best = STEPS[0]!;
-  for (const s of STEPS) {
+  const allowed = STEPS.filter((s) => GRAIN_ORDER.indexOf(s.grain) >= GRAIN_ORDER.indexOf(finest));
+  let best = allowed[0]!;
+  for (const s of allowed) {
     if (Math.abs(Math.log(s.duration / target)) < Math.abs(Math.log(best.duration / target))) best = s;
   }
   return best;
@@ -108,21 +113,36 @@ export function timeLabels(ticks: readonly number[], grain: TimeGrain): string[]
   });
 }
 
+/** A UTC time in months since year 0: whole months at each month's start, the fraction of its month between. */
+export function monthUnits(t: number): number {
+  const d = new Date(t);
+  const [y, m] = [d.getUTCFullYear(), d.getUTCMonth()];
+  // setUTCFullYear, not Date.UTC, which reads years 0–99 as 1900–1999.
+  const start = new Date(0).setUTCFullYear(y, m, 1);
+  const next = new Date(0).setUTCFullYear(y, m + 1, 1);
+  return y * 12 + m + (t - start) / (next - start);
+}
+
 /**
  * A UTC time scale from `domain` (epoch ms) onto `range` (px), with about `approxTicks`
  * ticks on calendar boundaries: minutes, hours, days, ISO weeks, months, quarters or years.
  * Ticks are d3-time's own `interval.range`, so they never drift from the calendar; labels
  * are formatted in UTC at the ticks' grain ("2025", "Q1 2025", "Jan 2025" / "Feb", "4 Oct",
  * "06:00"). A domain given high-to-low maps high-to-low; ticks are always ascending. A
- * non-finite domain gets no ticks.
+ * non-finite domain gets no ticks. `finest` is the finest grain ticks may take (the data's own);
+ * at month grain or coarser, positions are in calendar months (each month the same width).
  */
-export function timeScale(domain: [number, number], range: [number, number], approxTicks: number): TimeScale {
-  const [d0, d1] = domain;
+export function timeScale(domain: [number, number], range: [number, number], approxTicks: number, finest: TimeGrain = 'minute'): TimeScale {
   const [r0, r1] = range;
-  const map = (t: number) => (d1 === d0 ? (r0 + r1) / 2 : r0 + ((t - d0) / (d1 - d0)) * (r1 - r0));
+  // Data given by month, quarter or year is placed in calendar months, each the same width, so
+  // three months are three times one month whatever their days (February is not 10% shorter).
+  const unit = GRAIN_ORDER.indexOf(finest) >= GRAIN_ORDER.indexOf('month') ? monthUnits : (t: number) => t;
+  const [d0, d1] = domain;
+  const [u0, u1] = [unit(d0), unit(d1)];
+  const map = (t: number) => (u1 === u0 ? (r0 + r1) / 2 : r0 + ((unit(t) - u0) / (u1 - u0)) * (r1 - r0));
   const lo = Math.min(d0, d1);
   const hi = Math.max(d0, d1);
-  const chosen = timeStep(lo, hi, approxTicks);
+  const chosen = timeStep(lo, hi, approxTicks, finest);
   // interval.range stops before its end; + 1 ms lets a tick fall on the domain's last instant.
   const ticks = Number.isFinite(lo) && Number.isFinite(hi)
     ? chosen.interval.range(new Date(lo), new Date(hi + 1)).map((d) => d.getTime())

@@ -27,6 +27,8 @@ export interface Paint {
   dash?: number[];
   /** 0–1; 1 when absent. */
   opacity?: number;
+  /** Round joins and caps for a stroke (data lines), so a sharp turn never grows a miter spike. Default: SVG's miter joins and butt caps. */
+  round?: boolean;
 }
 
 interface NodeBase {

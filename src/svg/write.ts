@@ -23,6 +23,7 @@ function paintAttributes(p: Paint): string {
   let out = '';
   if (p.stroke) out += ` stroke="${p.stroke}" stroke-width="${fmt(p.strokeWidth ?? 1)}"`;
   if (p.stroke && p.dash?.length) out += ` stroke-dasharray="${p.dash.map(fmt).join(' ')}"`;
+  if (p.stroke && p.round) out += ' stroke-linejoin="round" stroke-linecap="round"';
   if (p.opacity !== undefined && p.opacity < 1) out += ` opacity="${fmt(p.opacity)}"`;
   return out;
 }
