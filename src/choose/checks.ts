@@ -54,6 +54,7 @@ export const INTENT_OPTIONS = {
   color: ['correlation'],
   shape: ['correlation'],
   area: ['correlation'],
+  after: ['schedule'],
 } as const satisfies Partial<Record<keyof ResolvedBrief, readonly Intent[]>>;
 
 /** An intent-specific option given to an intent that does not use it is refused, not silently dropped. */

@@ -67,6 +67,13 @@ export const CATALOGUE = {
   'derive.too-many-ordered-bars': 'error',
   'derive.uneven-dates': 'warning',
   'derive.not-finite': 'error',
+  // slope charts (intent shift) and Gantt charts (intent schedule)
+  'derive.slope-incomplete': 'warning',
+  'derive.slope-width-negative': 'error',
+  'derive.task-end-before-start': 'error',
+  'derive.task-duplicate': 'error',
+  'derive.predecessor-unknown': 'error',
+  'derive.predecessor-overlap': 'warning',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',
