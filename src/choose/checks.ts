@@ -3,6 +3,8 @@ import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
 import { applyHardRules } from './hard-rules.js';
 import { formsForIntent } from './rules.js';
+import { checkScheduleShape } from './schedule-checks.js';
+import { checkShiftShape } from './shift-checks.js';
 import type { Candidate } from './types.js';
 
 function columnsOfType(fields: Fields, types: string[]): string[] {
@@ -44,6 +46,8 @@ export function checkCompareShape(fields: Fields, brief: ResolvedBrief): Diagnos
 /** The data-shape check of each intent that has rules. */
 export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: ResolvedBrief) => Diagnostic[]>> = {
   compare: checkCompareShape,
+  shift: checkShiftShape,
+  schedule: checkScheduleShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */

@@ -68,6 +68,13 @@ export const CATALOGUE = {
   'derive.uneven-dates': 'warning',
   'derive.not-finite': 'error',
   // slope charts (intent shift) and Gantt charts (intent schedule)
+  'choice.slope-shape': 'error',
+  'choice.slope-periods': 'error',
+  'choice.slope-units-differ': 'error',
+  'choice.slope-many-items': 'warning',
+  'choice.schedule-no-times': 'error',
+  'choice.schedule-times-not-time': 'error',
+  'choice.gantt-many-tasks': 'warning',
   'derive.slope-incomplete': 'warning',
   'derive.slope-width-negative': 'error',
   'derive.task-end-before-start': 'error',
