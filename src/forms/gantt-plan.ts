@@ -50,8 +50,14 @@ function countTasks(task: Field, decisions: Decision[], problems: Diagnostic[]):
 export function planGantt(input: PlanInput): Outcome<Planned<GanttPlan>> {
   const { fields, brief } = input;
   const byName = (n: string | undefined) => (n === undefined ? undefined : fields.all.find((f) => f.name === n));
-  const [task, group] = fields.keys as [Field, Field | undefined];
-  const [start, end, after] = [byName(brief.start)!, byName(brief.end)!, byName(brief.after)];
+  const [task, group] = fields.keys as [Field | undefined, Field | undefined];
+  const [start, end, after] = [byName(brief.start), byName(brief.end), byName(brief.after)];
+  // A Gantt chart pinned (`form: gantt`) under another intent skips the schedule intent's shape check.
+  if (!task || !start || !end) {
+    return failure([diagnostic('choice.schedule-no-times', 'a Gantt chart needs a task key and the columns of each task\'s start and end', {
+      path: start ? '/end' : '/start', expected: 'keys, start: and end:', hint: 'use `intent: schedule` with `keys: <task>`, `start: <column>` and `end: <column>`',
+    })]);
+  }
   const problems: Diagnostic[] = [];
   const decisions: Decision[] = [
     { decision: `one bar per task from \`${start.name}\` to \`${end.name}\``, rule: 'a Gantt chart: bars on one time axis show when each task runs, their length is its duration, and tasks running at once show as bars side by side in time' },

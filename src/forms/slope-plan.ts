@@ -1,5 +1,5 @@
 import type { Decision } from '../choose/types.js';
-import { diagnostic, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import type { SlopeQuery } from '../derive/slopes.js';
 import { isOrdered, refOf, type Field } from '../fields/types.js';
 import type { Planned, PlanInput } from './types.js';
@@ -44,8 +44,24 @@ function manyItems(n: number, decisions: Decision[], problems: Diagnostic[]): vo
   }));
 }
 
+/**
+ * A slope chart pinned (`form: slope`) under another intent skips the shift intent's shape check:
+ * its plan refuses a shape it cannot draw rather than fail while drawing.
+ */
+function unfit(input: PlanInput): Diagnostic | undefined {
+  const { keys, values } = input.fields;
+  const fits = keys.length === 2 ? values.length >= 1 && values.length <= 2 : keys.length === 1 && values.length >= 2 && values.length <= 3;
+  if (fits) return undefined;
+  return diagnostic('choice.slope-shape', `a slope chart needs items measured at two points, but the brief gives ${keys.length} key(s) and ${values.length} value(s)`, {
+    path: '/values', found: `${keys.length} key(s), ${values.length} value(s)`, expected: 'keys: [item, period] with one value, or keys: item with values: [before, after]',
+    hint: 'use `intent: shift` with `keys: [item, period]`, or `values: [before, after]`',
+  });
+}
+
 /** The slope chart's plan: where the two ends come from, the shared scale's baseline, colour, labels and width, each with its rule. */
 export function planSlope(input: PlanInput): Outcome<Planned<SlopePlan>> {
+  const refused = unfit(input);
+  if (refused) return failure([refused]);
   const { fields, brief } = input;
   const [item, period] = fields.keys as [Field, Field | undefined];
   const values = fields.values;

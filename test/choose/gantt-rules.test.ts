@@ -75,4 +75,10 @@ describe('rules for the schedule intent', () => {
     expect(codes(r)).toContain('choice.gantt-many-tasks');
     expect(r.rationale.find((d) => d.decision === '101 tasks drawn as 101 rows')!.rule).toMatch(/one brief per group/);
   });
+
+  it('a Gantt chart pinned under another intent (no start or end) is refused with a coded error, never a crash', async () => {
+    const r = await renderRows({ intent: 'compare', form: 'gantt', keys: 'task', values: 'x' }, rows.map((x) => ({ ...x, x: 1 })));
+    expect(codes(r)).not.toContain('render.internal');
+    expect(problem(r, 'choice.schedule-no-times')).toMatchObject({ path: '/start' });
+  });
 });

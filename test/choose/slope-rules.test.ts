@@ -72,4 +72,10 @@ describe('rules for the shift intent', () => {
     expect(w.ok).toBe(false);
     expect(problem(w, 'derive.slope-width-negative')).toMatchObject({ rows: [3] });
   });
+
+  it('a slope chart pinned under another intent with one value is refused with a coded error, never a crash', async () => {
+    const r = await renderRows({ intent: 'compare', form: 'slope', keys: 'hut', values: 'nights' }, rows);
+    expect(codes(r)).not.toContain('render.internal');
+    expect(problem(r, 'choice.slope-shape')).toMatchObject({ path: '/values' });
+  });
 });
