@@ -138,5 +138,8 @@ export function deriveTasks(table: Table, query: TaskQuery): Outcome<DerivedTask
     }));
   }
   if (problems.some((p) => p.severity === 'error')) return failure(problems);
-  return success({ tasks: sortTasks(read, query.order), dependencies }, problems);
+  const tasks = sortTasks(read, query.order);
+  // Connectors in the order of their successors, so the same schedule draws the same in any row order.
+  const rank = new Map(tasks.map((t, i) => [t.label, i]));
+  return success({ tasks, dependencies: dependencies.sort((a, b) => rank.get(a.to)! - rank.get(b.to)!) }, problems);
 }

@@ -64,4 +64,10 @@ describe('task derivation', () => {
     const itself = await derive([{ t: 'a', s: 0, e: 1, p: 'a' }], { after: 'p' });
     expect(itself.diagnostics.find((d) => d.code === 'derive.predecessor-unknown')).toMatchObject({ rows: [1], found: 'a' });
   });
+
+  it('dependencies come in the order of their successors, whatever the order of the rows (regression: shuffled rows drew connectors in another order)', async () => {
+    const rows = [{ t: 'c', s: 2, e: 3, p: 'b' }, { t: 'a', s: 0, e: 1, p: '' }, { t: 'b', s: 1, e: 2, p: 'a' }];
+    const r = await derive(rows, { after: 'p' });
+    expect(r.ok && r.value.dependencies.map((d) => d.to)).toEqual(['b', 'c']);
+  });
 });
