@@ -7,6 +7,7 @@ import { asBand, type Scale } from '../layout/scales.js';
 import type { Datum, SceneNode } from '../scene/types.js';
 import { polyline } from '../svg/path.js';
 import { planGantt, type GanttPlan } from './gantt-plan.js';
+import { thinnedNames } from './gantt-text.js';
 import type { FormDef } from './types.js';
 
 /** What a Gantt chart draws: its tasks in order, their dependencies, and its plan. */
@@ -101,7 +102,7 @@ function layoutGantt(d: DerivedGantt, area: PlotArea, ctx: LayoutContext) {
   return { marks, labels: [], diagnostics: [] };
 }
 
-function words(d: DerivedGantt) {
+function words(d: DerivedGantt, ctx: LayoutContext) {
   const q = d.plan.query;
   const first = d.tasks.reduce((a, b) => (b.start < a.start ? b : a));
   const last = d.tasks.reduce((a, b) => (b.end > a.end ? b : a));
@@ -109,7 +110,7 @@ function words(d: DerivedGantt) {
   return {
     title: `${q.task.label} schedule`,
     description: `Gantt chart of ${d.tasks.length} tasks${links}, from ${timeText(d.plan, first.start)} (${first.label}) to ${timeText(d.plan, last.end)} (${last.label}).`,
-    notes: [],
+    notes: thinnedNames(domainsOf(d, ctx), d.tasks.length, ctx),
   };
 }
 

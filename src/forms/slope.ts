@@ -37,13 +37,20 @@ function colourOf(direction: Direction, ctx: LayoutContext): string {
   return direction === 'up' ? palette.primary : direction === 'down' ? palette.negative : palette.others;
 }
 
+/** The shared axis's title: the value (period key), or both columns, with the unit they share. */
+function valueTitle(q: SlopeQuery): string {
+  const value = valueField(q);
+  const label = q.source.kind === 'periods' ? value.label : `${q.source.before.label} and ${q.source.after.label.toLowerCase()}`;
+  return axisTitle({ ...value, label }, label);
+}
+
 function domainsOf(d: DerivedSlope, ctx: LayoutContext): CartesianDomains {
   const q = d.plan.query;
   const [lo, hi] = extent(d.items.flatMap((i) => [i.before, i.after])) as [number, number];
   const value = valueField(q);
   const present = (['up', 'down', 'unchanged'] as const).filter((dir) => d.items.some((i) => i.direction === dir));
   return {
-    left: { kind: 'linear', name: 'value', field: value.name, title: axisTitle(value, value.label), extent: d.plan.zero ? [Math.min(0, lo), Math.max(0, hi)] : [lo, hi], format: value.format },
+    left: { kind: 'linear', name: 'value', field: value.name, title: valueTitle(q), extent: d.plan.zero ? [Math.min(0, lo), Math.max(0, hi)] : [lo, hi], format: value.format },
     bottom: { kind: 'band', name: 'point', field: endField(q), title: q.source.kind === 'periods' ? q.source.period.label : 'Measured at', domain: [...d.ends] },
     first: 'left',
     legend: { kind: 'categorical', field: 'direction', title: 'Direction', entries: present.map((dir) => ({ label: DIRECTION_WORDS[dir], fill: colourOf(dir, ctx) })) },
@@ -66,10 +73,11 @@ function lineDatum(d: DerivedSlope, item: SlopeItem): Datum {
 /** Each item's line from its left point to its right point, and a dot at each end. */
 function lineMarks(d: DerivedSlope, item: SlopeItem, xs: [number, number], y: (v: number) => number, ctx: LayoutContext): SceneNode[] {
   const q = d.plan.query;
-  const value = valueField(q).name;
+  // Each point's value under its own column: the one value column, or the column of its end.
+  const columns = q.source.kind === 'periods' ? [q.source.value.name, q.source.value.name] : [q.source.before.name, q.source.after.name];
   const colour = colourOf(item.direction, ctx);
-  const ends = [[xs[0], item.before, d.ends[0]], [xs[1], item.after, d.ends[1]]] as const;
-  const points = ends.map(([x, v, end]) => ({ x, y: y(v), datum: { [q.item.name]: item.label, [endField(q)]: end, [value]: v } }));
+  const ends = [[xs[0], item.before, d.ends[0], columns[0]!], [xs[1], item.after, d.ends[1], columns[1]!]] as const;
+  const points = ends.map(([x, v, end, column]) => ({ x, y: y(v), datum: { [q.item.name]: item.label, [endField(q)]: end, [column]: v } }));
   const line: SceneNode = { kind: 'path', id: ctx.id('line', item.label), role: 'line', commands: segment(points[0]!.x, points[0]!.y, points[1]!.x, points[1]!.y), stroke: colour, strokeWidth: widthOf(d)(item), points, datum: lineDatum(d, item) };
   const dots = points.map((p, i): SceneNode => ({ kind: 'circle', id: ctx.id('point', `${item.label} ${i}`), role: 'point', cx: p.x, cy: p.y, r: 2.5, fill: colour, datum: p.datum }));
   return [line, ...dots];
@@ -105,7 +113,6 @@ function layoutSlope(d: DerivedSlope, area: PlotArea, ctx: LayoutContext) {
 
 function words(d: DerivedSlope) {
   const q = d.plan.query;
-  const value = valueField(q);
   const count = (dir: Direction) => d.items.filter((i) => i.direction === dir).length;
   const notes: string[] = [];
   if (q.width) {
@@ -114,7 +121,7 @@ function words(d: DerivedSlope) {
     notes.push(`Line width shows ${q.width.label.toLowerCase()}: the thickest line is ${fmt(max(d.items, (i) => i.width ?? 0) ?? 0)}${unit}.`);
   }
   return {
-    title: `${axisTitle(value, value.label)}: ${d.ends[0]} and ${d.ends[1]}`,
+    title: `${valueTitle(q)}: ${d.ends[0]} and ${d.ends[1]}`,
     description: `Slope chart of ${d.items.length} items (${q.item.label.toLowerCase()}) from ${d.ends[0]} to ${d.ends[1]}: ${count('up')} went up, ${count('down')} went down and ${count('unchanged')} stayed the same.`,
     notes,
   };

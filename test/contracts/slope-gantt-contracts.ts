@@ -15,9 +15,10 @@ const marks = (dump: SceneDump, role: string): DumpMark[] => dump.marks.filter((
 /**
  * Perceptual contracts of a slope chart: every line has two points, on the two vertical axes (the
  * bottom axis's two band centres), each at the height of its value on the one shared left scale
- * (within 0.5 px); up and down lines have different colours; no two texts overlap.
+ * (within 0.5 px; `value` names the column of both ends, or of each); up and down lines have different colours; no two texts overlap.
  */
-export function checkSlopeContracts(dump: SceneDump, value: string) {
+export function checkSlopeContracts(dump: SceneDump, value: string | [string, string]) {
+  const columns = typeof value === 'string' ? [value, value] : value;
   const [left, bottom] = dump.axes as [AxisInfo, AxisInfo];
   expect(left.orient).toBe('left');
   expect(bottom.tickPositions).toHaveLength(2);
@@ -33,7 +34,7 @@ export function checkSlopeContracts(dump: SceneDump, value: string) {
     expect(line.points).toHaveLength(2);
     line.points!.forEach((p, i) => {
       expect(Math.abs(p.x - bottom.tickPositions[i]!)).toBeLessThanOrEqual(0.5);
-      expect(Math.abs(p.y - y(p.datum![value] as number))).toBeLessThanOrEqual(0.5);
+      expect(Math.abs(p.y - y(p.datum![columns[i]!] as number))).toBeLessThanOrEqual(0.5);
     });
   }
   const stroke = (dir: string) => new Set(marks(dump, 'line').filter((l) => l.datum!.direction === dir).map((l) => l.stroke));

@@ -30,8 +30,15 @@ describe('perceptual contracts of slope charts', () => {
     const dump = dumpScene(r.scene!);
     expect(dump.axes[1]!.domain).toEqual(['Before', 'After']);
     expect(dump.marks.filter((m) => m.role === 'line').map((l) => l.points!.map((p) => p.datum!.point))).toEqual([['Before', 'After'], ['Before', 'After'], ['Before', 'After']]);
-    const byItem = Object.fromEntries(dump.marks.filter((m) => m.role === 'line').map((l) => [l.datum!.k, l.points!.map((p) => p.datum!.before ?? p.datum!.after)]));
+    checkSlopeContracts(dump, ['before', 'after']);
+    // Each point's value is under its own column (regression: both were under the first column).
+    const byItem = Object.fromEntries(dump.marks.filter((m) => m.role === 'line').map((l) => [l.datum!.k, [l.points![0]!.datum!.before, l.points![1]!.datum!.after]]));
     expect(byItem).toEqual({ A: [3, 9], B: [7, 2], C: [5, 5] });
+  });
+
+  it('two value columns share one axis title naming both', async () => {
+    const r = await renderRows({ intent: 'shift', keys: 'k', values: ['before', 'after'], fields: { before: { unit: '%' }, after: { unit: '%' } } }, [{ k: 'A', before: 3, after: 9 }]);
+    expect(dumpScene(r.scene!).axes[0]!.title).toBe('Before and after (%)');
   });
 });
 
@@ -65,5 +72,17 @@ describe('perceptual contracts of Gantt charts', () => {
     expect(r.diagnostics.map((d) => d.code)).toContain('layout.label-truncated');
     expect(dump.marks.find((m) => m.role === 'task' && m.datum!.task === long)).toBeDefined();
     expect(dump.texts.filter((t) => t.role === 'tick').map((t) => t.text)).toEqual(expect.arrayContaining([expect.stringMatching(/^Reinforce the south/), expect.stringMatching(/…$/)]));
+  });
+
+  it('rows too thin for every name: the chart\'s note says how many are named, matching the axis, and every bar keeps its name', async () => {
+    const rows = Array.from({ length: 150 }, (_, i) => ({ task: `Task ${i}`, start: i % 40, end: 40 + (i % 17) }));
+    const r = await renderRows({ intent: 'schedule', keys: 'task', start: 'start', end: 'end' }, rows);
+    const dump = dumpScene(r.scene!);
+    checkGanttContracts(dump, names);
+    const named = dump.texts.filter((t) => t.role === 'tick' && t.text.startsWith('Task ')).length;
+    const note = dump.texts.find((t) => t.role === 'note' && t.text.includes('task is named'))!;
+    expect(note.text).toContain(`(${named} of 150)`);
+    expect(named).toBeLessThan(150);
+    expect(new Set(dump.marks.filter((m) => m.role === 'task').map((m) => m.datum!.task)).size).toBe(150);
   });
 });

@@ -22,7 +22,7 @@ describe('property: slope charts', () => {
       }
       parseXml(r.svg!);
       expectFiniteAttributes(r.svg!);
-      checkSlopeContracts(dumpScene(r.scene!), 'a');
+      checkSlopeContracts(dumpScene(r.scene!), ['a', 'b']);
       const again = await renderRows(brief, shuffle(data, seed));
       expect(again.svg).toBe(r.svg);
     }), { numRuns: runs(40) });
