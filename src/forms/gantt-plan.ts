@@ -25,7 +25,8 @@ function orderOf(input: PlanInput, problems: Diagnostic[], decisions: Decision[]
     decisions.push({ decision: `tasks in ${order} order`, rule: 'the brief asks for it (`order:`)' });
     return order;
   }
-  decisions.push({ decision: 'tasks sorted by start, top to bottom; ties by end, then name', rule: 'a schedule is read in time order, so the first task to start is on top and the bars step down like the work (common practice for Gantt charts)' });
+  const asked = order === 'value' ? '; `order: value` orders a schedule by its start times' : '';
+  decisions.push({ decision: 'tasks sorted by start, top to bottom; ties by end, then name', rule: `a schedule is read in time order, so the first task to start is on top and the bars step down like the work (common practice for Gantt charts)${asked}` });
   return 'start';
 }
 

@@ -45,11 +45,17 @@ function manyItems(n: number, decisions: Decision[], problems: Diagnostic[]): vo
 }
 
 /**
- * A slope chart pinned (`form: slope`) under another intent skips the shift intent's shape check:
- * its plan refuses a shape it cannot draw rather than fail while drawing.
+ * What a slope chart cannot draw: an order (items stand at their values), or a shape of another
+ * intent (a pinned `form: slope` skips the shift intent's shape check), refused rather than
+ * failing while drawing or silently ignored.
  */
 function unfit(input: PlanInput): Diagnostic | undefined {
   const { keys, values } = input.fields;
+  if (input.brief.order !== 'auto') {
+    return diagnostic('choice.order-not-applicable', `\`order: ${input.brief.order}\` does not apply to a slope chart: each item stands at its own values on the shared scale`, {
+      path: '/order', found: input.brief.order, expected: 'auto', hint: 'remove `order:`',
+    });
+  }
   const fits = keys.length === 2 ? values.length >= 1 && values.length <= 2 : keys.length === 1 && values.length >= 2 && values.length <= 3;
   if (fits) return undefined;
   return diagnostic('choice.slope-shape', `a slope chart needs items measured at two points, but the brief gives ${keys.length} key(s) and ${values.length} value(s)`, {

@@ -78,4 +78,9 @@ describe('rules for the shift intent', () => {
     expect(codes(r)).not.toContain('render.internal');
     expect(problem(r, 'choice.slope-shape')).toMatchObject({ path: '/values' });
   });
+
+  it('`order:` is refused for a slope chart rather than silently ignored', async () => {
+    const r = await renderRows({ ...brief, order: 'value' }, rows);
+    expect(problem(r, 'choice.order-not-applicable')).toMatchObject({ path: '/order' });
+  });
 });
