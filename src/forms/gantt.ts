@@ -9,6 +9,7 @@ import { polyline } from '../svg/path.js';
 import { planGantt, type GanttPlan } from './gantt-plan.js';
 import { thinnedNames } from './gantt-text.js';
 import type { FormDef } from './types.js';
+import { withPlan } from './with-plan.js';
 
 /** What a Gantt chart draws: its tasks in order, their dependencies, and its plan. */
 export interface DerivedGantt extends DerivedTasks {
@@ -124,10 +125,7 @@ export const GANTT: FormDef<GanttPlan, DerivedGantt> = {
   noun: 'Gantt chart',
   traits: { lengthCoded: false, connectsKey: false, radial: false, coloursCategories: true, axisPerValue: false },
   plan: planGantt,
-  derive(table, plan) {
-    const derived = deriveTasks(table, plan.query);
-    return derived.ok ? { ...derived, value: { plan, ...derived.value } } : derived;
-  },
+  derive: (table, plan) => withPlan(plan, deriveTasks(table, plan.query)),
   domains: domainsOf,
   layout: layoutGantt,
   words,

@@ -9,6 +9,7 @@ import { segment } from '../svg/path.js';
 import { endLabels, type EndSpec } from './slope-labels.js';
 import { planSlope, type SlopePlan } from './slope-plan.js';
 import type { FormDef } from './types.js';
+import { withPlan } from './with-plan.js';
 
 /** What a slope chart draws: its items, the names of its two ends, and its plan. */
 export interface DerivedSlope {
@@ -140,10 +141,7 @@ export const SLOPE: FormDef<SlopePlan, DerivedSlope> = {
   // several value columns here are not a mixing of scales (the shape check requires one unit).
   traits: { lengthCoded: false, connectsKey: false, radial: false, coloursCategories: false, axisPerValue: true },
   plan: planSlope,
-  derive(table, plan) {
-    const derived = deriveSlopes(table, plan.query);
-    return derived.ok ? { ...derived, value: { plan, ...derived.value } } : derived;
-  },
+  derive: (table, plan) => withPlan(plan, deriveSlopes(table, plan.query)),
   domains: domainsOf,
   layout: layoutSlope,
   words,
