@@ -112,6 +112,8 @@ export interface ResolvedBrief {
   color: string | undefined;
   shape: string | undefined;
   area: string | undefined;
+  /** For intent schedule: the column naming each task's predecessor (drawn as a dependency). Default: undefined. */
+  after: string | undefined;
 }
 
 /** The intents and forms a brief may name: those the rule table answers and the registry draws. */
@@ -123,4 +125,4 @@ export interface BriefVocabulary {
 }
 
 /** Intent-specific options that name a column of the data. */
-export const COLUMN_OPTIONS = ['start', 'end', 'color', 'shape', 'area'] as const;
+export const COLUMN_OPTIONS = ['start', 'end', 'color', 'shape', 'area', 'after'] as const;

@@ -4,6 +4,8 @@ import type { Fields } from '../fields/types.js';
 import { applyHardRules } from './hard-rules.js';
 import { formsForIntent } from './rules.js';
 import { checkTrendShape } from './trend-checks.js';
+import { checkScheduleShape } from './schedule-checks.js';
+import { checkShiftShape } from './shift-checks.js';
 import type { Candidate } from './types.js';
 
 function columnsOfType(fields: Fields, types: string[]): string[] {
@@ -47,6 +49,8 @@ export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: Resolv
   compare: checkCompareShape,
   trend: checkTrendShape,
   change: checkTrendShape,
+  shift: checkShiftShape,
+  schedule: checkScheduleShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */
@@ -57,6 +61,7 @@ export const INTENT_OPTIONS = {
   color: ['correlation'],
   shape: ['correlation'],
   area: ['correlation'],
+  after: ['schedule'],
 } as const satisfies Partial<Record<keyof ResolvedBrief, readonly Intent[]>>;
 
 /** An intent-specific option given to an intent that does not use it is refused, not silently dropped. */

@@ -55,6 +55,20 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length >= 1 && f.keys.length <= 2,
     why: 'change over an ordered key: each line divided by its value at a common base, so series of different sizes show their growth on one scale',
   },
+  {
+    id: 'shift.two-points',
+    intent: 'shift',
+    form: 'slope',
+    applies: (f) => f.keys.length >= 1,
+    why: 'items measured at two points: a slope chart puts both ends on one shared scale, so each line\'s slope is the item\'s change and every change is compared at a glance',
+  },
+  {
+    id: 'schedule.tasks',
+    intent: 'schedule',
+    form: 'gantt',
+    applies: (f) => f.keys.length >= 1,
+    why: 'tasks with a start and an end: a Gantt chart draws each as a bar on one time axis, so durations, order and overlaps are seen together',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */

@@ -41,7 +41,17 @@ export function checkBarContracts(dump: SceneDump, valueName: string, keyName: s
   // Every axis has a non-empty title, and names its field.
   for (const a of dump.axes) expect(a.title.trim()).not.toBe('');
   expect(dump.axes.map((a) => a.field)).toEqual([valueName, keyName]);
-  // No text outside the canvas, and no two texts overlap.
+  checkTextsClear(dump);
+  // Every mark lies inside the canvas.
+  for (const m of dump.marks.filter((x) => x.kind === 'rect')) {
+    expect(m.x!).toBeGreaterThanOrEqual(0);
+    expect(m.x! + m.width!).toBeLessThanOrEqual(dump.width + 1e-6);
+    expect(m.y! + m.height!).toBeLessThanOrEqual(dump.height + 1e-6);
+  }
+}
+
+/** No text outside the canvas, and no two texts overlap: a contract of every chart. */
+export function checkTextsClear(dump: SceneDump) {
   for (const t of dump.texts) {
     expect(t.x).toBeGreaterThanOrEqual(0);
     expect(t.y).toBeGreaterThanOrEqual(0);
@@ -53,12 +63,6 @@ export function checkBarContracts(dump: SceneDump, valueName: string, keyName: s
       const [a, b] = [dump.texts[i]!, dump.texts[j]!];
       if (overlap(a, b)) throw new Error(`texts overlap: ${JSON.stringify(a.text)} (${a.role}) and ${JSON.stringify(b.text)} (${b.role})`);
     }
-  }
-  // Every mark lies inside the canvas.
-  for (const m of dump.marks.filter((x) => x.kind === 'rect')) {
-    expect(m.x!).toBeGreaterThanOrEqual(0);
-    expect(m.x! + m.width!).toBeLessThanOrEqual(dump.width + 1e-6);
-    expect(m.y! + m.height!).toBeLessThanOrEqual(dump.height + 1e-6);
   }
 }
 

@@ -4,9 +4,11 @@ import { describe, expect, it } from 'vitest';
 import { bars, checkBarContracts } from './bar-contracts.js';
 import { demoBriefs, renderDemo, renderRows } from '../helpers.js';
 
+/** The gallery's bar charts: the briefs of intent compare (other forms keep their own contracts). */
+const barDemos = () => demoBriefs().filter((f) => /^intent: compare$/m.test(readFileSync(f, 'utf8')));
+
 describe('perceptual contracts on every gallery chart', () => {
-  // Bar charts are the demos that ask to compare; the other forms have their own contracts.
-  for (const file of demoBriefs().filter((f) => /^intent: compare$/m.test(readFileSync(f, 'utf8')))) {
+  for (const file of barDemos()) {
     it(`${file.split('/').pop()} keeps the bar chart contracts`, async () => {
       const { result, dump } = await renderDemo(file);
       const plan = (result.choice!.plan as BarPlan);
