@@ -45,6 +45,7 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     color: raw.color as string | undefined,
     shape: raw.shape as string | undefined,
     area: raw.area as string | undefined,
+    fit: raw.fit as ResolvedBrief['fit'],
   };
 }
 

@@ -34,6 +34,7 @@ const fieldHint: SchemaNode = {
     format: { type: 'string', description: 'd3-format specifier for numbers, e.g. ",d".' },
     order: { type: 'array', items: { anyOf: [{ type: 'string' }, { type: 'number' }] }, description: 'Level order for ordinal or cyclic fields.' },
     label: { type: 'string', description: 'Readable name used in axis titles.' },
+    zero: { type: 'string', enum: ['arbitrary'], description: 'arbitrary: the scale\'s zero means nothing (°C, years), so its axis may leave zero out.' },
   },
 };
 
@@ -92,6 +93,7 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
       color: { type: 'string', minLength: 1, description: 'For intent correlation: the column coded by colour.' },
       shape: { type: 'string', minLength: 1, description: 'For intent correlation: the column coded by shape.' },
       area: { type: 'string', minLength: 1, description: 'For intent correlation: the column whose value each circle\'s area shows (`size` is the frame).' },
+      fit: { type: 'string', enum: ['linear'], description: 'For intent correlation: draw a least-squares line through the points.' },
     },
   };
 }

@@ -13,6 +13,7 @@ export type Intent = (typeof INTENTS)[number];
 export const FORM_NAMES = [
   'bar', 'grouped-bar', 'stacked-bar', 'normalized-bar', 'line', 'index-line', 'slope', 'gantt',
   'scatter', 'histogram', 'strip', 'box', 'heatmap', 'scatter-matrix', 'parallel', 'stream', 'radial-bar', 'donut',
+  'dot',
 ] as const;
 export type FormName = (typeof FORM_NAMES)[number];
 
@@ -38,6 +39,8 @@ export interface FieldHint {
   order?: (string | number)[];
   /** Human-readable name used in titles. Default: the column name made readable. */
   label?: string;
+  /** `arbitrary` for a scale whose zero means nothing (°C, a year, an index): position, not length, shows it. Default: none. */
+  zero?: 'arbitrary';
 }
 
 /** Where the table comes from. */
@@ -92,6 +95,8 @@ export interface ResolvedBrief {
   color: string | undefined;
   shape: string | undefined;
   area: string | undefined;
+  /** For intent correlation: a fitted line drawn through the points (`linear`: least squares). Default: undefined (none). */
+  fit: 'linear' | undefined;
 }
 
 /** The intents and forms a brief may name: those the rule table answers and the registry draws. */

@@ -4,6 +4,7 @@ import type { Fields } from '../fields/types.js';
 import { applyHardRules } from './hard-rules.js';
 import { formsForIntent } from './rules.js';
 import type { Candidate } from './types.js';
+import { checkCorrelationShape } from './correlation-checks.js';
 
 function columnsOfType(fields: Fields, types: string[]): string[] {
   return fields.all.filter((f) => types.includes(f.type)).map((f) => f.name);
@@ -44,6 +45,7 @@ export function checkCompareShape(fields: Fields, brief: ResolvedBrief): Diagnos
 /** The data-shape check of each intent that has rules. */
 export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: ResolvedBrief) => Diagnostic[]>> = {
   compare: checkCompareShape,
+  correlation: checkCorrelationShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */
@@ -54,6 +56,7 @@ export const INTENT_OPTIONS = {
   color: ['correlation'],
   shape: ['correlation'],
   area: ['correlation'],
+  fit: ['correlation'],
 } as const satisfies Partial<Record<keyof ResolvedBrief, readonly Intent[]>>;
 
 /** An intent-specific option given to an intent that does not use it is refused, not silently dropped. */

@@ -18,6 +18,20 @@ export interface Rule {
  */
 export const RULES: readonly Rule[] = [
   {
+    id: 'compare.arbitrary-zero',
+    intent: 'compare',
+    form: 'dot',
+    applies: (f) => f.keys.length === 1 && f.values.length >= 1 && f.values.length <= 2 && f.values.some((v) => v.zero === 'arbitrary'),
+    why: 'the value\'s zero is arbitrary (`zero: arbitrary`), so a bar\'s length from zero would mean nothing: dots on an aligned scale compare positions, which need no zero (Cleveland 1985)',
+  },
+  {
+    id: 'compare.paired-values',
+    intent: 'compare',
+    form: 'dot',
+    applies: (f) => f.keys.length === 1 && f.values.length === 2,
+    why: 'two values of one measure per key (e.g. before and after): a dumbbell joins each key\'s two dots on one aligned scale, so both the values and their difference are read by position (Cleveland 1985)',
+  },
+  {
     id: 'compare.categorical-key',
     intent: 'compare',
     form: 'bar',
@@ -30,6 +44,13 @@ export const RULES: readonly Rule[] = [
     form: 'bar',
     applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type),
     why: 'one ordered key and one value: bars in key order, because the order of the key carries meaning',
+  },
+  {
+    id: 'correlation.two-values',
+    intent: 'correlation',
+    form: 'scatter',
+    applies: (f) => f.values.length === 2,
+    why: 'two quantitative values: a scatter plot puts each row at its x and y positions, the most accurately read encoding for how two values go together (Cleveland & McGill 1984)',
   },
 ];
 

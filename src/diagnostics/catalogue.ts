@@ -59,6 +59,10 @@ export const CATALOGUE = {
   'choice.line-on-categorical': 'error',
   'choice.radial-not-cyclic': 'error',
   'choice.too-many-colours': 'error',
+  'choice.needs-two-values': 'error',
+  'choice.not-categorical': 'error',
+  'choice.too-many-shapes': 'error',
+  'choice.dumbbell-units-differ': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -67,6 +71,9 @@ export const CATALOGUE = {
   'derive.too-many-ordered-bars': 'error',
   'derive.uneven-dates': 'warning',
   'derive.not-finite': 'error',
+  'derive.negative-area': 'error',
+  'derive.fit-not-possible': 'warning',
+  'derive.too-many-dots': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',
@@ -75,6 +82,7 @@ export const CATALOGUE = {
   'layout.text-off-canvas': 'warning',
   'layout.text-overlap': 'warning',
   'layout.labels-unplaced': 'warning',
+  'layout.overplotted': 'warning',
   // output
   'output.write-failed': 'error',
   'output.raster-failed': 'error',

@@ -86,6 +86,7 @@ export function inferFields(table: Table, brief: ResolvedBrief): Outcome<Fields>
     return {
       name: column.name, label: hint?.label ?? readableName(column.name), type, role,
       unit: hint?.unit, format: hint?.format, levels: levelsOf(column, type, hint, problems), column,
+      ...(hint?.zero ? { zero: hint.zero } : {}),
     };
   });
   if (hasErrors(problems)) return failure(problems);

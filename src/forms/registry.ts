@@ -1,9 +1,11 @@
 import type { FormName } from '../brief/types.js';
 import { BAR } from './bar.js';
+import { DOT } from './dot.js';
+import { SCATTER } from './scatter.js';
 import type { AnyForm } from './types.js';
 
 /** The forms chartwright draws: one entry per form file in src/forms/. */
-export const FORMS: readonly AnyForm[] = [BAR];
+export const FORMS: readonly AnyForm[] = [BAR, SCATTER, DOT];
 
 /** The form of a name, if it is drawn. */
 export function formNamed(name: FormName | string): AnyForm | undefined {

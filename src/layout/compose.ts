@@ -7,7 +7,8 @@ import type { ValueTicks } from './axis.js';
 import { drawBottomBandAxis, drawLeftBandAxis, drawLinearAxis, drawTimeAxis, rule, type DrawnAxis } from './axes.js';
 import { checkScene, overlappingBoxes } from './checks.js';
 import { layoutFrame } from './frame.js';
-import { layoutLegend, type LegendLayout, type LegendSpec } from './legend.js';
+import type { LegendLayout, LegendSpec } from './legend.js';
+import { layoutLegends } from './legends.js';
 import { placeLabels } from './place-labels.js';
 import { memoized, ticksFor, type CartesianDomains, type FormMarks, type FormWords, type LabelRoom, type LayoutContext, type LinearChannel, type PlotArea, type ScaleProbe, type TimeChannel } from './kit-types.js';
 import { plotBox, tickCount, type PlotBox } from './plot-box.js';
@@ -127,15 +128,16 @@ const LEGEND_TOP_SHARE = 0.25;
 const LEGEND_RIGHT_SHARE = 0.3;
 
 /** Lays out a form's legend and the body it leaves for the plot and axes. */
-export function placeLegend(spec: LegendSpec | undefined, body: Box, ctx: LayoutContext): { body: Box; legend?: LegendLayout } {
-  if (!spec) return { body };
+export function placeLegend(spec: LegendSpec | LegendSpec[] | undefined, body: Box, ctx: LayoutContext): { body: Box; legend?: LegendLayout } {
+  const specs = spec === undefined ? [] : Array.isArray(spec) ? spec : [spec];
+  if (specs.length === 0) return { body };
   const { style, measure } = ctx;
   const gap = style.spacing.blockGap;
-  const top = layoutLegend(spec, { x: body.x, y: body.y, width: body.width, placement: 'top' }, style, measure);
+  const top = layoutLegends(specs, { x: body.x, y: body.y, width: body.width, placement: 'top' }, style, measure);
   if (top.height <= body.height * LEGEND_TOP_SHARE) return { legend: top, body: { ...body, y: body.y + top.height + gap, height: Math.max(0, body.height - top.height - gap) } };
   const width = body.width * LEGEND_RIGHT_SHARE;
-  const probe = layoutLegend(spec, { x: 0, y: body.y, width, placement: 'right' }, style, measure);
-  const right = layoutLegend(spec, { x: body.x + body.width - probe.width, y: body.y, width: probe.width, placement: 'right' }, style, measure);
+  const probe = layoutLegends(specs, { x: 0, y: body.y, width, placement: 'right' }, style, measure);
+  const right = layoutLegends(specs, { x: body.x + body.width - probe.width, y: body.y, width: probe.width, placement: 'right' }, style, measure);
   return { legend: right, body: { ...body, width: Math.max(0, body.width - right.width - gap) } };
 }
 
@@ -177,7 +179,7 @@ export function plotFor(domains: CartesianDomains, notes: string[], ctx: LayoutC
  * of every composition. The frame depends only on its notes within one render, so it is laid out
  * once for planning and drawing.
  */
-export function frameFor(legendSpec: LegendSpec | undefined, notes: string[], ctx: LayoutContext): Omit<PlotLayout, 'box'> {
+export function frameFor(legendSpec: LegendSpec | LegendSpec[] | undefined, notes: string[], ctx: LayoutContext): Omit<PlotLayout, 'box'> {
   const { brief, style, measure } = ctx;
   const frame = memoized(ctx, `frame\u0000${notes.join('\u0000')}`, () => layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes }, style, brief.size, measure));
   const { body, legend } = placeLegend(legendSpec, frame.body, ctx);
@@ -192,7 +194,7 @@ export function sceneOf(form: string, words: FormWords, children: SceneNode[], p
     form, width: brief.size.width, height: brief.size.height, background: style.background,
     title: brief.title ?? words.title, description: brief.description ?? words.description,
     root: { kind: 'group', id: 'chart', role: 'chart', children }, axes: first.axes, plot: first.plot,
-    panels, legends: legend ? [legend.info] : [],
+    panels, legends: legend ? legend.infos ?? [legend.info] : [],
   };
 }
 
