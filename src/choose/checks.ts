@@ -88,7 +88,7 @@ export function checkValueUnit(fields: Fields): Diagnostic[] {
  * is read too, so one `check` reports them with data problems.
  */
 export function checkBriefRules(brief: ResolvedBrief, candidates: readonly Candidate[], lenient: boolean): { problems: Diagnostic[] } {
-  const names = brief.form ? [brief.form] : formsForIntent(brief.intent);
+  const names = brief.form ? [brief.form] : formsForIntent(brief.intent, brief);
   const forms = candidates.filter((c) => names.includes(c.name));
   const checked = forms.map((f) => applyHardRules({ traits: f.traits, form: f.noun, brief, fields: undefined }, lenient, (r) => r.briefOnly));
   // A brief-only rule is refused early only when every form the brief may get breaks it.

@@ -1,4 +1,4 @@
-import type { FormName, Intent } from '../brief/types.js';
+import type { FormName, Intent, ResolvedBrief } from '../brief/types.js';
 import type { Fields } from '../fields/types.js';
 import { isOrdered } from '../fields/types.js';
 
@@ -10,7 +10,12 @@ export interface Rule {
   applies(fields: Fields): boolean;
   /** The reason, as a reader would accept it. */
   why: string;
+  /** Whether a brief could match this row, judged from the brief alone (before the data is read). Default: always. */
+  briefMay?(brief: ResolvedBrief): boolean;
 }
+
+/** Whether the brief marks one of its values `zero: arbitrary`, or gives two values: what may lead compare to dots. */
+const mayBeDots = (b: ResolvedBrief) => b.values.length === 2 || b.values.some((v) => Object.hasOwn(b.fields, v) && b.fields[v]!.zero === 'arbitrary');
 
 /**
  * The rule table, as data: the first rule whose intent and data shape match chooses the form.
@@ -22,6 +27,7 @@ export const RULES: readonly Rule[] = [
     intent: 'compare',
     form: 'dot',
     applies: (f) => f.keys.length === 1 && f.values.length >= 1 && f.values.length <= 2 && f.values.some((v) => v.zero === 'arbitrary'),
+    briefMay: mayBeDots,
     why: 'the value\'s zero is arbitrary (`zero: arbitrary`), so a bar\'s length from zero would mean nothing: dots on an aligned scale compare positions, which need no zero (Cleveland 1985)',
   },
   {
@@ -29,6 +35,7 @@ export const RULES: readonly Rule[] = [
     intent: 'compare',
     form: 'dot',
     applies: (f) => f.keys.length === 1 && f.values.length === 2,
+    briefMay: mayBeDots,
     why: 'two values of one measure per key (e.g. before and after): a dumbbell joins each key\'s two dots on one aligned scale, so both the values and their difference are read by position (Cleveland 1985)',
   },
   {
@@ -64,7 +71,7 @@ export function supportedIntents(): Intent[] {
   return [...new Set(RULES.map((r) => r.intent))];
 }
 
-/** The forms the rules may lead an intent to. */
-export function formsForIntent(intent: Intent): FormName[] {
-  return [...new Set(RULES.filter((r) => r.intent === intent).map((r) => r.form))];
+/** The forms the rules may lead an intent to (for this brief, when given, judged before the data is read). */
+export function formsForIntent(intent: Intent, brief?: ResolvedBrief): FormName[] {
+  return [...new Set(RULES.filter((r) => r.intent === intent && (!brief || !r.briefMay || r.briefMay(brief))).map((r) => r.form))];
 }

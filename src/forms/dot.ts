@@ -23,7 +23,7 @@ export interface DerivedDots { plan: DotPlan; rows: DotRow[] }
 function valueTitle(plan: DotPlan): string {
   const [a, b] = plan.values;
   if (!b) return axisTitle(a!, a!.label);
-  const both = `${a!.label} and ${b.label.toLowerCase()}`;
+  const both = `${a!.label} and ${b.label}`;
   return a!.unit ? `${both} (${a!.unit})` : both;
 }
 

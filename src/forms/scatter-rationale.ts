@@ -9,7 +9,7 @@ const count = format(',d');
 function overplotDecision(plan: ScatterPlan, n: number): Decision {
   const measured = `${percent(plan.overlap)} of the ${count(n)} points overlap another at full size`;
   if (plan.mode === 'points') {
-    return { decision: `points drawn ${format('.1f')(plan.radius)} px${plan.area ? ' at the largest' : ''}, opaque`, rule: `overplotting measured: ${measured}, no more than the 25 % at which marks start hiding one another` };
+    return { decision: `points drawn opaque, with a radius of ${format('.1f')(plan.radius)} px${plan.area ? ' for the largest' : ''}`, rule: `overplotting measured: ${measured}, no more than the 25 % at which marks start hiding one another` };
   }
   if (plan.mode === 'translucent') {
     return { decision: 'points drawn smaller and translucent (50 %)', rule: `overplotting measured: ${measured}, more than 25 %; smaller, see-through marks let piled-up points show as darker patches` };

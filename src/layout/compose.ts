@@ -50,9 +50,18 @@ function bottomRange(plot: Box, probeLabels: readonly string[], room: LabelRoom,
 }
 
 /** The bottom axis's linear scale, inset so the end tick labels and the form's labels stay inside the plot's width. */
-function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], room: LabelRoom, ctx: LayoutContext): LinearScale {
-  const [rangeLeft, rangeRight] = bottomRange(plot, probeLabels, room, ctx);
-  const vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel.format);
+function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], room: LabelRoom, ctx: LayoutContext, clearCorner = false): LinearScale {
+  let [rangeLeft, rangeRight] = bottomRange(plot, probeLabels, room, ctx);
+  let vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel.format);
+  // Under a linear left axis, whose lowest label sits at the corner, the first label drawn starts
+  // no further left than the plot: the probe's first label may be narrower than the one drawn.
+  const { tick } = ctx.style.text;
+  for (let i = 0; clearCorner && i < 3; i++) {
+    const start = rangeLeft - ctx.measure.width(vt.labels[0] ?? '', tick.size, tick.weight) / 2;
+    if (start >= plot.x - 1e-9) break;
+    rangeLeft += plot.x - start;
+    vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel.format);
+  }
   return linearScale(vt, [rangeLeft, rangeRight]);
 }
 
@@ -71,7 +80,7 @@ function scalesWith(domains: CartesianDomains, box: PlotBox, bottomProbe: ValueT
   const leftBand: BandScale | undefined = left.kind === 'band' ? left.band : undefined;
   const y = domains.left.kind === 'linear' ? leftLinear(domains.left, plot, side === 'left' ? room : NO_ROOM, ctx)
     : domains.left.kind === 'time' ? timeScale(domains.left.extent, [plot.y + plot.height, plot.y], tickCount(plot.height, 'vertical')) : leftBand!;
-  const x = domains.bottom.kind === 'linear' ? bottomLinear(domains.bottom, plot, bottomProbe!.labels, side === 'bottom' ? room : NO_ROOM, ctx)
+  const x = domains.bottom.kind === 'linear' ? bottomLinear(domains.bottom, plot, bottomProbe!.labels, side === 'bottom' ? room : NO_ROOM, ctx, domains.left.kind === 'linear')
     : domains.bottom.kind === 'time' ? bottomTime(domains.bottom, plot, ctx) : bottomBand!;
   return { x, y, room };
 }
