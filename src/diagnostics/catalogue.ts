@@ -74,6 +74,7 @@ export const CATALOGUE = {
   'derive.negative-area': 'error',
   'derive.fit-not-possible': 'warning',
   'derive.too-many-dots': 'error',
+  'derive.sum-not-meaningful': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',

@@ -5,7 +5,10 @@ import { isOrdered, refOf, type Field } from '../fields/types.js';
 import type { Planned, PlanInput } from './types.js';
 
 /** A dot plot's plan: its key, its one or two values (a dumbbell), their order and how rows combine. */
-export type DotPlan = DotQuery;
+export interface DotPlan extends DotQuery {
+  /** Whether a value's zero is arbitrary (°C, years): then sums of several rows mean nothing. */
+  arbitraryZero: boolean;
+}
 
 function chooseOrder(input: PlanInput, key: Field, values: readonly Field[]): { order: DotPlan['order']; decision: Decision; problem?: Diagnostic } {
   const order = input.brief.order;
@@ -55,5 +58,5 @@ export function planDot(input: PlanInput): Outcome<Planned<DotPlan>> {
   ];
   if (values.length === 2) decisions.push({ decision: `a dumbbell per key: a line joins its \`${values[0]!.name}\` and \`${values[1]!.name}\` dots, told apart by colour`, rule: 'two values of one measure per key: both are read by position, and the line\'s length shows their difference' });
   if (brief.aggregate !== 'sum') decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });
-  return success({ plan: { key: refOf(key), values: values.map(refOf), order, aggregate: brief.aggregate }, decisions });
+  return success({ plan: { key: refOf(key), values: values.map(refOf), order, aggregate: brief.aggregate, arbitraryZero: values.some((v) => v.zero === 'arbitrary') }, decisions });
 }

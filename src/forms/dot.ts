@@ -48,6 +48,12 @@ function domainsOf(derived: DerivedDots, ctx: LayoutContext): CartesianDomains {
 function deriveDots(table: Table, plan: DotPlan, ctx: LayoutContext): Outcome<DerivedDots> {
   const { rows, diagnostics } = deriveDotRows(table, plan);
   if (rows.length === 0) return failure([...diagnostics, diagnostic('derive.no-rows', 'no row has both a key and a usable value, so there is nothing to draw', { file: table.origin.file, hint: 'check that the key and value columns are the ones you meant', expected: 'at least one complete row' })]);
+  // A sum of temperatures or years means nothing: rows sharing a key are refused rather than summed.
+  if (plan.arbitraryZero && plan.aggregate === 'sum' && diagnostics.some((d) => d.code === 'derive.aggregated')) {
+    return failure([diagnostic('derive.sum-not-meaningful', `some keys of \`${plan.key.name}\` have several rows, and their values, whose zero is arbitrary, cannot be summed meaningfully`, {
+      field: plan.key.name, path: '/aggregate', found: 'sum', expected: 'mean, max or min', hint: 'set `aggregate: mean` (or max or min), or give one row per key',
+    })]);
+  }
   const derived = { plan, rows };
   const { plot } = plotFor(domainsOf(derived, ctx), [], ctx).box;
   const fits = Math.floor(plot.height / MIN_ROW_PX);

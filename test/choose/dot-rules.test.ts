@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { DotPlan } from '../../src/forms/dot-plan.js';
+import { dumpScene } from '../../src/scene/dump.js';
 import { renderRows } from '../helpers.js';
 
 const towns = [{ town: 'Alder', jan: 2.5, jul: 17.1 }, { town: 'Birch', jan: -1.8, jul: 19.0 }, { town: 'Cedar', jan: 4.2, jul: 15.4 }];
@@ -50,6 +51,17 @@ describe('rules for dot plots (compare)', () => {
     expect(dots.choice!.form).toBe('dot');
     const bars = await renderRows({ intent: 'compare', keys: 'town', values: 'jul', baseline: 'fit', fields: { jul: { unit: '°C' } } }, towns);
     expect(bars.diagnostics[0]).toMatchObject({ code: 'choice.baseline-fit-refused', path: '/baseline' });
+  });
+
+  it('refuses to sum several rows of a key whose values have an arbitrary zero, and averages them when asked', async () => {
+    const twice = [...towns, { town: 'Alder', jan: 3.5, jul: 18.1 }];
+    const fields = { jul: { unit: '°C', zero: 'arbitrary' } };
+    const summed = await renderRows({ intent: 'compare', keys: 'town', values: 'jul', fields }, twice);
+    expect(summed.diagnostics.find((d) => d.code === 'derive.sum-not-meaningful')).toMatchObject({ path: '/aggregate', field: 'town' });
+    const mean = await renderRows({ intent: 'compare', keys: 'town', values: 'jul', fields, aggregate: 'mean' }, twice);
+    expect(mean.ok).toBe(true);
+    const alder = dumpScene(mean.scene!).marks.find((m) => m.role === 'point' && m.datum!.town === 'Alder')!;
+    expect(alder.datum!.jul).toBeCloseTo(17.6, 12);
   });
 
   it('refuses `order: cluster`', async () => {
