@@ -49,6 +49,7 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     shape: raw.shape as string | undefined,
     area: raw.area as string | undefined,
     after: raw.after as string | undefined,
+    fit: raw.fit as ResolvedBrief['fit'],
   };
 }
 

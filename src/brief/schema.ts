@@ -99,6 +99,7 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
       shape: { type: 'string', minLength: 1, description: 'For intent correlation: the column coded by shape.' },
       area: { type: 'string', minLength: 1, description: 'For intent correlation: the column whose value each circle\'s area shows (`size` is the frame).' },
       after: { type: 'string', minLength: 1, description: 'For intent schedule: the column naming each task\'s predecessor.' },
+      fit: { type: 'string', enum: ['linear'], description: 'For intent correlation: draw a least-squares line through the points.' },
     },
   };
 }

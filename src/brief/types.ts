@@ -14,6 +14,7 @@ export const FORM_NAMES = [
   'bar', 'grouped-bar', 'stacked-bar', 'normalized-bar', 'line', 'index-line', 'slope', 'gantt',
   'scatter', 'histogram', 'strip', 'box', 'heatmap', 'scatter-matrix', 'parallel', 'stream', 'radial-bar', 'donut',
   'change-bar',
+  'dot',
 ] as const;
 export type FormName = (typeof FORM_NAMES)[number];
 
@@ -114,6 +115,8 @@ export interface ResolvedBrief {
   area: string | undefined;
   /** For intent schedule: the column naming each task's predecessor (drawn as a dependency). Default: undefined. */
   after: string | undefined;
+  /** For intent correlation: a fitted line drawn through the points (`linear`: least squares). Default: undefined (none). */
+  fit: 'linear' | undefined;
 }
 
 /** The intents and forms a brief may name: those the rule table answers and the registry draws. */

@@ -7,6 +7,7 @@ import { checkTrendShape } from './trend-checks.js';
 import { checkScheduleShape } from './schedule-checks.js';
 import { checkShiftShape } from './shift-checks.js';
 import type { Candidate } from './types.js';
+import { checkCorrelationShape } from './correlation-checks.js';
 
 function columnsOfType(fields: Fields, types: string[]): string[] {
   return fields.all.filter((f) => types.includes(f.type)).map((f) => f.name);
@@ -51,6 +52,7 @@ export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: Resolv
   change: checkTrendShape,
   shift: checkShiftShape,
   schedule: checkScheduleShape,
+  correlation: checkCorrelationShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */
@@ -62,6 +64,7 @@ export const INTENT_OPTIONS = {
   shape: ['correlation'],
   area: ['correlation'],
   after: ['schedule'],
+  fit: ['correlation'],
 } as const satisfies Partial<Record<keyof ResolvedBrief, readonly Intent[]>>;
 
 /** An intent-specific option given to an intent that does not use it is refused, not silently dropped. */
@@ -112,7 +115,7 @@ function checkPercentOfFractions(value: Fields['values'][number]): Diagnostic[] 
  * is read too, so one `check` reports them with data problems.
  */
 export function checkBriefRules(brief: ResolvedBrief, candidates: readonly Candidate[], lenient: boolean): { problems: Diagnostic[] } {
-  const names = brief.form ? [brief.form] : formsForIntent(brief.intent);
+  const names = brief.form ? [brief.form] : formsForIntent(brief.intent, brief);
   const forms = candidates.filter((c) => names.includes(c.name));
   const checked = forms.map((f) => applyHardRules({ traits: f.traits, form: f.noun, brief, fields: undefined }, lenient, (r) => r.briefOnly));
   // A brief-only rule is refused early only when every form the brief may get breaks it.

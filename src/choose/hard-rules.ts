@@ -91,7 +91,7 @@ export const HARD_RULES: readonly HardRule[] = [
     id: 'one-value-per-axis',
     briefOnly: false,
     binds: (c) => !c.traits.axisPerValue,
-    broken: (c) => (c.fields?.values.length ?? 0) > 1,
+    broken: (c) => (c.fields?.values.length ?? 0) > (c.traits.sharedAxisValues ?? 1),
     refusal: (c) => diagnostic('choice.too-many-values', `${c.fields!.values.length} values on one value axis: a chart shows one value per axis`, {
       path: '/values', found: c.fields!.values.map((v) => v.name).join(', '), expected: 'one value column',
       hint: `write one brief per value and show them as aligned panels${offer('change', ', or index them to a common base (intent: change)')}`,

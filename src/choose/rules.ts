@@ -12,13 +12,34 @@ export interface Rule {
   when?(brief: ResolvedBrief): boolean;
   /** The reason, as a reader would accept it. */
   why: string;
+  /** Whether a brief could match this row, judged from the brief alone (before the data is read). Default: always. */
+  briefMay?(brief: ResolvedBrief): boolean;
 }
+
+/** Whether the brief marks one of its values `zero: arbitrary`, or gives two values: what may lead compare to dots. */
+const mayBeDots = (b: ResolvedBrief) => b.values.length === 2 || b.values.some((v) => Object.hasOwn(b.fields, v) && b.fields[v]!.zero === 'arbitrary');
 
 /**
  * The rule table, as data: the first rule whose intent and data shape match chooses the form.
  * Adding a form means adding a row here, one file in src/forms/ and its registry line.
  */
 export const RULES: readonly Rule[] = [
+  {
+    id: 'compare.arbitrary-zero',
+    intent: 'compare',
+    form: 'dot',
+    applies: (f) => f.keys.length === 1 && f.values.length >= 1 && f.values.length <= 2 && f.values.some((v) => v.zero === 'arbitrary'),
+    briefMay: mayBeDots,
+    why: 'the value\'s zero is arbitrary (`zero: arbitrary`), so a bar\'s length from zero would mean nothing: dots on an aligned scale compare positions, which need no zero (Cleveland 1985)',
+  },
+  {
+    id: 'compare.paired-values',
+    intent: 'compare',
+    form: 'dot',
+    applies: (f) => f.keys.length === 1 && f.values.length === 2,
+    briefMay: mayBeDots,
+    why: 'two values of one measure per key (e.g. before and after): a dumbbell joins each key\'s two dots on one aligned scale, so both the values and their difference are read by position (Cleveland 1985)',
+  },
   {
     id: 'compare.categorical-key',
     intent: 'compare',
@@ -69,6 +90,13 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length >= 1,
     why: 'tasks with a start and an end: a Gantt chart draws each as a bar on one time axis, so durations, order and overlaps are seen together',
   },
+  {
+    id: 'correlation.two-values',
+    intent: 'correlation',
+    form: 'scatter',
+    applies: (f) => f.values.length === 2,
+    why: 'two quantitative values: a scatter plot puts each row at its x and y positions, the most accurately read encoding for how two values go together (Cleveland & McGill 1984)',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */
@@ -81,7 +109,7 @@ export function supportedIntents(): Intent[] {
   return [...new Set(RULES.map((r) => r.intent))];
 }
 
-/** The forms the rules may lead an intent to. */
-export function formsForIntent(intent: Intent): FormName[] {
-  return [...new Set(RULES.filter((r) => r.intent === intent).map((r) => r.form))];
+/** The forms the rules may lead an intent to (for this brief, when given, judged before the data is read). */
+export function formsForIntent(intent: Intent, brief?: ResolvedBrief): FormName[] {
+  return [...new Set(RULES.filter((r) => r.intent === intent && (!brief || !r.briefMay || r.briefMay(brief))).map((r) => r.form))];
 }

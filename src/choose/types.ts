@@ -26,6 +26,8 @@ export interface FormTraits {
   coloursCategories: boolean;
   /** Each value gets its own axis (scatterplot matrix, parallel coordinates), so several values are no mixing of scales. */
   axisPerValue: boolean;
+  /** How many values of one measure the marks may show on one shared axis (a dumbbell's before and after). Default: 1. */
+  sharedAxisValues?: number;
 }
 
 /** What a form's plan may look at. */

@@ -64,6 +64,10 @@ export const CATALOGUE = {
   'choice.too-many-colours': 'error',
   'choice.too-many-series': 'warning',
   'choice.period-change-one-series': 'error',
+  'choice.needs-two-values': 'error',
+  'choice.not-categorical': 'error',
+  'choice.too-many-shapes': 'error',
+  'choice.dumbbell-units-differ': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -88,6 +92,10 @@ export const CATALOGUE = {
   'derive.task-duplicate': 'error',
   'derive.predecessor-unknown': 'error',
   'derive.predecessor-overlap': 'warning',
+  'derive.negative-area': 'error',
+  'derive.fit-not-possible': 'warning',
+  'derive.too-many-dots': 'error',
+  'derive.sum-not-meaningful': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',
@@ -96,6 +104,7 @@ export const CATALOGUE = {
   'layout.text-off-canvas': 'warning',
   'layout.text-overlap': 'warning',
   'layout.labels-unplaced': 'warning',
+  'layout.overplotted': 'warning',
   // output
   'output.write-failed': 'error',
   'output.raster-failed': 'error',

@@ -87,6 +87,7 @@ export function inferFields(table: Table, brief: ResolvedBrief): Outcome<Fields>
     return {
       name: column.name, label: hint?.label ?? readableName(column.name), type, role,
       unit: hint?.unit ?? column.unit, format: hint?.format, notation: brief.notation, additive: hint?.additive ?? isAdditiveUnit(hint?.unit ?? column.unit), levels: levelsOf(column, type, hint, problems), column,
+      ...(hint?.zero === 'arbitrary' ? { zero: hint.zero } : {}),
     };
   });
   if (hasErrors(problems)) return failure(problems);

@@ -20,6 +20,8 @@ export interface Field {
   /** For categorical, ordinal and cyclic fields: the levels, in their meaningful order (first appearance for categorical). */
   levels: string[];
   column: Column;
+  /** `arbitrary` when the brief says the field's zero means nothing (`fields.<col>.zero`). Default: absent. */
+  zero?: 'arbitrary';
 }
 
 /** A field as plans refer to it: its name and presentation, never its column of data. */

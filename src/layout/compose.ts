@@ -7,7 +7,8 @@ import type { ValueTicks } from './axis.js';
 import { drawBottomBandAxis, drawLeftBandAxis, drawLinearAxis, drawTimeAxis, rule, type DrawnAxis } from './axes.js';
 import { checkScene, overlappingBoxes } from './checks.js';
 import { layoutFrame } from './frame.js';
-import { layoutLegend, type LegendLayout, type LegendSpec } from './legend.js';
+import type { LegendLayout, LegendSpec } from './legend.js';
+import { layoutLegends } from './legends.js';
 import { placeLabels } from './place-labels.js';
 import { memoized, ticksFor, type CartesianDomains, type FormMarks, type FormWords, type LabelRoom, type LayoutContext, type LinearChannel, type PlotArea, type ScaleProbe, type TimeChannel } from './kit-types.js';
 import { plotBox, tickCount, type PlotBox } from './plot-box.js';
@@ -49,9 +50,18 @@ function bottomRange(plot: Box, probeLabels: readonly string[], room: LabelRoom,
 }
 
 /** The bottom axis's linear scale, inset so the end tick labels and the form's labels stay inside the plot's width. */
-function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], room: LabelRoom, ctx: LayoutContext): LinearScale {
-  const [rangeLeft, rangeRight] = bottomRange(plot, probeLabels, room, ctx);
-  const vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel);
+function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], room: LabelRoom, ctx: LayoutContext, clearCorner = false): LinearScale {
+  let [rangeLeft, rangeRight] = bottomRange(plot, probeLabels, room, ctx);
+  let vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel);
+  // Under a linear left axis, whose lowest label sits at the corner, the first label drawn starts
+  // no further left than the plot: the probe's first label may be narrower than the one drawn.
+  const { tick } = ctx.style.text;
+  for (let i = 0; clearCorner && i < 3; i++) {
+    const start = rangeLeft - ctx.measure.width(vt.labels[0] ?? '', tick.size, tick.weight) / 2;
+    if (start >= plot.x - 1e-9) break;
+    rangeLeft += plot.x - start;
+    vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel);
+  }
   return linearScale(vt, [rangeLeft, rangeRight]);
 }
 
@@ -76,7 +86,7 @@ function scalesWith(domains: CartesianDomains, box: PlotBox, bottomProbe: ValueT
   const leftBand: BandScale | undefined = left.kind === 'band' ? left.band : undefined;
   const y = domains.left.kind === 'linear' ? leftLinear(domains.left, plot, side === 'left' ? room : NO_ROOM, ctx)
     : domains.left.kind === 'time' ? timeScale(domains.left.extent, [plot.y + plot.height, plot.y], tickCount(plot.height, 'vertical')) : leftBand!;
-  const x = domains.bottom.kind === 'linear' ? bottomLinear(domains.bottom, plot, bottomProbe!.labels, side === 'bottom' ? room : NO_ROOM, ctx)
+  const x = domains.bottom.kind === 'linear' ? bottomLinear(domains.bottom, plot, bottomProbe!.labels, side === 'bottom' ? room : NO_ROOM, ctx, domains.left.kind === 'linear')
     : domains.bottom.kind === 'time' ? bottomTime(domains.bottom, plot, ctx) : bottomBand!;
   return { x, y, room };
 }
@@ -133,15 +143,16 @@ const LEGEND_TOP_SHARE = 0.25;
 const LEGEND_RIGHT_SHARE = 0.3;
 
 /** Lays out a form's legend and the body it leaves for the plot and axes. */
-export function placeLegend(spec: LegendSpec | undefined, body: Box, ctx: LayoutContext): { body: Box; legend?: LegendLayout } {
-  if (!spec) return { body };
+export function placeLegend(spec: LegendSpec | LegendSpec[] | undefined, body: Box, ctx: LayoutContext): { body: Box; legend?: LegendLayout } {
+  const specs = spec === undefined ? [] : Array.isArray(spec) ? spec : [spec];
+  if (specs.length === 0) return { body };
   const { style, measure } = ctx;
   const gap = style.spacing.blockGap;
-  const top = layoutLegend(spec, { x: body.x, y: body.y, width: body.width, placement: 'top' }, style, measure);
+  const top = layoutLegends(specs, { x: body.x, y: body.y, width: body.width, placement: 'top' }, style, measure);
   if (top.height <= body.height * LEGEND_TOP_SHARE) return { legend: top, body: { ...body, y: body.y + top.height + gap, height: Math.max(0, body.height - top.height - gap) } };
   const width = body.width * LEGEND_RIGHT_SHARE;
-  const probe = layoutLegend(spec, { x: 0, y: body.y, width, placement: 'right' }, style, measure);
-  const right = layoutLegend(spec, { x: body.x + body.width - probe.width, y: body.y, width: probe.width, placement: 'right' }, style, measure);
+  const probe = layoutLegends(specs, { x: 0, y: body.y, width, placement: 'right' }, style, measure);
+  const right = layoutLegends(specs, { x: body.x + body.width - probe.width, y: body.y, width: probe.width, placement: 'right' }, style, measure);
   return { legend: right, body: { ...body, width: Math.max(0, body.width - right.width - gap) } };
 }
 
@@ -183,7 +194,7 @@ export function plotFor(domains: CartesianDomains, notes: string[], ctx: LayoutC
  * of every composition. The frame depends only on its notes within one render, so it is laid out
  * once for planning and drawing.
  */
-export function frameFor(legendSpec: LegendSpec | undefined, notes: string[], ctx: LayoutContext): Omit<PlotLayout, 'box'> {
+export function frameFor(legendSpec: LegendSpec | LegendSpec[] | undefined, notes: string[], ctx: LayoutContext): Omit<PlotLayout, 'box'> {
   const { brief, style, measure } = ctx;
   const frame = memoized(ctx, `frame\u0000${brief.size.width}\u0000${brief.size.height}\u0000${notes.join('\u0000')}`, () => layoutFrame({ title: brief.title, subtitle: brief.subtitle, source: brief.source, notes }, style, brief.size, measure));
   const { body, legend } = placeLegend(legendSpec, frame.body, ctx);
@@ -198,7 +209,7 @@ export function sceneOf(form: string, words: FormWords, children: SceneNode[], p
     form, width: brief.size.width, height: brief.size.height, background: style.background,
     title: brief.title ?? words.title, description: brief.description ?? words.description,
     root: { kind: 'group', id: 'chart', role: 'chart', children }, axes: first.axes, plot: first.plot,
-    panels, legends: legend ? [legend.info] : [],
+    panels, legends: legend ? legend.infos ?? [legend.info] : [],
   };
 }
 

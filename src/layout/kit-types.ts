@@ -78,8 +78,8 @@ export interface CartesianDomains {
   first: 'left' | 'bottom';
   /** Draw a zero line across the plot at 0 of this side's linear scale (length-coded marks). */
   zeroLine?: 'left' | 'bottom';
-  /** A legend the form's colours, shapes or sizes need (the composer places it above or beside the plot). */
-  legend?: LegendSpec;
+  /** A legend (or several) the form's colours, shapes or sizes need (the composer places it above or beside the plot). */
+  legend?: LegendSpec | LegendSpec[];
   /** Room to keep right of the plot, in px, for labels at the marks' ends (e.g. a line's name at its last point). */
   rightGutter?: number;
 }

@@ -26,6 +26,8 @@ export interface LegendPlace {
 export interface LegendLayout {
   nodes: SceneNode[];
   info: LegendInfo;
+  /** Every legend's info when several are laid out together (see legends.ts). Default: just `info`. */
+  infos?: LegendInfo[];
   width: number;
   height: number;
 }
@@ -57,8 +59,9 @@ export function sizeLegendValues(maxValue: number, maxRadius: number): number[] 
   return [...new Set(values)].filter((v) => maxRadius * Math.sqrt(v / maxValue) >= MIN_RADIUS);
 }
 
-/** The label of a class: "10–20"; "−10 to 0" when a bound is negative, where a dash would read as a minus. */
+/** The label of a class: "10–20" (one value alone when the class holds one); "−10 to 0" when a bound is negative, where a dash would read as a minus. */
 function binLabel(from: number, to: number, f: (n: number) => string): string {
+  if (from === to) return f(from);
   return from < 0 || to < 0 ? `${f(from)} to ${f(to)}` : `${f(from)}–${f(to)}`;
 }
 

@@ -20,6 +20,8 @@ export interface DumpMark {
   series?: Datum;
   /** For rasters: the grid of data cells drawn. */
   grid?: { columns: number; rows: number };
+  /** For points: the shape drawn (a shape other than a circle also carries cx, cy and its equal-area r). */
+  shape?: string;
 }
 
 /** A text in the scene dump: its measured box (top-left, width, height). */
@@ -69,8 +71,9 @@ function flatten(node: SceneNode, marks: DumpMark[], texts: DumpText[]): void {
       role: node.role, kind: 'path', d: pathData(node.commands), ...(node.fill ? { fill: node.fill } : {}), ...paintOf(node), ...datum,
       ...(node.points ? { points: node.points.map((p) => ({ x: round(p.x), y: round(p.y), ...(p.datum ? { datum: p.datum } : {}) })) } : {}),
       ...(node.series ? { series: node.series } : {}),
+      ...(node.at ? { cx: round(node.at.cx), cy: round(node.at.cy), r: round(node.at.r) } : {}), ...(node.shape ? { shape: node.shape } : {}),
     }); return;
-    case 'circle': marks.push({ role: node.role, kind: 'circle', cx: round(node.cx), cy: round(node.cy), r: round(node.r), fill: node.fill, ...paintOf(node), ...datum }); return;
+    case 'circle': marks.push({ role: node.role, kind: 'circle', cx: round(node.cx), cy: round(node.cy), r: round(node.r), fill: node.fill, ...(node.shape ? { shape: node.shape } : {}), ...paintOf(node), ...datum }); return;
     case 'image': marks.push({ role: node.role, kind: 'image', ...roundBox(node), ...(node.grid ? { grid: node.grid } : {}) }); return;
   }
 }

@@ -78,6 +78,10 @@ export interface PathNode extends NodeBase, Paint {
   points?: PathPoint[];
   /** The series (or item) a line belongs to. */
   series?: Datum;
+  /** For a point drawn as a shape: its centre and the radius of the circle of equal area. */
+  at?: { cx: number; cy: number; r: number };
+  /** For a point mark: the shape it is drawn as (circle, square, triangle, …). */
+  shape?: string;
 }
 
 export interface CircleNode extends NodeBase, Paint {
@@ -86,6 +90,8 @@ export interface CircleNode extends NodeBase, Paint {
   cy: number;
   r: number;
   fill: string;
+  /** For a point mark: the shape it is drawn as ("circle"). */
+  shape?: string;
 }
 
 export interface TextNode extends NodeBase {

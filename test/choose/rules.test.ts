@@ -85,10 +85,13 @@ describe('rules for the compare intent', () => {
     }
   });
 
-  it('refuses two values on one axis and offers the alternatives', async () => {
-    const r = await renderRows({ intent: 'compare', keys: 'pier', values: ['n', 'm'] }, piers.map((p) => ({ ...p, m: 1 })));
+  it('refuses two values on one bar axis, and three on any axis, and offers the alternatives', async () => {
+    // Two values of one measure per key are a dumbbell (dot form); bars still take one value.
+    const r = await renderRows({ intent: 'compare', keys: 'pier', values: ['n', 'm'], form: 'bar' }, piers.map((p) => ({ ...p, m: 1 })));
     expect(r.diagnostics[0]).toMatchObject({ code: 'choice.too-many-values' });
     expect(r.diagnostics[0]!.hint).toMatch(/panels/);
+    const three = await renderRows({ intent: 'compare', keys: 'pier', values: ['n', 'm', 'k'] }, piers.map((p) => ({ ...p, m: 1, k: 2 })));
+    expect(three.diagnostics[0]).toMatchObject({ code: 'choice.too-many-values' });
   });
 
   it('refuses a text value for bar lengths', async () => {

@@ -1,5 +1,6 @@
 import { expect } from 'vitest';
-import type { DumpText, SceneDump } from '../../src/scene/dump.js';
+import type { SceneDump } from '../../src/scene/dump.js';
+import { checkTexts } from './text-contracts.js';
 
 /** The value axis of a bar chart and a function from value to px along it. */
 function valueAxis(dump: SceneDump) {
@@ -11,11 +12,6 @@ function valueAxis(dump: SceneDump) {
 
 export function bars(dump: SceneDump) {
   return dump.marks.filter((m) => m.role === 'bar');
-}
-
-function overlap(a: DumpText, b: DumpText): boolean {
-  const eps = 0.01;
-  return a.x < b.x + b.width - eps && b.x < a.x + a.width - eps && a.y < b.y + b.height - eps && b.y < a.y + a.height - eps;
 }
 
 /** Perceptual contracts every bar chart must keep, asserted on its scene. */
@@ -41,7 +37,8 @@ export function checkBarContracts(dump: SceneDump, valueName: string, keyName: s
   // Every axis has a non-empty title, and names its field.
   for (const a of dump.axes) expect(a.title.trim()).not.toBe('');
   expect(dump.axes.map((a) => a.field)).toEqual([valueName, keyName]);
-  checkTextsClear(dump);
+  // No text outside the canvas, and no two texts overlap.
+  checkTexts(dump);
   // Every mark lies inside the canvas.
   for (const m of dump.marks.filter((x) => x.kind === 'rect')) {
     expect(m.x!).toBeGreaterThanOrEqual(0);
@@ -51,18 +48,5 @@ export function checkBarContracts(dump: SceneDump, valueName: string, keyName: s
 }
 
 /** No text outside the canvas, and no two texts overlap: a contract of every chart. */
-export function checkTextsClear(dump: SceneDump) {
-  for (const t of dump.texts) {
-    expect(t.x).toBeGreaterThanOrEqual(0);
-    expect(t.y).toBeGreaterThanOrEqual(0);
-    expect(t.x + t.width).toBeLessThanOrEqual(dump.width);
-    expect(t.y + t.height).toBeLessThanOrEqual(dump.height);
-  }
-  for (let i = 0; i < dump.texts.length; i++) {
-    for (let j = i + 1; j < dump.texts.length; j++) {
-      const [a, b] = [dump.texts[i]!, dump.texts[j]!];
-      if (overlap(a, b)) throw new Error(`texts overlap: ${JSON.stringify(a.text)} (${a.role}) and ${JSON.stringify(b.text)} (${b.role})`);
-    }
-  }
-}
+export const checkTextsClear = checkTexts;
 
