@@ -26,6 +26,10 @@ export interface FormTraits {
   coloursCategories: boolean;
   /** Each value gets its own axis (scatterplot matrix, parallel coordinates), so several values are no mixing of scales. */
   axisPerValue: boolean;
+  /** Colours beyond what the palette tells apart are folded into one neutral "Other" (normalized bars), so the colour rule is kept by folding. Default: false. */
+  foldsColours?: boolean;
+  /** Radial marks are the parts of one whole (a donut): the radial rule's one exception, for 2 or 3 parts pinned by the brief. Default: false. */
+  partsOfWhole?: boolean;
 }
 
 /** What a form's plan may look at. */

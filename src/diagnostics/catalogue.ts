@@ -59,6 +59,8 @@ export const CATALOGUE = {
   'choice.line-on-categorical': 'error',
   'choice.radial-not-cyclic': 'error',
   'choice.too-many-colours': 'error',
+  'choice.aggregate-not-additive': 'error',
+  'choice.donut-too-many-parts': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -67,6 +69,10 @@ export const CATALOGUE = {
   'derive.too-many-ordered-bars': 'error',
   'derive.uneven-dates': 'warning',
   'derive.not-finite': 'error',
+  'derive.negative-part': 'error',
+  'derive.parts-folded': 'warning',
+  'derive.zero-total': 'warning',
+  'derive.whole-is-zero': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',

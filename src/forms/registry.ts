@@ -1,9 +1,12 @@
 import type { FormName } from '../brief/types.js';
 import { BAR } from './bar.js';
+import { DONUT } from './donut.js';
+import { NORMALIZED_BAR } from './normalized-bar.js';
+import { STACKED_BAR } from './stacked-bar.js';
 import type { AnyForm } from './types.js';
 
 /** The forms chartwright draws: one entry per form file in src/forms/. */
-export const FORMS: readonly AnyForm[] = [BAR];
+export const FORMS: readonly AnyForm[] = [BAR, STACKED_BAR, NORMALIZED_BAR, DONUT];
 
 /** The form of a name, if it is drawn. */
 export function formNamed(name: FormName | string): AnyForm | undefined {
