@@ -113,8 +113,8 @@ export function deriveStacks<Q extends StackQuery>(table: Table, query: Q): Outc
   problems.push(...notFinite(stacked, query));
   if (problems.some((p) => p.severity === 'error')) return failure(problems);
   const { kept, empty, diagnostics } = splitEmpty(stacked, query);
-  problems.push(...diagnostics);
   if (!kept.length) return failure([...problems, wholeIsZero(query)]);
+  problems.push(...diagnostics);
   const keyOrder = new Map(grouped.groups.map((g) => [g.labels[0]!, g.sortKeys[0]!]));
   const stacks = orderStacks(query.normalized ? normalizeStacks(kept) : kept, query.order, folded.parts, (g) => keyOrder.get(g)!);
   return success({ query, stacks, parts: folded.parts, folded: folded.folded, other: folded.other, empty, valueName: query.value?.name ?? 'count' }, problems);

@@ -1,0 +1,97 @@
+import { expect } from 'vitest';
+import type { DumpMark, DumpText, SceneDump } from '../../src/scene/dump.js';
+
+/** The segments of a stacked chart, grouped by bar (the group's label), in drawing order. */
+export function segmentsByBar(dump: SceneDump, group: string): Map<string, DumpMark[]> {
+  const out = new Map<string, DumpMark[]>();
+  for (const m of dump.marks.filter((x) => x.role === 'segment')) {
+    const key = String(m.datum![group]);
+    out.set(key, [...(out.get(key) ?? []), m]);
+  }
+  return out;
+}
+
+/** The value axis: its orientation and a map from value to px. */
+function valueAxis(dump: SceneDump) {
+  const axis = dump.axes.find((a) => a.scale === 'linear')!;
+  const [d0, d1] = axis.domain as number[];
+  const [r0, r1] = axis.range;
+  return { vertical: axis.orient === 'left', px: (v: number) => r0 + ((v - d0!) * (r1 - r0)) / (d1! - d0!), perUnit: Math.abs(r1 - r0) / (d1! - d0!) };
+}
+
+/** Where a segment starts and ends along the value axis (from the baseline outwards), in px from the zero. */
+function extentAlong(m: DumpMark, vertical: boolean, zero: number): [number, number] {
+  return vertical ? [zero - (m.y! + m.height!), zero - m.y!] : [m.x! - zero, m.x! + m.width! - zero];
+}
+
+function overlap(a: DumpText, b: DumpText): boolean {
+  const eps = 0.01;
+  return a.x < b.x + b.width - eps && b.x < a.x + a.width - eps && a.y < b.y + b.height - eps && b.y < a.y + a.height - eps;
+}
+
+/** No two texts overlap, and every text lies on the canvas. */
+export function checkTexts(dump: SceneDump): void {
+  for (const t of dump.texts) {
+    expect(t.x).toBeGreaterThanOrEqual(0);
+    expect(t.y).toBeGreaterThanOrEqual(0);
+    expect(t.x + t.width).toBeLessThanOrEqual(dump.width);
+    expect(t.y + t.height).toBeLessThanOrEqual(dump.height);
+  }
+  for (let i = 0; i < dump.texts.length; i++) {
+    for (let j = i + 1; j < dump.texts.length; j++) {
+      const [a, b] = [dump.texts[i]!, dump.texts[j]!];
+      if (overlap(a, b)) throw new Error(`texts overlap: ${JSON.stringify(a.text)} (${a.role}) and ${JSON.stringify(b.text)} (${b.role})`);
+    }
+  }
+}
+
+/**
+ * Perceptual contracts of a stacked or normalized bar chart, on its scene: each bar's segments
+ * are contiguous from the zero baseline; its parts come in one order in every bar; the largest
+ * part overall is on the baseline; stack heights are proportional to totals (absolute) or all
+ * reach 100 % within 0.5 px with shares summing to 1 within 1e-9 (normalized); no text overlaps.
+ */
+export function checkStackContracts(dump: SceneDump, opts: { group: string; part: string; value: string; normalized: boolean }): void {
+  const { vertical, px, perUnit } = valueAxis(dump);
+  const zero = px(0);
+  const bars = segmentsByBar(dump, opts.group);
+  expect(bars.size).toBeGreaterThan(0);
+  const partTotals = new Map<string, number>();
+  const heights: number[] = [];
+  for (const [, segs] of bars) {
+    const spans = segs.map((m) => extentAlong(m, vertical, zero)).sort((a, b) => a[0] - b[0]);
+    // Contiguous from the baseline: the first starts at zero, each next starts where the last
+    // ended (the dump rounds each coordinate to 1/1000 px, so a shared edge may differ by that).
+    expect(Math.abs(spans[0]![0])).toBeLessThanOrEqual(0.5);
+    for (let i = 1; i < spans.length; i++) expect(Math.abs(spans[i]![0] - spans[i - 1]![1])).toBeLessThanOrEqual(0.0011);
+    const height = spans[spans.length - 1]![1];
+    heights.push(height);
+    const total = segs.reduce((s, m) => s + (m.datum![opts.value] as number), 0);
+    if (opts.normalized) {
+      // Every bar reaches 100 %: the same full height within 0.5 px; its shares sum to 1 within 1e-9.
+      expect(Math.abs(height - (px(1) - zero) * (vertical ? -1 : 1))).toBeLessThanOrEqual(0.5);
+      expect(Math.abs(segs.reduce((s, m) => s + (m.datum!.share as number), 0) - 1)).toBeLessThanOrEqual(1e-9);
+    } else {
+      // Stack height ∝ total: the same px per unit for every bar, within 0.5 px.
+      expect(Math.abs(height - total * perUnit)).toBeLessThanOrEqual(0.5);
+    }
+    // Parts come in one order in every bar: drawn from the baseline up in a consistent sequence.
+    for (const m of segs) partTotals.set(String(m.datum![opts.part]), (partTotals.get(String(m.datum![opts.part])) ?? 0) + (m.datum![opts.value] as number));
+  }
+  // The one order: largest overall total first (ties by label), the folded "Other" last.
+  const isOther = (p: string) => /^Other( \(\d+\))?$/.test(p);
+  const order = [...partTotals].sort((a, b) => Number(isOther(a[0])) - Number(isOther(b[0])) || b[1] - a[1] || (a[0] < b[0] ? -1 : 1)).map(([p]) => p);
+  for (const [, segs] of bars) {
+    const drawn = segs.map((m) => ({ part: String(m.datum![opts.part]), at: extentAlong(m, vertical, zero)[0] })).sort((a, b) => a.at - b.at).map((s) => s.part);
+    const ranks = drawn.map((p) => order.indexOf(p));
+    expect(ranks).toEqual([...ranks].sort((a, b) => a - b));
+  }
+  // The largest part overall sits on the baseline (the first part of every bar that has it).
+  const largest = order[0]!;
+  for (const [, segs] of bars) {
+    const base = segs.find((m) => Math.abs(extentAlong(m, vertical, zero)[0]) <= 0.5)!;
+    if (segs.some((m) => m.datum![opts.part] === largest)) expect(base.datum![opts.part]).toBe(largest);
+  }
+  expect(heights.length).toBe(bars.size);
+  checkTexts(dump);
+}
