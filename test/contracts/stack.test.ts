@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { dumpScene } from '../../src/scene/dump.js';
-import { renderRows } from '../helpers.js';
+import type { StackPlan } from '../../src/forms/stack-plan.js';
+import { demoBriefs, renderDemo, renderRows } from '../helpers.js';
 import { checkStackContracts, checkTexts, segmentsByBar } from './stack-contracts.js';
 
 /** Visits by site and kind: uneven totals, parts in a different order in each site. */
@@ -131,4 +132,16 @@ describe('the stack contracts can fail (a check that cannot fail is no check)', 
     [a!.datum!.kind, b!.datum!.kind] = [b!.datum!.kind!, a!.datum!.kind!];
     expect(() => checkStackContracts(swapped, opts(true))).toThrow();
   });
+});
+
+describe('stack contracts on the gallery\'s stacked and normalized charts', () => {
+  for (const file of demoBriefs()) {
+    it(`${file.split('/').pop()} keeps them, if it stacks`, async () => {
+      const { result, dump } = await renderDemo(file);
+      const plan = result.choice!.plan as { kind?: string; stacks?: StackPlan } & Partial<StackPlan>;
+      const stack = result.choice!.form === 'stacked-bar' ? (plan as StackPlan) : plan.kind === 'stacks' ? plan.stacks! : undefined;
+      if (!stack) return;
+      checkStackContracts(dump, { group: stack.group.name, part: stack.part.name, value: stack.value!.name, normalized: stack.normalized });
+    });
+  }
 });
