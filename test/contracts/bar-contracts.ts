@@ -18,6 +18,22 @@ function overlap(a: DumpText, b: DumpText): boolean {
   return a.x < b.x + b.width - eps && b.x < a.x + a.width - eps && a.y < b.y + b.height - eps && b.y < a.y + a.height - eps;
 }
 
+/** No text lies outside the canvas, and no two texts overlap. */
+export function checkTexts(dump: SceneDump): void {
+  for (const t of dump.texts) {
+    expect(t.x).toBeGreaterThanOrEqual(0);
+    expect(t.y).toBeGreaterThanOrEqual(0);
+    expect(t.x + t.width).toBeLessThanOrEqual(dump.width);
+    expect(t.y + t.height).toBeLessThanOrEqual(dump.height);
+  }
+  for (let i = 0; i < dump.texts.length; i++) {
+    for (let j = i + 1; j < dump.texts.length; j++) {
+      const [a, b] = [dump.texts[i]!, dump.texts[j]!];
+      if (overlap(a, b)) throw new Error(`texts overlap: ${JSON.stringify(a.text)} (${a.role}) and ${JSON.stringify(b.text)} (${b.role})`);
+    }
+  }
+}
+
 /** Perceptual contracts every bar chart must keep, asserted on its scene. */
 export function checkBarContracts(dump: SceneDump, valueName: string, keyName: string) {
   const vertical = dump.axes[0]!.orient === 'left';
@@ -42,18 +58,7 @@ export function checkBarContracts(dump: SceneDump, valueName: string, keyName: s
   for (const a of dump.axes) expect(a.title.trim()).not.toBe('');
   expect(dump.axes.map((a) => a.field)).toEqual([valueName, keyName]);
   // No text outside the canvas, and no two texts overlap.
-  for (const t of dump.texts) {
-    expect(t.x).toBeGreaterThanOrEqual(0);
-    expect(t.y).toBeGreaterThanOrEqual(0);
-    expect(t.x + t.width).toBeLessThanOrEqual(dump.width);
-    expect(t.y + t.height).toBeLessThanOrEqual(dump.height);
-  }
-  for (let i = 0; i < dump.texts.length; i++) {
-    for (let j = i + 1; j < dump.texts.length; j++) {
-      const [a, b] = [dump.texts[i]!, dump.texts[j]!];
-      if (overlap(a, b)) throw new Error(`texts overlap: ${JSON.stringify(a.text)} (${a.role}) and ${JSON.stringify(b.text)} (${b.role})`);
-    }
-  }
+  checkTexts(dump);
   // Every mark lies inside the canvas.
   for (const m of dump.marks.filter((x) => x.kind === 'rect')) {
     expect(m.x!).toBeGreaterThanOrEqual(0);

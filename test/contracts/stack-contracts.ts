@@ -1,5 +1,8 @@
 import { expect } from 'vitest';
-import type { DumpMark, DumpText, SceneDump } from '../../src/scene/dump.js';
+import type { DumpMark, SceneDump } from '../../src/scene/dump.js';
+import { checkTexts } from './bar-contracts.js';
+
+export { checkTexts };
 
 /** The segments of a stacked chart, grouped by bar (the group's label), in drawing order. */
 export function segmentsByBar(dump: SceneDump, group: string): Map<string, DumpMark[]> {
@@ -22,27 +25,6 @@ function valueAxis(dump: SceneDump) {
 /** Where a segment starts and ends along the value axis (from the baseline outwards), in px from the zero. */
 function extentAlong(m: DumpMark, vertical: boolean, zero: number): [number, number] {
   return vertical ? [zero - (m.y! + m.height!), zero - m.y!] : [m.x! - zero, m.x! + m.width! - zero];
-}
-
-function overlap(a: DumpText, b: DumpText): boolean {
-  const eps = 0.01;
-  return a.x < b.x + b.width - eps && b.x < a.x + a.width - eps && a.y < b.y + b.height - eps && b.y < a.y + a.height - eps;
-}
-
-/** No two texts overlap, and every text lies on the canvas. */
-export function checkTexts(dump: SceneDump): void {
-  for (const t of dump.texts) {
-    expect(t.x).toBeGreaterThanOrEqual(0);
-    expect(t.y).toBeGreaterThanOrEqual(0);
-    expect(t.x + t.width).toBeLessThanOrEqual(dump.width);
-    expect(t.y + t.height).toBeLessThanOrEqual(dump.height);
-  }
-  for (let i = 0; i < dump.texts.length; i++) {
-    for (let j = i + 1; j < dump.texts.length; j++) {
-      const [a, b] = [dump.texts[i]!, dump.texts[j]!];
-      if (overlap(a, b)) throw new Error(`texts overlap: ${JSON.stringify(a.text)} (${a.role}) and ${JSON.stringify(b.text)} (${b.role})`);
-    }
-  }
 }
 
 /**
