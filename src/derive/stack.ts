@@ -113,3 +113,14 @@ export function orderStacks(stacks: readonly Stack[], order: GroupOrder, parts: 
   if (order === 'key') return [...stacks].sort((a, b) => keyOf(a.group) - keyOf(b.group) || byLabel(a, b));
   return [...stacks];
 }
+
+/**
+ * The `capacity` stacks with the largest totals, in their given order, and the groups left out
+ * (smallest total first dropped; ties by label), for a plot that holds no more bars.
+ */
+export function keepLargest(stacks: readonly Stack[], capacity: number): { kept: Stack[]; dropped: string[] } {
+  if (stacks.length <= capacity) return { kept: [...stacks], dropped: [] };
+  const ranked = [...stacks].sort((a, b) => b.total - a.total || compareText(a.group, b.group));
+  const keep = new Set(ranked.slice(0, Math.max(0, capacity)).map((s) => s.group));
+  return { kept: stacks.filter((s) => keep.has(s.group)), dropped: ranked.slice(Math.max(0, capacity)).map((s) => s.group) };
+}

@@ -4,6 +4,7 @@ import type { FieldRef } from '../fields/types.js';
 import type { Table } from '../table/types.js';
 import { AGGREGATORS } from './aggregate.js';
 import { foldParts } from './fold-parts.js';
+import { fitStacks, type StackCapacity } from './stack-fit.js';
 import { groupRows } from './group.js';
 import { cellsOf, normalizeStacks, orderStacks, partOrder, stackCells, type GroupOrder, type Stack, type StackCell } from './stack.js';
 
@@ -33,6 +34,8 @@ export interface DerivedStacks<Q extends StackQuery = StackQuery> {
   other: string;
   /** Groups left out because their parts sum to zero (a normalized bar cannot show 0 as 100 %). */
   empty: string[];
+  /** Groups left out because the plot holds no more bars (smallest totals first), named in a note. */
+  dropped: string[];
   valueName: string;
 }
 
@@ -93,9 +96,9 @@ function wholeIsZero(query: StackQuery): Diagnostic {
  * The derive stage for stacked and normalized bars: rows → one cell per (group, part), combined
  * by the aggregate; negative parts refused; parts ordered by overall total (the largest on the
  * baseline) and, for normalized bars, folded beyond the part limit; stacks laid end to end,
- * normalized to shares, and ordered.
+ * normalized to shares, ordered, and fitted to the bars the plot holds (`capacityFor`).
  */
-export function deriveStacks<Q extends StackQuery>(table: Table, query: Q): Outcome<DerivedStacks<Q>> {
+export function deriveStacks<Q extends StackQuery>(table: Table, query: Q, capacityFor: StackCapacity<Q> = () => Infinity): Outcome<DerivedStacks<Q>> {
   const grouped = groupRows(table, { keys: [query.group, query.part], value: query.value });
   const problems = [...grouped.diagnostics];
   if (grouped.groups.length === 0) {
@@ -117,5 +120,6 @@ export function deriveStacks<Q extends StackQuery>(table: Table, query: Q): Outc
   problems.push(...diagnostics);
   const keyOrder = new Map(grouped.groups.map((g) => [g.labels[0]!, g.sortKeys[0]!]));
   const stacks = orderStacks(query.normalized ? normalizeStacks(kept) : kept, query.order, folded.parts, (g) => keyOrder.get(g)!);
-  return success({ query, stacks, parts: folded.parts, folded: folded.folded, other: folded.other, empty, valueName: query.value?.name ?? 'count' }, problems);
+  const fitted = fitStacks({ query, stacks, parts: folded.parts, folded: folded.folded, other: folded.other, empty, dropped: [], valueName: query.value?.name ?? 'count' }, capacityFor);
+  return fitted.ok ? success(fitted.value, [...problems, ...fitted.diagnostics]) : failure([...problems, ...fitted.diagnostics]);
 }

@@ -3,6 +3,7 @@ import { deriveStacks } from '../derive/stacks.js';
 import type { CartesianDomains, FormMarks, FormWords, LabelRoom, LayoutContext, PlotArea, ScaleProbe } from '../layout/kit-types.js';
 import type { BarPlan } from './bar-plan.js';
 import { BARS, deriveShares, layoutShares, planShares, type ShareBars } from './share-bars.js';
+import { stackCapacity } from './stack-capacity.js';
 import { layoutStacks, stackDomains } from './stack-layout.js';
 import { planStacks, type StackPlan } from './stack-plan.js';
 import { stackWords, type StackDerived } from './stack-text.js';
@@ -25,7 +26,7 @@ function plan(input: PlanInput): Outcome<Planned<NormalizedPlan>> {
 
 function derive(table: Parameters<typeof deriveStacks>[0], p: NormalizedPlan, ctx: LayoutContext): Outcome<NormalizedDerived> {
   if (p.kind === 'stacks') {
-    const stacks = deriveStacks(table, p.stacks);
+    const stacks = deriveStacks(table, p.stacks, stackCapacity(ctx));
     return stacks.ok ? success({ kind: 'stacks', stacks: stacks.value }, stacks.diagnostics) : stacks;
   }
   const shares = deriveShares(table, p.shares, ctx);

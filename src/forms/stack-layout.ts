@@ -28,12 +28,12 @@ function channels(derived: StackDerived): { group: BandChannel; value: LinearCha
   return { group, value };
 }
 
-function legendSpec(derived: StackDerived, ctx: LayoutContext): LegendSpec {
+export function legendSpec(derived: StackDerived, ctx: LayoutContext): LegendSpec {
   const fills = partFills(derived, ctx);
   return { kind: 'categorical', field: derived.query.part.name, title: derived.query.part.label, entries: derived.parts.map((p) => ({ label: p, fill: fills.get(p)! })) };
 }
 
-function domainsWith(derived: StackDerived, legend: LegendSpec | undefined): CartesianDomains {
+export function domainsWith(derived: StackDerived, legend: LegendSpec | undefined): CartesianDomains {
   const { group, value } = channels(derived);
   const base = derived.query.orientation === 'vertical' ? { left: value, bottom: group, first: 'left' as const, zeroLine: 'left' as const } : { left: group, bottom: value, first: 'bottom' as const, zeroLine: 'bottom' as const };
   return legend ? { ...base, legend } : base;
@@ -99,7 +99,8 @@ function segmentRect(derived: StackDerived, stack: Stack, seg: Segment, area: Pl
   const [low, length] = [Math.min(a, b), Math.abs(b - a)];
   const id = ctx.id('segment', `${stack.group} ${seg.part}`);
   const datum = segmentDatum(derived, stack, seg);
-  const paint = { fill, stroke: ctx.style.background, strokeWidth: 0.75 };
+  // No stroke between segments: a stroke in the page colour would eat into thin segments; neighbouring parts differ in colour.
+  const paint = { fill };
   return vertical
     ? { kind: 'rect', id, role: 'segment', datum, x: band.start(stack.group), y: low, width: band.bandwidth, height: length, ...paint }
     : { kind: 'rect', id, role: 'segment', datum, x: low, y: band.start(stack.group), width: length, height: band.bandwidth, ...paint };

@@ -30,6 +30,8 @@ function stackNotes(derived: StackDerived): string[] {
     const shown = folded.slice(0, 6).join(', ');
     notes.push(`"${other}" holds the ${folded.length} smallest parts overall: ${shown}${folded.length > 6 ? ', …' : ''}.`);
   }
+  const { dropped } = derived;
+  if (dropped.length) notes.push(`Not drawn: the ${dropped.length} ${derived.query.group.label.toLowerCase()} value${dropped.length === 1 ? '' : 's'} with the smallest totals (${dropped.slice(0, 3).join(', ')}${dropped.length > 3 ? ', …' : ''}); the plot holds no more bars.`);
   if (empty.length) notes.push(`Not drawn: ${empty.length} ${derived.query.group.label.toLowerCase()} value${empty.length === 1 ? '' : 's'} whose parts sum to zero (${empty.slice(0, 3).join(', ')}${empty.length > 3 ? ', …' : ''}).`);
   return notes;
 }

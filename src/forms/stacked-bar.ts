@@ -1,4 +1,5 @@
 import { deriveStacks } from '../derive/stacks.js';
+import { stackCapacity } from './stack-capacity.js';
 import { layoutStacks, stackDomains } from './stack-layout.js';
 import { planStacks, type StackPlan } from './stack-plan.js';
 import { stackWords, type StackDerived } from './stack-text.js';
@@ -14,7 +15,7 @@ export const STACKED_BAR: FormDef<StackPlan, StackDerived> = {
   noun: 'stacked bar chart',
   traits: { lengthCoded: true, connectsKey: false, radial: false, coloursCategories: true, axisPerValue: false },
   plan: (input) => planStacks(input, false),
-  derive: (table, plan) => deriveStacks(table, plan),
+  derive: (table, plan, ctx) => deriveStacks(table, plan, stackCapacity(ctx)),
   domains: stackDomains,
   layout: layoutStacks,
   words: stackWords,

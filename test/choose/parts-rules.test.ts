@@ -56,6 +56,16 @@ describe('composition → stacked bars', () => {
     expect(codes(await renderRows({ intent: 'composition', keys: ['site', 'kind'], ...unit }, visits))).toEqual(['choice.no-value']);
   });
 
+  it('more groups than the plot holds at 3 px: the smallest totals are left out, warned and named in a note', async () => {
+    const rows = Array.from({ length: 300 }, (_, i) => ['a', 'b'].map((kind) => ({ site: `S${i}`, kind, n: (i % 50) + 1 }))).flat();
+    const r = await renderRows(two('composition'), rows);
+    expect(r.ok).toBe(true);
+    expect(codes(r)).toContain('derive.others-folded');
+    const drawn = new Set(r.scene!.root.children.filter((n) => n.role === 'segment').map((n) => n.datum!.site));
+    expect(drawn.size).toBe(Math.floor(r.scene!.plot.height / 3));
+    expect(r.scene!.root.children.some((n) => n.kind === 'text' && n.role === 'note' && n.text.startsWith('Not drawn:'))).toBe(true);
+  });
+
   it('refuses more parts than colour tells apart (hard rule), offering small multiples', async () => {
     const rows = Array.from({ length: 9 }, (_, i) => ({ site: 'A', kind: `K${i}`, n: 1 }));
     expect((await renderRows(two('composition'), rows)).diagnostics).toMatchObject([{ code: 'choice.too-many-colours' }]);

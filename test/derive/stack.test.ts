@@ -2,7 +2,9 @@ import { fsum } from 'd3-array';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { foldParts, MAX_PARTS } from '../../src/derive/fold-parts.js';
-import { cellsOf, normalizeStacks, orderStacks, partOrder, stackCells, type StackCell } from '../../src/derive/stack.js';
+import { fitStacks } from '../../src/derive/stack-fit.js';
+import { cellsOf, keepLargest, normalizeStacks, orderStacks, partOrder, stackCells, type StackCell } from '../../src/derive/stack.js';
+import type { DerivedStacks, StackQuery } from '../../src/derive/stacks.js';
 import { runs } from '../helpers.js';
 
 const cell = (group: string, part: string, value: number, row = 1): StackCell => ({ group, part, value, rows: [row] });
@@ -90,5 +92,33 @@ describe('folding parts into "Other"', () => {
     const out = foldParts(input, 3);
     expect(out.parts).toEqual(['Other', 'Part 00', 'Other (2)']);
     expect(out.folded).toEqual(['Part 01', 'Part 02', 'Part 03']);
+  });
+});
+
+describe('fitting stacks to the bars the plot holds', () => {
+  const ref = (name: string) => ({ name, label: name, type: 'categorical' as const, unit: undefined, format: undefined, levels: [] });
+  const query = (order: StackQuery['order']): StackQuery => ({ group: ref('g'), part: ref('p'), value: undefined, aggregate: 'sum', order, normalized: false, partLimit: 9 });
+  const derived = (order: StackQuery['order']): DerivedStacks => {
+    const stacks = stackCells(cells, ['y', 'x', 'z']);
+    return { query: query(order), stacks, parts: ['y', 'x', 'z'], folded: [], other: 'Other', empty: [], dropped: [], valueName: 'count' };
+  };
+
+  it('keeps the stacks with the largest totals, in their given order', () => {
+    const { kept, dropped } = keepLargest(stackCells(cells, ['y', 'x', 'z']), 2);
+    expect(kept.map((s) => s.group)).toEqual(['A', 'B']);
+    expect(dropped).toEqual(['C']);
+  });
+
+  it('leaves all stacks when they fit, drops the smallest with a warning when not, settling on the room the note leaves', () => {
+    expect(fitStacks(derived('total'), () => 3)).toMatchObject({ ok: true, diagnostics: [] });
+    // With the note, the plot holds one bar fewer: the settled capacity is 1.
+    const fitted = fitStacks(derived('total'), (d) => (d.dropped.length ? 1 : 2));
+    expect(fitted.ok && fitted.value.stacks.map((s) => s.group)).toEqual(['B']);
+    expect(fitted.ok && fitted.value.dropped).toEqual(['A', 'C']);
+    expect(fitted.diagnostics).toMatchObject([{ code: 'derive.others-folded', field: 'g', expected: 'at most 1' }]);
+  });
+
+  it('refuses to leave groups of an ordered key out', () => {
+    expect(fitStacks(derived('key'), () => 2).diagnostics).toMatchObject([{ code: 'derive.too-many-ordered-bars', field: 'g' }]);
   });
 });
