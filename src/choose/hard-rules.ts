@@ -102,7 +102,8 @@ export const HARD_RULES: readonly HardRule[] = [
     decision: (c) => (c.traits.partsOfWhole
       ? { decision: 'laid out around a circle: the parts of one whole', rule: `hard rule: a radial layout is used only for a cyclic key, except a donut the brief pins with ${MIN_WHOLE_PARTS} or ${MAX_WHOLE_PARTS} parts, whose few large angles are read well enough` }
       : { decision: 'laid out around a circle', rule: 'hard rule: a radial layout is used only for a cyclic key, whose last value is next to its first' }),
-    broken: (c) => (c.traits.partsOfWhole ? firstKey(c) !== undefined && !fewParts(c) : firstKey(c) !== undefined && firstKey(c)!.type !== 'cyclic'),
+        // With other than one key the parts are not the key's levels: the donut's plan refuses that brief.
+    broken: (c) => (c.traits.partsOfWhole ? c.fields?.keys.length === 1 && !fewParts(c) : firstKey(c) !== undefined && firstKey(c)!.type !== 'cyclic'),
     refusal: (c) => (c.traits.partsOfWhole ? tooManyParts(c) : diagnostic('choice.radial-not-cyclic', `the key \`${firstKey(c)!.name}\` is ${firstKey(c)!.type}, not cyclic, so a radial layout would join its ends that are not neighbours`, {
       path: '/form', field: firstKey(c)!.name, found: firstKey(c)!.type, expected: 'a cyclic key (months, weekdays, hours, directions)', hint: 'use the linear form (bars in key order), or declare the key `type: cyclic` if it really wraps around',
     })),

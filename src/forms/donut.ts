@@ -1,4 +1,4 @@
-import { success, type Outcome } from '../diagnostics/diagnostic.js';
+import { diagnostic, failure, success, type Outcome } from '../diagnostics/diagnostic.js';
 import { polar, shareAngles, wedgePath } from '../layout/arc.js';
 import type { BodyMarks } from '../layout/chart.js';
 import { inkOn } from '../layout/ink.js';
@@ -16,11 +16,19 @@ const HOLE = 0.58;
 
 /** The plan: the share bars' plan (order and combining), without their orientation, with the donut's own words. */
 function planDonut(input: PlanInput): Outcome<Planned<BarPlan>> {
+  if (input.fields.keys.length !== 1) {
+    return failure([diagnostic(input.fields.keys.length ? 'choice.too-many-keys' : 'choice.no-key', 'a donut shows the parts of one whole: it needs one key, the parts', {
+      path: '/keys', found: input.fields.keys.map((k) => k.name).join(', ') || undefined, expected: 'one key column', hint: 'remove `form: donut` to draw normalized bars, one per group',
+    })]);
+  }
   const shares = planShares(input);
   if (!shares.ok) return shares;
   const decisions = shares.value.decisions.filter((d) => !/^(vertical|horizontal) bars$/.test(d.decision) && !d.decision.startsWith('bars of each key'));
   const order = decisions.findIndex((d) => d.decision.startsWith('bars '));
-  if (order >= 0) decisions[order] = { ...decisions[order]!, decision: decisions[order]!.decision.replace(/^bars /, 'parts ') };
+  const byValue = shares.value.plan.order === 'value';
+  if (order >= 0) decisions[order] = byValue
+    ? { decision: 'parts by value, largest first; ties by label', rule: 'the largest part starts at 12 o\'clock, where its angle is read against the vertical; a categorical key has no order of its own' }
+    : { ...decisions[order]!, decision: decisions[order]!.decision.replace(/^bars /, 'parts ') };
   decisions.push({ decision: 'parts clockwise from 12 o\'clock, each as its share of the ring; named in a legend, percent inside where it fits', rule: 'common practice for pies and donuts: the first part starts at the top, so its angle is read against the vertical' });
   return success({ ...shares.value, decisions }, shares.diagnostics);
 }

@@ -27,6 +27,13 @@ function additiveOnly(input: PlanInput, normalized: boolean) {
   })];
 }
 
+/** A stack needs a group and a part: a pinned form with another number of keys is refused. */
+function twoKeys(n: number, normalized: boolean) {
+  return diagnostic(n < 2 ? 'choice.no-key' : 'choice.too-many-keys', `a ${normalized ? 'normalized' : 'stacked'} bar chart needs two keys, the groups (one bar each) and the parts stacked in them, not ${n}`, {
+    path: '/keys', found: `${n} key${n === 1 ? '' : 's'}`, expected: 'two key columns: [group, part]', hint: 'give `keys: [group, part]`, or remove `form:` to let the rules choose',
+  });
+}
+
 /** The bars' order decision in the words of a stack: by total, or by the baseline part's share. */
 function orderDecision(order: GroupOrder, barDecision: Decision, baseline: string | undefined): Decision {
   if (order === 'total') return { decision: 'bars sorted by total, largest first; ties by label', rule: 'sorted bars let the reader find rank at a glance, and a stack\'s total is one of its two precise readings; a categorical key has no order of its own' };
@@ -58,6 +65,7 @@ function stackDecisions(parts: readonly string[], partLabel: string, normalized:
  */
 export function planStacks(input: PlanInput, normalized: boolean): Outcome<Planned<StackPlan>> {
   const { fields, brief, style } = input;
+  if (fields.keys.length !== 2) return failure([twoKeys(fields.keys.length, normalized)]);
   const [group, part] = [fields.keys[0]!, fields.keys[1]!];
   const value = fields.values[0];
   const refused = additiveOnly(input, normalized);
