@@ -27,12 +27,15 @@ function otherLabel(kept: readonly string[]): string {
  * Keeps at most `limit` parts: when there are more, the `limit − 1` largest overall stay and the
  * rest are folded into one "Other" part, whose value in each group is the sum of the folded
  * parts' values there (so every group's total is unchanged). The folded part goes last, at the
- * top of the stack: it is a remainder, not a part to compare on the baseline.
+ * top of the stack: it is a remainder, not a part to compare on the baseline. With `keyOf`, the
+ * parts kept stay in their key's order.
  */
-export function foldParts(cells: readonly StackCell[], limit = MAX_PARTS): FoldedParts {
+export function foldParts(cells: readonly StackCell[], limit = MAX_PARTS, keyOf?: (part: string) => number): FoldedParts {
   const order = partOrder(cells);
-  if (order.length <= limit) return { cells: [...cells], parts: order, folded: [], other: otherLabel(order) };
-  const kept = order.slice(0, Math.max(1, limit - 1));
+  if (order.length <= limit) return { cells: [...cells], parts: keyOf ? partOrder(cells, keyOf) : order, folded: [], other: otherLabel(order) };
+  const largest = order.slice(0, Math.max(1, limit - 1));
+  // An ordered part key keeps its order among the parts kept.
+  const kept = keyOf ? [...largest].sort((a, b) => keyOf(a) - keyOf(b)) : largest;
   const folded = order.slice(kept.length);
   const other = otherLabel(kept);
   const keep = new Set(kept);

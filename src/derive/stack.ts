@@ -47,10 +47,12 @@ export function partTotals(cells: readonly StackCell[]): Map<string, number> {
 
 /**
  * Parts in stacking order: the largest overall total (and so overall share) first, on the
- * baseline, where it is read most precisely; ties by label (code points).
+ * baseline, where it is read most precisely; ties by label (code points). With `keyOf` (a part
+ * key whose order carries meaning, such as a scale from low to high) the parts keep that order.
  */
-export function partOrder(cells: readonly StackCell[]): string[] {
+export function partOrder(cells: readonly StackCell[], keyOf?: (part: string) => number): string[] {
   const totals = partTotals(cells);
+  if (keyOf) return [...totals.keys()].sort((a, b) => keyOf(a) - keyOf(b) || compareText(a, b));
   return [...totals.keys()].sort((a, b) => totals.get(b)! - totals.get(a)! || compareText(a, b));
 }
 

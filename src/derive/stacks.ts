@@ -20,6 +20,8 @@ export interface StackQuery {
   normalized: boolean;
   /** The most parts drawn; beyond it the smallest are folded into "Other" (normalized bars only). */
   partLimit: number;
+  /** size: the largest part overall on the baseline; key: the part key's own order (it is ordered). */
+  partOrder: 'size' | 'key';
 }
 
 /** The numbers a stacked or normalized bar chart draws. */
@@ -110,7 +112,9 @@ export function deriveStacks<Q extends StackQuery>(table: Table, query: Q, capac
   const cells = cellsOf(grouped.groups, AGGREGATORS[query.aggregate].combine);
   problems.push(...negativeParts(cells, query));
   if (problems.some((p) => p.severity === 'error')) return failure(problems);
-  const folded = query.normalized ? foldParts(cells, query.partLimit) : { cells, parts: partOrder(cells), folded: [], other: 'Other' };
+  const partKeys = new Map(grouped.groups.map((g) => [g.labels[1]!, g.sortKeys[1]!]));
+  const keyOf = query.partOrder === 'key' ? (p: string) => partKeys.get(p)! : undefined;
+  const folded = query.normalized ? foldParts(cells, query.partLimit, keyOf) : { cells, parts: partOrder(cells, keyOf), folded: [], other: 'Other' };
   problems.push(...foldWarning(folded.folded, folded.other, query));
   const stacked = stackCells(folded.cells, folded.parts);
   problems.push(...notFinite(stacked, query));

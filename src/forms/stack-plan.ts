@@ -5,7 +5,7 @@ import { MAX_PARTS } from '../derive/fold-parts.js';
 import { groupRows } from '../derive/group.js';
 import { cellsOf, partOrder, type GroupOrder } from '../derive/stack.js';
 import type { StackQuery } from '../derive/stacks.js';
-import { refOf } from '../fields/types.js';
+import { isOrdered, refOf, type Field } from '../fields/types.js';
 import { planBar, type BarPlan } from './bar-plan.js';
 import type { Planned, PlanInput } from './types.js';
 
@@ -41,12 +41,21 @@ function orderDecision(order: GroupOrder, barDecision: Decision, baseline: strin
   return barDecision;
 }
 
-/** What is stacked, in which order, and why; the rules of reading a stack stated once. */
-function stackDecisions(parts: readonly string[], partLabel: string, normalized: boolean, limit: number): Decision[] {
-  const decisions: Decision[] = [{
-    decision: `parts of \`${partLabel}\` stacked in one order in every bar, the largest overall (${JSON.stringify(parts[0] ?? '')}) on the baseline`,
+/** The order of the parts: the largest overall on the baseline, or an ordered part key's own order. */
+function partDecision(parts: readonly string[], part: Field): Decision {
+  const first = JSON.stringify(parts[0] ?? '');
+  if (isOrdered(part.type)) {
+    return { decision: `parts of \`${part.name}\` stacked in their own order in every bar, ${first} on the baseline`, rule: `the part key is ${part.type}, so its order carries meaning (a scale, a sequence) and is kept rather than sorted by size; only the baseline segment is read by aligned position (Cleveland & McGill 1984)` };
+  }
+  return {
+    decision: `parts of \`${part.name}\` stacked in one order in every bar, the largest overall (${first}) on the baseline`,
     rule: 'only the segment on the common baseline is read by aligned position; the others float on those below (Cleveland & McGill 1984), so the largest part gets the precise reading and the order never changes between bars',
-  }];
+  };
+}
+
+/** What is stacked, in which order, and why; the rules of reading a stack stated once. */
+function stackDecisions(parts: readonly string[], part: Field, normalized: boolean, limit: number): Decision[] {
+  const decisions: Decision[] = [partDecision(parts, part)];
   if (normalized) {
     decisions.push({ decision: 'each bar shows its group as 100 %', rule: 'part-to-whole: shares of groups of different sizes compare on one scale; the baseline part and the part at the top (read from 100 %) are the precise readings' });
     decisions.push({ decision: 'percent labels inside the segments where they fit; parts named in a legend', rule: 'a label that does not fit its segment would cover its neighbours, so it is left out (common practice)' });
@@ -74,12 +83,14 @@ export function planStacks(input: PlanInput, normalized: boolean): Outcome<Plann
   if (!bars.ok) return failure(bars.diagnostics);
   const { plan: bar, decisions: [barOrder, ...barRest] } = bars.value;
   const grouped = groupRows(input.table, { keys: [refOf(group), refOf(part)], value: value && refOf(value) });
-  const parts = partOrder(cellsOf(grouped.groups, AGGREGATORS[brief.aggregate].combine));
+  const partKeys = new Map(grouped.groups.map((g) => [g.labels[1]!, g.sortKeys[1]!]));
+  const byKey = isOrdered(part.type);
+  const parts = partOrder(cellsOf(grouped.groups, AGGREGATORS[brief.aggregate].combine), byKey ? (p) => partKeys.get(p)! : undefined);
   const order: GroupOrder = bar.order === 'value' ? (normalized ? 'baseline-share' : 'total') : bar.order;
   const limit = Math.min(MAX_PARTS, Math.min(MAX_COLOURS, style.palette.categorical.length) + 1);
-  const decisions = [orderDecision(order, barOrder!, parts[0]), ...barRest, ...stackDecisions(parts, part.name, normalized, limit)];
+  const decisions = [orderDecision(order, barOrder!, parts[0]), ...barRest, ...stackDecisions(parts, part, normalized, limit)];
   return success({
-    plan: { group: refOf(group), part: refOf(part), value: value && refOf(value), aggregate: brief.aggregate, order, normalized, partLimit: limit, orientation: bar.orientation },
+    plan: { group: refOf(group), part: refOf(part), value: value && refOf(value), aggregate: brief.aggregate, order, normalized, partLimit: limit, partOrder: byKey ? 'key' : 'size', orientation: bar.orientation },
     decisions,
   }, bars.diagnostics);
 }

@@ -36,7 +36,7 @@ const alongAxis = (a: [number, number], b: [number, number]) => milli(a[0]) - mi
  * part overall is on the baseline; stack heights are proportional to totals (absolute) or all
  * reach 100 % within 0.5 px with shares summing to 1 within 1e-9 (normalized); no text overlaps.
  */
-export function checkStackContracts(dump: SceneDump, opts: { group: string; part: string; value: string; normalized: boolean; texts?: boolean }): void {
+export function checkStackContracts(dump: SceneDump, opts: { group: string; part: string; value: string; normalized: boolean; texts?: boolean; partOrder?: string[] }): void {
   const { vertical, px, perUnit } = valueAxis(dump);
   const zero = px(0);
   const bars = segmentsByBar(dump, opts.group);
@@ -65,13 +65,13 @@ export function checkStackContracts(dump: SceneDump, opts: { group: string; part
   }
   // The one order: largest overall total first (ties by label), the folded "Other" last.
   const isOther = (p: string) => /^Other( \(\d+\))?$/.test(p);
-  const order = [...partTotals].sort((a, b) => Number(isOther(a[0])) - Number(isOther(b[0])) || b[1] - a[1] || (a[0] < b[0] ? -1 : 1)).map(([p]) => p);
+  const order = opts.partOrder ?? [...partTotals].sort((a, b) => Number(isOther(a[0])) - Number(isOther(b[0])) || b[1] - a[1] || (a[0] < b[0] ? -1 : 1)).map(([p]) => p);
   for (const [, segs] of bars) {
     const drawn = segs.map((m) => ({ part: String(m.datum![opts.part]), at: extentAlong(m, vertical, zero) })).sort((a, b) => alongAxis(a.at, b.at)).map((s) => s.part);
     const ranks = drawn.map((p) => order.indexOf(p));
     expect(ranks).toEqual([...ranks].sort((a, b) => a - b));
   }
-  // The largest part overall sits on the baseline (the first part of every bar that has it).
+  // The largest part overall (or the first of an ordered part key) sits on the baseline of every bar that has it.
   const largest = order[0]!;
   for (const [, segs] of bars) {
     const base = segs.find((m) => Math.abs(extentAlong(m, vertical, zero)[0]) <= 0.5)!;

@@ -50,6 +50,17 @@ describe('perceptual contracts of stacked bars', () => {
   });
 });
 
+describe('an ordered part key keeps its order', () => {
+  it('a scale from low to high is stacked low to high in every bar, whatever the sizes', async () => {
+    const levels = ['Poor', 'Fair', 'Good'];
+    const rows = ['North', 'South'].flatMap((site, i) => levels.map((kind, j) => ({ site, kind, n: [5, 30, 10][(i + j) % 3]! })));
+    const r = await renderRows(brief('part-to-whole', { fields: { n: { unit: 'visits' }, kind: { type: 'ordinal', order: levels } } }), rows);
+    expect(r.rationale.some((d) => d.decision === 'parts of `kind` stacked in their own order in every bar, "Poor" on the baseline')).toBe(true);
+    checkStackContracts(dumpScene(r.scene!), { ...opts(true), partOrder: levels });
+    expect(r.scene!.legends[0]!.entries.map((e) => e.label)).toEqual(levels);
+  });
+});
+
 describe('perceptual contracts of normalized bars', () => {
   it('every bar reaches 100 % within 0.5 px, shares sum to 1 within 1e-9, segments contiguous, largest part on the baseline', async () => {
     const r = await renderRows(brief('part-to-whole'), visits);

@@ -22,6 +22,11 @@ describe('stacking', () => {
     expect(partOrder([cell('A', 'b', 2), cell('A', 'a', 2)])).toEqual(['a', 'b']);
   });
 
+  it('keeps an ordered part key\'s own order (a scale from low to high), whatever the sizes', () => {
+    const rank = { z: 0, x: 1, y: 2 } as Record<string, number>;
+    expect(partOrder(cells, (p) => rank[p]!)).toEqual(['z', 'x', 'y']);
+  });
+
   it('lays each stack\'s segments end to end from zero in the part order, a missing part getting no segment', () => {
     const stacks = stackCells(cells, ['y', 'x', 'z']);
     expect(stacks.map((s) => [s.group, s.total, s.segments.map((g) => [g.part, g.start, g.end])])).toEqual([
@@ -87,6 +92,12 @@ describe('folding parts into "Other"', () => {
     }
   });
 
+  it('folds the smallest of an ordered part key, keeping the order of those kept', () => {
+    const out = foldParts(many(5), 3, (p) => -Number(p.slice(5)));
+    expect(out.parts).toEqual(['Part 01', 'Part 00', 'Other']);
+    expect(out.folded).toEqual(['Part 02', 'Part 03', 'Part 04']);
+  });
+
   it('folds at a smaller limit (what the palette tells apart), and names "Other" apart from a real part of that name', () => {
     const input = [...many(4), cell('G', 'Other', 1000)];
     const out = foldParts(input, 3);
@@ -97,7 +108,7 @@ describe('folding parts into "Other"', () => {
 
 describe('fitting stacks to the bars the plot holds', () => {
   const ref = (name: string) => ({ name, label: name, type: 'categorical' as const, unit: undefined, format: undefined, levels: [] });
-  const query = (order: StackQuery['order']): StackQuery => ({ group: ref('g'), part: ref('p'), value: undefined, aggregate: 'sum', order, normalized: false, partLimit: 9 });
+  const query = (order: StackQuery['order']): StackQuery => ({ group: ref('g'), part: ref('p'), value: undefined, aggregate: 'sum', order, normalized: false, partLimit: 9, partOrder: 'size' });
   const derived = (order: StackQuery['order']): DerivedStacks => {
     const stacks = stackCells(cells, ['y', 'x', 'z']);
     return { query: query(order), stacks, parts: ['y', 'x', 'z'], folded: [], other: 'Other', empty: [], dropped: [], valueName: 'count' };
