@@ -2,6 +2,7 @@ import type { Intent, ResolvedBrief } from '../brief/types.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
 import { applyHardRules } from './hard-rules.js';
+import { partsShapeChecks } from './parts-checks.js';
 import { formsForIntent } from './rules.js';
 import { checkTrendShape } from './trend-checks.js';
 import { checkScheduleShape } from './schedule-checks.js';
@@ -53,6 +54,7 @@ export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: Resolv
   shift: checkShiftShape,
   schedule: checkScheduleShape,
   correlation: checkCorrelationShape,
+  ...partsShapeChecks(checkCompareShape),
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */

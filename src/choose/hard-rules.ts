@@ -54,6 +54,21 @@ function colouredField(c: RuleContext): Field | undefined {
   return name === undefined ? undefined : c.fields?.all.find((f) => f.name === name);
 }
 
+/** A donut's parts: at least two (one part is no comparison), at most three (common practice: beyond that, angles are compared poorly). */
+const MIN_WHOLE_PARTS = 2;
+const MAX_WHOLE_PARTS = 3;
+
+const fewParts = (c: RuleContext) => firstKey(c)!.levels.length >= MIN_WHOLE_PARTS && firstKey(c)!.levels.length <= MAX_WHOLE_PARTS;
+
+/** A donut of too many (or too few) parts, refused with the normalized bar offered. */
+function tooManyParts(c: RuleContext): Diagnostic {
+  const n = firstKey(c)!.levels.length;
+  return diagnostic('choice.donut-too-many-parts', `a donut of ${n} part${n === 1 ? '' : 's'} of \`${firstKey(c)!.name}\`: angles and areas are read less accurately than aligned lengths (Cleveland & McGill 1984), so a donut is drawn only for ${MIN_WHOLE_PARTS} or ${MAX_WHOLE_PARTS} parts`, {
+    path: '/form', field: firstKey(c)!.name, found: `${n} part${n === 1 ? '' : 's'}`, expected: `${MIN_WHOLE_PARTS} or ${MAX_WHOLE_PARTS} parts`,
+    hint: 'remove `form: donut` to draw the shares as bars on a percent axis (form: normalized-bar)',
+  });
+}
+
 /** The hard rules, in the order they are checked and stated. */
 export const HARD_RULES: readonly HardRule[] = [
   {
@@ -78,14 +93,20 @@ export const HARD_RULES: readonly HardRule[] = [
     }),
   },
   {
+    // One documented exception: a form whose radial marks are the parts of one whole (a donut)
+    // may be drawn for 2 or 3 parts, which it reaches only when the brief pins it (the rule
+    // table never chooses it). More parts are refused whatever the key's type.
     id: 'radial-only-for-cycles',
     briefOnly: false,
     binds: (c) => c.traits.radial,
-    decision: () => ({ decision: 'laid out around a circle', rule: 'hard rule: a radial layout is used only for a cyclic key, whose last value is next to its first' }),
-    broken: (c) => firstKey(c) !== undefined && firstKey(c)!.type !== 'cyclic',
-    refusal: (c) => diagnostic('choice.radial-not-cyclic', `the key \`${firstKey(c)!.name}\` is ${firstKey(c)!.type}, not cyclic, so a radial layout would join its ends that are not neighbours`, {
+    decision: (c) => (c.traits.partsOfWhole
+      ? { decision: 'laid out around a circle: the parts of one whole', rule: `hard rule: a radial layout is used only for a cyclic key, except a donut the brief pins with ${MIN_WHOLE_PARTS} or ${MAX_WHOLE_PARTS} parts, whose few large angles are read well enough` }
+      : { decision: 'laid out around a circle', rule: 'hard rule: a radial layout is used only for a cyclic key, whose last value is next to its first' }),
+        // With other than one key the parts are not the key's levels: the donut's plan refuses that brief.
+    broken: (c) => (c.traits.partsOfWhole ? c.fields?.keys.length === 1 && !fewParts(c) : firstKey(c) !== undefined && firstKey(c)!.type !== 'cyclic'),
+    refusal: (c) => (c.traits.partsOfWhole ? tooManyParts(c) : diagnostic('choice.radial-not-cyclic', `the key \`${firstKey(c)!.name}\` is ${firstKey(c)!.type}, not cyclic, so a radial layout would join its ends that are not neighbours`, {
       path: '/form', field: firstKey(c)!.name, found: firstKey(c)!.type, expected: 'a cyclic key (months, weekdays, hours, directions)', hint: 'use the linear form (bars in key order), or declare the key `type: cyclic` if it really wraps around',
-    }),
+    })),
   },
   {
     id: 'one-value-per-axis',
@@ -101,8 +122,14 @@ export const HARD_RULES: readonly HardRule[] = [
     id: 'distinguishable-colours',
     briefOnly: false,
     binds: (c) => c.traits.coloursCategories && colouredField(c) !== undefined,
-    decision: (c) => ({ decision: `colour tells the ${colouredField(c)!.levels.length} levels of \`${colouredField(c)!.name}\` apart`, rule: `hard rule: at most ${colours(c)} categorical colours, the most the style's palette keeps distinct for every reader` }),
-    broken: (c) => colouredField(c)!.levels.length > colours(c),
+    decision: (c) => {
+      const [n, name, k] = [colouredField(c)!.levels.length, colouredField(c)!.name, colours(c)];
+      const rule = `hard rule: at most ${k} categorical colours, the most the style's palette keeps distinct for every reader`;
+      if (c.traits.foldsColours && n > k) return { decision: `colour tells the ${k} largest levels of \`${name}\` apart; the other ${n - k} share one neutral "Other"`, rule };
+      return { decision: `colour tells the ${n} levels of \`${name}\` apart`, rule };
+    },
+    // A form that folds the smallest categories into one neutral "Other" keeps the rule by folding.
+    broken: (c) => !c.traits.foldsColours && colouredField(c)!.levels.length > colours(c),
     refusal: (c) => diagnostic('choice.too-many-colours', `\`${colouredField(c)!.name}\` has ${colouredField(c)!.levels.length} levels, more than the ${colours(c)} colours a reader can tell apart`, {
       field: colouredField(c)!.name, found: `${colouredField(c)!.levels.length} levels`, expected: `at most ${colours(c)}`, hint: 'show one panel per level (small multiples), or combine the smallest levels before charting',
     }),

@@ -97,6 +97,35 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.values.length === 2,
     why: 'two quantitative values: a scatter plot puts each row at its x and y positions, the most accurately read encoding for how two values go together (Cleveland & McGill 1984)',
   },
+  {
+    id: 'composition.group-and-part',
+    intent: 'composition',
+    form: 'stacked-bar',
+    applies: (f) => f.keys.length === 2,
+    why: 'two keys (group, part) and one value: one bar per group, its parts stacked; the totals and the baseline segment are the precise readings, the upper segments float',
+  },
+  {
+    id: 'part-to-whole.group-and-part',
+    intent: 'part-to-whole',
+    form: 'normalized-bar',
+    applies: (f) => f.keys.length === 2,
+    why: 'two keys (group, part) and one value: each group as one bar of 100 %, so the shares of its parts compare across groups of any size',
+  },
+  {
+    id: 'part-to-whole.one-key',
+    intent: 'part-to-whole',
+    form: 'normalized-bar',
+    applies: (f) => f.keys.length === 1,
+    why: 'one key and one value: each key\'s share of the whole as a bar on a percent axis; aligned lengths are read more accurately than the angles and areas of a pie (Cleveland & McGill 1984)',
+  },
+  {
+    // After the one-key row, so it is reached only when the brief pins `form: donut`.
+    id: 'part-to-whole.pinned-donut',
+    intent: 'part-to-whole',
+    form: 'donut',
+    applies: (f) => f.keys.length === 1,
+    why: 'the brief pins a donut: drawn for 2 or 3 parts only, whose few large angles are read well enough',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */

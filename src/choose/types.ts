@@ -28,6 +28,10 @@ export interface FormTraits {
   axisPerValue: boolean;
   /** How many values of one measure the marks may show on one shared axis (a dumbbell's before and after). Default: 1. */
   sharedAxisValues?: number;
+  /** Colours beyond what the palette tells apart are folded into one neutral "Other" (normalized bars), so the colour rule is kept by folding. Default: false. */
+  foldsColours?: boolean;
+  /** Radial marks are the parts of one whole (a donut): the radial rule's one exception, for 2 or 3 parts pinned by the brief. Default: false. */
+  partsOfWhole?: boolean;
 }
 
 /** What a form's plan may look at. */

@@ -68,6 +68,8 @@ export const CATALOGUE = {
   'choice.not-categorical': 'error',
   'choice.too-many-shapes': 'error',
   'choice.dumbbell-units-differ': 'error',
+  'choice.aggregate-not-additive': 'error',
+  'choice.donut-too-many-parts': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -96,6 +98,10 @@ export const CATALOGUE = {
   'derive.fit-not-possible': 'warning',
   'derive.too-many-dots': 'error',
   'derive.sum-not-meaningful': 'error',
+  'derive.negative-part': 'error',
+  'derive.parts-folded': 'warning',
+  'derive.zero-total': 'warning',
+  'derive.whole-is-zero': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',

@@ -14,6 +14,8 @@ export function bars(dump: SceneDump) {
   return dump.marks.filter((m) => m.role === 'bar');
 }
 
+export { checkTexts };
+
 /** Perceptual contracts every bar chart must keep, asserted on its scene. */
 export function checkBarContracts(dump: SceneDump, valueName: string, keyName: string) {
   const vertical = dump.axes[0]!.orient === 'left';
