@@ -59,6 +59,9 @@ export const CATALOGUE = {
   'choice.line-on-categorical': 'error',
   'choice.radial-not-cyclic': 'error',
   'choice.too-many-colours': 'error',
+  'choice.group-key-not-categorical': 'error',
+  'choice.histogram-with-groups': 'error',
+  'choice.no-group-key': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -67,6 +70,7 @@ export const CATALOGUE = {
   'derive.too-many-ordered-bars': 'error',
   'derive.uneven-dates': 'warning',
   'derive.not-finite': 'error',
+  'derive.cannot-bin': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',

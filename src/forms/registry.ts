@@ -1,9 +1,12 @@
 import type { FormName } from '../brief/types.js';
 import { BAR } from './bar.js';
+import { HISTOGRAM } from './histogram.js';
+import { STRIP } from './strip.js';
+import { BOX } from './box.js';
 import type { AnyForm } from './types.js';
 
 /** The forms chartwright draws: one entry per form file in src/forms/. */
-export const FORMS: readonly AnyForm[] = [BAR];
+export const FORMS: readonly AnyForm[] = [BAR, HISTOGRAM, STRIP, BOX];
 
 /** The form of a name, if it is drawn. */
 export function formNamed(name: FormName | string): AnyForm | undefined {
