@@ -2,9 +2,7 @@ import type { GroupDistribution } from '../derive/distribution.js';
 import type { LayoutContext, PlotArea } from '../layout/kit-types.js';
 import { asBand, asLinear } from '../layout/scales.js';
 import type { PathCommand, SceneNode } from '../scene/types.js';
-import { planGroups, type GroupsPlan } from './distribution-plan.js';
-import { deriveGroups, groupDomains, groupWords, type DerivedGroups } from './groups.js';
-import type { FormDef } from './types.js';
+import { groupsForm, type DerivedGroups } from './groups.js';
 
 /** The box's height as a share of its band, and the whisker caps' as a share of the box. */
 const BOX_SHARE = 0.6;
@@ -43,15 +41,11 @@ function boxOf(d: DerivedGroups, g: GroupDistribution, area: PlotArea, ctx: Layo
  * type 7) with the median across it, whiskers to the most extreme values within 1.5 IQR, and
  * every value beyond drawn as an open circle.
  */
-export const BOX: FormDef<GroupsPlan, DerivedGroups> = {
+export const BOX = groupsForm({
   name: 'box',
   noun: 'box plot',
-  traits: { lengthCoded: false, connectsKey: false, radial: false, coloursCategories: false, axisPerValue: false },
-  plan: (input) => planGroups(input, 'a box plot'),
-  derive: (table, plan) => deriveGroups(table, plan),
-  domains: groupDomains,
-  layout(d, area, ctx) {
-    return { marks: d.groups.flatMap((g) => boxOf(d, g, area, ctx)), labels: [], diagnostics: [] };
-  },
-  words: (d) => groupWords(d, 'Box plot', 'Boxes span the middle half of the values (first to third quartile, Hyndman–Fan type 7) with the median as a thick line; whiskers reach the furthest values within 1.5 box lengths; circles are values beyond.'),
-};
+  article: 'a box plot',
+  title: 'Box plot',
+  marksOf: boxOf,
+  how: 'Boxes span the middle half of the values (first to third quartile, Hyndman–Fan type 7) with the median as a thick line; whiskers reach the furthest values within 1.5 box lengths; circles are values beyond.',
+});

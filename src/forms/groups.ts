@@ -4,10 +4,13 @@ import { distributeGroups, type GroupDistribution } from '../derive/distribution
 import { groupRows } from '../derive/group.js';
 import { diagnostic, failure, success, type Outcome } from '../diagnostics/diagnostic.js';
 import { axisTitle } from '../layout/axis.js';
-import type { CartesianDomains, FormWords } from '../layout/kit-types.js';
+import type { CartesianDomains, FormWords, LayoutContext, PlotArea } from '../layout/kit-types.js';
 import { valueFormatter } from '../layout/number-format.js';
 import type { Table } from '../table/types.js';
-import type { GroupsPlan } from './distribution-plan.js';
+import type { FormName } from '../brief/types.js';
+import type { SceneNode } from '../scene/types.js';
+import { planGroups, type GroupsPlan } from './distribution-plan.js';
+import type { FormDef } from './types.js';
 
 /** The numbers a strip or box chart draws: each group's sorted values and box numbers, in order. */
 export interface DerivedGroups {
@@ -61,4 +64,30 @@ export function groupWords(d: DerivedGroups, noun: string, how: string): FormWor
   const extremes = top === low ? `median ${fmt(top.stats.median)}${unit}` : `highest median ${top.label} (${fmt(top.stats.median)}${unit}), lowest ${low.label} (${fmt(low.stats.median)}${unit})`;
   const notes = [how, ...(d.missing ? [`${count(d.missing)} row${d.missing === 1 ? '' : 's'} with a missing key or a missing or non-finite value ${d.missing === 1 ? 'is' : 'are'} not drawn.`] : [])];
   return { title: `${value.label} by ${key.label.toLowerCase()}`, description: `${what}; ${extremes}.`, notes };
+}
+
+/** What sets one chart of a value by group apart: its names, its marks per group, and how to read them. */
+export interface GroupsFormSpec {
+  name: FormName;
+  noun: string;
+  /** The form's words in the rationale's refusals ("a box plot") and the description ("Box plot"). */
+  article: string;
+  title: string;
+  marksOf(d: DerivedGroups, g: GroupDistribution, area: PlotArea, ctx: LayoutContext): SceneNode[];
+  /** The note saying how to read the marks. */
+  how: string;
+}
+
+/** A form showing one value by group in rows on a shared value axis (strips, boxes), position-coded. */
+export function groupsForm(spec: GroupsFormSpec): FormDef<GroupsPlan, DerivedGroups> {
+  return {
+    name: spec.name,
+    noun: spec.noun,
+    traits: { lengthCoded: false, connectsKey: false, radial: false, coloursCategories: false, axisPerValue: false },
+    plan: (input) => planGroups(input, spec.article),
+    derive: (table, plan) => deriveGroups(table, plan),
+    domains: groupDomains,
+    layout: (d, area, ctx) => ({ marks: d.groups.flatMap((g) => spec.marksOf(d, g, area, ctx)), labels: [], diagnostics: [] }),
+    words: (d) => groupWords(d, spec.title, spec.how),
+  };
 }

@@ -4,9 +4,7 @@ import { rule } from '../layout/axes.js';
 import type { LayoutContext, PlotArea } from '../layout/kit-types.js';
 import { asBand, asLinear } from '../layout/scales.js';
 import type { SceneNode } from '../scene/types.js';
-import { planGroups, type GroupsPlan } from './distribution-plan.js';
-import { deriveGroups, groupDomains, groupWords, type DerivedGroups } from './groups.js';
-import type { FormDef } from './types.js';
+import { groupsForm, type DerivedGroups } from './groups.js';
 
 /** Dot radius in px, and the share of the band's half-height the jitter may use (the rest keeps strips apart). */
 export const STRIP_DOT_R = 3;
@@ -37,15 +35,11 @@ function stripOf(d: DerivedGroups, g: GroupDistribution, area: PlotArea, ctx: La
  * across the row (seeded by the group's label, so the same data gives the same picture), with
  * the group's median marked.
  */
-export const STRIP: FormDef<GroupsPlan, DerivedGroups> = {
+export const STRIP = groupsForm({
   name: 'strip',
   noun: 'strip chart of jittered dots',
-  traits: { lengthCoded: false, connectsKey: false, radial: false, coloursCategories: false, axisPerValue: false },
-  plan: (input) => planGroups(input, 'a strip chart'),
-  derive: (table, plan) => deriveGroups(table, plan),
-  domains: groupDomains,
-  layout(d, area, ctx) {
-    return { marks: d.groups.flatMap((g) => stripOf(d, g, area, ctx)), labels: [], diagnostics: [] };
-  },
-  words: (d) => groupWords(d, 'Strip chart', 'Each dot is one row, spread up and down at random (seeded, the same on every run) so that equal values stay visible; the dark line marks the median.'),
-};
+  article: 'a strip chart',
+  title: 'Strip chart',
+  marksOf: stripOf,
+  how: 'Each dot is one row, spread up and down at random (seeded, the same on every run) so that equal values stay visible; the dark line marks the median.',
+});
