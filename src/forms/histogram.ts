@@ -32,7 +32,7 @@ function domainsOf(d: DerivedHistogram): CartesianDomains {
   const { edges, counts } = d.bins;
   const value = d.query.value;
   return {
-    left: { kind: 'linear', name: 'count', field: 'count', title: countTitle(d), extent: [0, Math.max(1, max(counts) ?? 0)] },
+    left: { kind: 'linear', name: 'count', field: 'count', title: countTitle(d), extent: [0, Math.max(1, max(counts) ?? 0)], format: ',d' },
     bottom: { kind: 'linear', name: 'value', field: value.name, title: axisTitle(value, value.label), extent: [edges[0]!, edges[edges.length - 1]!], format: value.format },
     first: 'left',
     zeroLine: 'left',

@@ -84,6 +84,14 @@ describe('histogram contracts', () => {
     checkHistogram(dump, csv('ferry-waits.csv').map((r) => Number(r.wait)));
   });
 
+  it('the count axis ticks whole numbers only, at every height (no "2.5 rows")', async () => {
+    for (const height of [200, 300, 440, 900]) {
+      const r = await renderRows({ intent: 'distribution', values: 'v', fields: { v: { unit: 'u' } }, size: { width: 600, height } }, [7, 7, 7, 2].map((v) => ({ v })));
+      const ticks = dumpScene(r.scene!).axes.find((a) => a.orient === 'left')!.ticks as number[];
+      expect(ticks.every(Number.isInteger), `${height}: ${ticks}`).toBe(true);
+    }
+  });
+
   it('edge cases keep the contracts: one repeated value, an IQR of zero, negative values, values on edges', async () => {
     const cases = [[7, 7, 7], [...Array(20).fill(5), 1, 9], [-3.5, -2, -2, 0, 1.25, 4, 4, 4.5], [0, 10, 20, 30, 40, 50, 60, 70, 80, 90, 100]];
     for (const values of cases) {
