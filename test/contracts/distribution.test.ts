@@ -101,47 +101,55 @@ describe('histogram contracts', () => {
   });
 });
 
+/** Box contracts: quartiles, median and whiskers at their type-7 values (d3-array, independently) and at their pixels; outliers drawn. */
+function checkBoxes(dump: SceneDump, groups: Map<string, number[]>, key: string) {
+  const x = axisPx(dump, 'bottom');
+  const { centre, step } = bands(dump);
+  const boxes = dump.marks.filter((m): m is DumpMark & { datum: Record<string, number> } => m.role === 'box' && m.kind === 'rect');
+  expect(boxes).toHaveLength(groups.size);
+  for (const b of boxes) {
+    const label = b.datum[key] as unknown as string;
+    const values = groups.get(label)!;
+    // Independent quartiles: d3-array's quantile (R-7).
+    const [q1, med, q3] = [0.25, 0.5, 0.75].map((p) => quantile(values, p)!) as [number, number, number];
+    expect(b.datum.q1).toBeCloseTo(q1, 9);
+    expect(b.datum.median).toBeCloseTo(med, 9);
+    expect(b.datum.q3).toBeCloseTo(q3, 9);
+    const inside = values.filter((v) => v >= q1 - 1.5 * (q3 - q1) && v <= q3 + 1.5 * (q3 - q1));
+    expect(b.datum.low).toBe(Math.min(...inside));
+    expect(b.datum.high).toBe(Math.max(...inside));
+    expect(b.datum.outliers).toBe(values.length - inside.length);
+    // The box spans q1 to q3 in px and sits in its group's row.
+    expect(Math.abs(b.x! - x(q1))).toBeLessThanOrEqual(0.5);
+    expect(Math.abs(b.x! + b.width! - x(q3))).toBeLessThanOrEqual(0.5);
+    expect(Math.abs(b.y! + b.height! / 2 - centre.get(label)!)).toBeLessThanOrEqual(0.5);
+    // The whiskers' path reaches the whisker ends; the median line sits at the median.
+    const whisker = dump.marks.find((m) => m.role === 'box' && m.datum?.part === 'whiskers' && m.datum[key] === label)!;
+    const xs = whisker.d!.match(/[ML](-?[\d.]+)/g)!.map((t) => Number(t.slice(1)));
+    expect(Math.abs(Math.min(...xs) - x(b.datum.low!))).toBeLessThanOrEqual(0.5);
+    expect(Math.abs(Math.max(...xs) - x(b.datum.high!))).toBeLessThanOrEqual(0.5);
+    const median = dump.marks.find((m) => m.role === 'box' && m.datum?.part === 'median' && m.datum[key] === label)!;
+    expect(Math.abs(Number(median.d!.match(/^M(-?[\d.]+)/)![1]) - x(med))).toBeLessThanOrEqual(0.5);
+    const outliers = dump.marks.filter((m) => m.role === 'point' && m.datum?.[key] === label);
+    expect(outliers).toHaveLength(values.length - inside.length);
+    for (const o of outliers) expect(Math.abs(o.cy! - centre.get(label)!)).toBeLessThanOrEqual(step / 2);
+  }
+  checkTexts(dump);
+}
+
 describe('box plot contracts', () => {
-  it('hut-walks as boxes: quartiles, median and whiskers at their type-7 values and their pixels; outliers drawn', async () => {
+  it('ferry-delays (boxes by the rule): quartiles, whiskers and outliers at their values and pixels', async () => {
+    const { result, dump } = await renderDemo(join(root, 'demo-data', 'ferry-delays.yaml'));
+    expect(result.choice!.form).toBe('box');
+    checkBoxes(dump, groupsOf(csv('ferry-delays.csv'), 'route', 'delay'), 'route');
+  });
+
+  it('hut-walks pinned to boxes keeps the same contracts', async () => {
     const { data: _data, ...brief } = yaml(readFileSync(join(root, 'demo-data', 'hut-walks.yaml'), 'utf8'));
     const rows = csv('hut-walks.csv').map((r) => ({ route: r.route!, minutes: Number(r.minutes) }));
     const r = await renderRows({ ...brief, form: 'box' }, rows);
     expect(r.ok).toBe(true);
-    const dump = dumpScene(r.scene!);
-    const x = axisPx(dump, 'bottom');
-    const { centre, step } = bands(dump);
-    const groups = groupsOf(rows.map((o) => ({ route: o.route, minutes: String(o.minutes) })), 'route', 'minutes');
-    const boxes = dump.marks.filter((m): m is DumpMark & { datum: Record<string, number> } => m.role === 'box' && m.kind === 'rect');
-    expect(boxes).toHaveLength(groups.size);
-    for (const b of boxes) {
-      const label = b.datum.route as unknown as string;
-      const values = groups.get(label)!;
-      // Independent quartiles: d3-array's quantile (R-7).
-      const [q1, med, q3] = [0.25, 0.5, 0.75].map((p) => quantile(values, p)!);
-      expect(b.datum.q1).toBeCloseTo(q1!, 9);
-      expect(b.datum.median).toBeCloseTo(med!, 9);
-      expect(b.datum.q3).toBeCloseTo(q3!, 9);
-      const iqr = q3! - q1!;
-      const inside = values.filter((v) => v >= q1! - 1.5 * iqr && v <= q3! + 1.5 * iqr);
-      expect(b.datum.low).toBe(Math.min(...inside));
-      expect(b.datum.high).toBe(Math.max(...inside));
-      expect(b.datum.outliers).toBe(values.length - inside.length);
-      // The box spans q1 to q3 in px and sits in its group's row.
-      expect(Math.abs(b.x! - x(q1!))).toBeLessThanOrEqual(0.5);
-      expect(Math.abs(b.x! + b.width! - x(q3!))).toBeLessThanOrEqual(0.5);
-      expect(Math.abs(b.y! + b.height! / 2 - centre.get(label)!)).toBeLessThanOrEqual(0.5);
-      // The whiskers' path reaches the whisker ends; the median line sits at the median.
-      const whisker = dump.marks.find((m) => m.role === 'box' && m.datum?.part === 'whiskers' && m.datum.route === label)!;
-      const xs = whisker.d!.match(/[ML](-?[\d.]+)/g)!.map((s) => Number(s.slice(1)));
-      expect(Math.abs(Math.min(...xs) - x(b.datum.low!))).toBeLessThanOrEqual(0.5);
-      expect(Math.abs(Math.max(...xs) - x(b.datum.high!))).toBeLessThanOrEqual(0.5);
-      const median = dump.marks.find((m) => m.role === 'box' && m.datum?.part === 'median' && m.datum.route === label)!;
-      expect(Math.abs(Number(median.d!.match(/^M(-?[\d.]+)/)![1]) - x(med!))).toBeLessThanOrEqual(0.5);
-      const outliers = dump.marks.filter((m) => m.role === 'point' && m.datum?.route === label);
-      expect(outliers).toHaveLength(values.length - inside.length);
-      for (const o of outliers) expect(Math.abs(o.cy! - centre.get(label)!)).toBeLessThanOrEqual(step / 2);
-    }
-    checkTexts(dump);
+    checkBoxes(dumpScene(r.scene!), groupsOf(csv('hut-walks.csv'), 'route', 'minutes'), 'route');
   });
 });
 
