@@ -55,6 +55,11 @@ export function checkDistributionShape(fields: Fields, brief: ResolvedBrief): Di
   }
   const keyProblem = fields.keys[0] && groupKeyProblem(fields.keys[0]);
   if (keyProblem) problems.push(keyProblem);
+  if (brief.aggregate !== 'sum') {
+    problems.push(diagnostic('brief.option-not-used', `\`aggregate: ${brief.aggregate}\` is not used by intent distribution: every row is drawn (or counted into a bin) as it is`, {
+      path: '/aggregate', found: brief.aggregate, expected: 'no aggregate', hint: 'remove `aggregate:`, or use `intent: compare` to combine rows per key',
+    }));
+  }
   if (brief.form === 'histogram' && fields.keys.length > 0) {
     problems.push(diagnostic('choice.histogram-with-groups', `one histogram shows one distribution, but \`keys: ${fields.keys[0]!.name}\` splits the values into groups`, {
       path: '/form', found: 'histogram', expected: 'strip or box with a group key',

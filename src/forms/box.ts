@@ -47,5 +47,9 @@ export const BOX = groupsForm({
   article: 'a box plot',
   title: 'Box plot',
   marksOf: boxOf,
+  decisions: [
+    { decision: 'boxes from the first to the third quartile, the median across them', rule: 'quartiles by Hyndman & Fan (1996) definition 7, the default of R and d3-array, so the numbers match what readers compute' },
+    { decision: 'whiskers to the most extreme values within 1.5 IQR of the box; every value beyond drawn as a circle', rule: "Tukey's fences (Tukey 1977, Exploratory Data Analysis): unusual values are shown, not hidden in the whisker" },
+  ],
   how: 'Boxes span the middle half of the values (first to third quartile, Hyndman–Fan type 7) with the median as a thick line; whiskers reach the furthest values within 1.5 box lengths; circles are values beyond.',
 });

@@ -27,7 +27,7 @@ function chooseOrder(order: Order, key: FieldRef, form: string): { order: GroupO
 }
 
 /** The plan of a form that shows one value by group (strips, boxes): the group order and the value axis, each with its rule. */
-export function planGroups(input: PlanInput, form: string): Outcome<Planned<GroupsPlan>> {
+export function planGroups(input: PlanInput, form: string, marks: readonly Decision[]): Outcome<Planned<GroupsPlan>> {
   const key = refOf(input.fields.keys[0]!);
   const value = refOf(input.fields.values[0]!);
   const chosen = chooseOrder(input.brief.order, key, form);
@@ -36,6 +36,7 @@ export function planGroups(input: PlanInput, form: string): Outcome<Planned<Grou
     chosen.decision,
     { decision: 'groups as rows, values along a shared horizontal axis', rule: 'one common scale lets positions be compared across groups; rows give group labels room to be read without tilting' },
     { decision: 'the value axis spans the data and need not start at zero', rule: 'values are shown by position, not length, so zero is not needed for an honest reading' },
+    ...marks,
   ];
   return success({ plan: { key, value, order: chosen.order }, decisions });
 }

@@ -8,6 +8,7 @@ import type { CartesianDomains, FormWords, LayoutContext, PlotArea } from '../la
 import { valueFormatter } from '../layout/number-format.js';
 import type { Table } from '../table/types.js';
 import type { FormName } from '../brief/types.js';
+import type { Decision } from '../choose/types.js';
 import type { SceneNode } from '../scene/types.js';
 import { planGroups, type GroupsPlan } from './distribution-plan.js';
 import type { FormDef } from './types.js';
@@ -76,6 +77,8 @@ export interface GroupsFormSpec {
   marksOf(d: DerivedGroups, g: GroupDistribution, area: PlotArea, ctx: LayoutContext): SceneNode[];
   /** The note saying how to read the marks. */
   how: string;
+  /** The decisions about the marks, each with its rule. */
+  decisions: Decision[];
 }
 
 /** A form showing one value by group in rows on a shared value axis (strips, boxes), position-coded. */
@@ -84,7 +87,7 @@ export function groupsForm(spec: GroupsFormSpec): FormDef<GroupsPlan, DerivedGro
     name: spec.name,
     noun: spec.noun,
     traits: { lengthCoded: false, connectsKey: false, radial: false, coloursCategories: false, axisPerValue: false },
-    plan: (input) => planGroups(input, spec.article),
+    plan: (input) => planGroups(input, spec.article, spec.decisions),
     derive: (table, plan) => deriveGroups(table, plan),
     domains: groupDomains,
     layout: (d, area, ctx) => ({ marks: d.groups.flatMap((g) => spec.marksOf(d, g, area, ctx)), labels: [], diagnostics: [] }),

@@ -41,5 +41,9 @@ export const STRIP = groupsForm({
   article: 'a strip chart',
   title: 'Strip chart',
   marksOf: stripOf,
+  decisions: [
+    { decision: 'each value one dot, jittered across its row; the median marked by a line', rule: 'jitter keeps equal and near-equal values from hiding one another (common practice); it is seeded by the group\'s label, so the same data always gives the same picture' },
+    { decision: `dots ${STRIP_DOT_R} px, drawn at ${DOT_OPACITY} opacity`, rule: 'translucent dots read darker where they pile up, so density stays visible (common practice)' },
+  ],
   how: 'Each dot is one row, spread up and down at random (seeded, the same on every run) so that equal values stay visible; the dark line marks the median.',
 });

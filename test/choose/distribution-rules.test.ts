@@ -44,9 +44,16 @@ describe('rules for the distribution intent', () => {
     expect(r.rationale.some((d) => /need not start at zero/.test(d.decision))).toBe(true);
   });
 
-  it('more than 300 values in the largest group gets boxes', async () => {
+  it('more than 300 values in the largest group gets boxes; the rationale names type-7 quartiles and Tukey\'s fences', async () => {
     const r = await renderRows({ intent: 'distribution', keys: 'g', values: 'v', ...unit }, [...byGroup(['a'], 301), ...byGroup(['b'], 5)]);
     expect(r.choice).toMatchObject({ form: 'box', rule: 'distribution.groups-many-points' });
+    expect(decisionsOf(r)).toMatch(/Hyndman & Fan \(1996\) definition 7/);
+    expect(decisionsOf(r)).toMatch(/1\.5 IQR .*Tukey/);
+  });
+
+  it('strips say why their dots are jittered and seeded', async () => {
+    const r = await renderRows({ intent: 'distribution', keys: 'g', values: 'v', ...unit }, byGroup(['a', 'b'], 10));
+    expect(r.rationale.find((d) => d.decision.startsWith('each value one dot, jittered'))!.rule).toMatch(/seeded/);
   });
 
   it('exactly 300 values in the largest group still gets strips (the threshold is inclusive)', async () => {
@@ -107,6 +114,11 @@ describe('refusals and warnings of the distribution intent', () => {
   it('form: box with no group key: choice.no-group-key at /keys', async () => {
     const r = await renderRows({ intent: 'distribution', values: 'v', form: 'box', ...unit }, waits);
     expect(r.diagnostics.find((d) => d.code === 'choice.no-group-key')).toMatchObject({ path: '/keys' });
+  });
+
+  it('aggregate: on a distribution is refused (brief.option-not-used at /aggregate), never silently ignored', async () => {
+    const r = await renderRows({ intent: 'distribution', values: 'v', aggregate: 'mean', ...unit }, waits);
+    expect(r.diagnostics.find((d) => d.code === 'brief.option-not-used')).toMatchObject({ path: '/aggregate' });
   });
 
   it('baseline: fit on a histogram is refused (bar heights are lengths)', async () => {
