@@ -5,6 +5,9 @@ import type { Field, Fields } from '../fields/types.js';
 /** Most points per group drawn as a strip of dots; beyond it, boxes (common practice: a few hundred dots still read as a strip). */
 export const MAX_STRIP_POINTS = 300;
 
+/** Most groups drawn as rows before a warning (common practice: beyond about 40 rows, labels thin out and groups cannot be compared one by one). */
+export const MANY_GROUPS = 40;
+
 /** The number of usable values in the largest group of a distribution by its (single) key; all values without a key. */
 export function largestGroup(fields: Fields): number {
   const value = fields.values[0];
@@ -55,6 +58,13 @@ export function checkDistributionShape(fields: Fields, brief: ResolvedBrief): Di
   }
   const keyProblem = fields.keys[0] && groupKeyProblem(fields.keys[0]);
   if (keyProblem) problems.push(keyProblem);
+  const levels = fields.keys[0]?.levels.length ?? 0;
+  if (!keyProblem && levels > MANY_GROUPS) {
+    problems.push(diagnostic('choice.many-groups', `\`${fields.keys[0]!.name}\` has ${levels} groups, too many rows to label and compare one by one (more than ${MANY_GROUPS})`, {
+      path: '/keys', field: fields.keys[0]!.name, found: `${levels} groups`, expected: `at most ${MANY_GROUPS}`,
+      hint: 'combine the smallest groups before charting, or write one brief per subset of groups',
+    }));
+  }
   if (brief.aggregate !== 'sum') {
     problems.push(diagnostic('brief.option-not-used', `\`aggregate: ${brief.aggregate}\` is not used by intent distribution: every row is drawn (or counted into a bin) as it is`, {
       path: '/aggregate', found: brief.aggregate, expected: 'no aggregate', hint: 'remove `aggregate:`, or use `intent: compare` to combine rows per key',

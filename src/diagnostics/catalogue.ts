@@ -62,6 +62,7 @@ export const CATALOGUE = {
   'choice.group-key-not-categorical': 'error',
   'choice.histogram-with-groups': 'error',
   'choice.no-group-key': 'error',
+  'choice.many-groups': 'warning',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',

@@ -154,6 +154,15 @@ describe('refusals and warnings of the distribution intent', () => {
     expect(notes).toMatch(/2 rows with a missing key or a missing or non-finite value are not drawn/);
   });
 
+  it('more than 40 groups: choice.many-groups warns at /keys, and the chart is still drawn', async () => {
+    const r = await renderRows({ intent: 'distribution', keys: 'g', values: 'v', ...unit }, byGroup(Array.from({ length: 41 }, (_, i) => `G${i}`), 2));
+    expect(r.ok).toBe(true);
+    const d = r.diagnostics.find((x) => x.code === 'choice.many-groups')!;
+    expect(d).toMatchObject({ path: '/keys', severity: 'warning' });
+    const few = await renderRows({ intent: 'distribution', keys: 'g', values: 'v', ...unit }, byGroup(Array.from({ length: 40 }, (_, i) => `G${i}`), 2));
+    expect(codes(few)).not.toContain('choice.many-groups');
+  });
+
   it('no usable value at all: derive.no-rows', async () => {
     const r = await renderRows({ intent: 'distribution', values: 'v', fields: { v: { type: 'quantitative', unit: 'min' } } }, [{ v: null }, { v: '' }] as Record<string, unknown>[]);
     expect(codes(r)).toContain('derive.no-rows');
