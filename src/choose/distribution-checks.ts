@@ -34,22 +34,9 @@ function groupKeyProblem(key: Field): Diagnostic | undefined {
   });
 }
 
-/** Checks the brief's data shape against what the distribution intent can show: one quantitative value, at most one group key. */
-export function checkDistributionShape(fields: Fields, brief: ResolvedBrief): Diagnostic[] {
+/** The group key's problems: more than one, not groups, or too many groups. */
+function keyProblems(fields: Fields): Diagnostic[] {
   const problems: Diagnostic[] = [];
-  if (fields.values.length === 0) {
-    const numeric = fields.all.filter((f) => f.type === 'quantitative' && !brief.keys.includes(f.name)).map((f) => f.name);
-    problems.push(diagnostic('choice.no-value', 'a distribution needs a value: the numeric column whose spread is shown', {
-      path: '/values', expected: 'one numeric column', hint: numeric.length ? `add \`values: ${numeric[0]}\`` : 'add `values:` naming a numeric column',
-    }));
-  }
-  for (const value of fields.values) {
-    if (value.type === 'quantitative') continue;
-    problems.push(diagnostic('choice.value-not-quantitative', `the value \`${value.name}\` is ${value.type}, but a distribution is drawn along a number scale`, {
-      path: '/values', field: value.name, found: value.type, expected: 'a quantitative column',
-      hint: `to count rows per ${value.name}, use \`intent: compare\` with \`keys: ${value.name}\` and \`aggregate: count\`; or set \`fields.${value.name}.type: quantitative\` if it holds numbers`,
-    }));
-  }
   if (fields.keys.length > 1) {
     problems.push(diagnostic('choice.too-many-keys', `a distribution is split by at most one group key, not ${fields.keys.length}`, {
       path: '/keys', found: fields.keys.map((k) => k.name).join(', '), expected: 'none (one histogram) or one group column',
@@ -65,6 +52,12 @@ export function checkDistributionShape(fields: Fields, brief: ResolvedBrief): Di
       hint: 'combine the smallest groups before charting, or write one brief per subset of groups',
     }));
   }
+  return problems;
+}
+
+/** Options the distribution forms have no use for, and a pinned form the keys do not fit. */
+function formProblems(fields: Fields, brief: ResolvedBrief): Diagnostic[] {
+  const problems: Diagnostic[] = [];
   if (brief.aggregate !== 'sum') {
     problems.push(diagnostic('brief.option-not-used', `\`aggregate: ${brief.aggregate}\` is not used by intent distribution: every row is drawn (or counted into a bin) as it is`, {
       path: '/aggregate', found: brief.aggregate, expected: 'no aggregate', hint: 'remove `aggregate:`, or use `intent: compare` to combine rows per key',
@@ -82,4 +75,23 @@ export function checkDistributionShape(fields: Fields, brief: ResolvedBrief): Di
     }));
   }
   return problems;
+}
+
+/** Checks the brief's data shape against what the distribution intent can show: one quantitative value, at most one group key. */
+export function checkDistributionShape(fields: Fields, brief: ResolvedBrief): Diagnostic[] {
+  const problems: Diagnostic[] = [];
+  if (fields.values.length === 0) {
+    const numeric = fields.all.filter((f) => f.type === 'quantitative' && !brief.keys.includes(f.name)).map((f) => f.name);
+    problems.push(diagnostic('choice.no-value', 'a distribution needs a value: the numeric column whose spread is shown', {
+      path: '/values', expected: 'one numeric column', hint: numeric.length ? `add \`values: ${numeric[0]}\`` : 'add `values:` naming a numeric column',
+    }));
+  }
+  for (const value of fields.values) {
+    if (value.type === 'quantitative') continue;
+    problems.push(diagnostic('choice.value-not-quantitative', `the value \`${value.name}\` is ${value.type}, but a distribution is drawn along a number scale`, {
+      path: '/values', field: value.name, found: value.type, expected: 'a quantitative column',
+      hint: `to count rows per ${value.name}, use \`intent: compare\` with \`keys: ${value.name}\` and \`aggregate: count\`; or set \`fields.${value.name}.type: quantitative\` if it holds numbers`,
+    }));
+  }
+  return [...problems, ...keyProblems(fields), ...formProblems(fields, brief)];
 }
