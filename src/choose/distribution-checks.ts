@@ -90,7 +90,7 @@ export function checkDistributionShape(fields: Fields, brief: ResolvedBrief): Di
     if (value.type === 'quantitative') continue;
     problems.push(diagnostic('choice.value-not-quantitative', `the value \`${value.name}\` is ${value.type}, but a distribution is drawn along a number scale`, {
       path: '/values', field: value.name, found: value.type, expected: 'a quantitative column',
-      hint: `to count rows per ${value.name}, use \`intent: compare\` with \`keys: ${value.name}\` and \`aggregate: count\`; or set \`fields.${value.name}.type: quantitative\` if it holds numbers`,
+      hint: `set \`fields.${value.name}.type: quantitative\` if it holds numbers (cells that are not numbers are then named by row), or choose a numeric column for \`values:\``,
     }));
   }
   return [...problems, ...keyProblems(fields), ...formProblems(fields, brief)];

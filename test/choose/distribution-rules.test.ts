@@ -89,7 +89,7 @@ describe('refusals and warnings of the distribution intent', () => {
     const r = await renderRows({ intent: 'distribution', values: 'g' }, byGroup(['a', 'b'], 3));
     const d = r.diagnostics.find((x) => x.code === 'choice.value-not-quantitative')!;
     expect(d.path).toBe('/values');
-    expect(d.hint).toMatch(/compare/);
+    expect(d.hint).toMatch(/type: quantitative/);
   });
 
   it('two keys: choice.too-many-keys at /keys', async () => {
