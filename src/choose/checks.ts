@@ -3,6 +3,7 @@ import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
 import { applyHardRules } from './hard-rules.js';
 import { partsShapeChecks } from './parts-checks.js';
+import { checkDistributionShape } from './distribution-checks.js';
 import { formsForIntent } from './rules.js';
 import { checkTrendShape } from './trend-checks.js';
 import { checkScheduleShape } from './schedule-checks.js';
@@ -55,6 +56,7 @@ export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: Resolv
   schedule: checkScheduleShape,
   correlation: checkCorrelationShape,
   ...partsShapeChecks(checkCompareShape),
+  distribution: checkDistributionShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */

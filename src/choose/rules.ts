@@ -1,6 +1,7 @@
 import type { FormName, Intent, ResolvedBrief } from '../brief/types.js';
 import type { Fields } from '../fields/types.js';
 import { isOrdered } from '../fields/types.js';
+import { largestGroup, MAX_STRIP_POINTS } from './distribution-checks.js';
 
 /** One row of the rule table: when it applies, the form it leads to, and why. */
 export interface Rule {
@@ -125,6 +126,27 @@ export const RULES: readonly Rule[] = [
     form: 'donut',
     applies: (f) => f.keys.length === 1,
     why: 'the brief pins a donut: drawn for 2 or 3 parts only, whose few large angles are read well enough',
+  },
+  {
+    id: 'distribution.one-value',
+    intent: 'distribution',
+    form: 'histogram',
+    applies: (f) => f.keys.length === 0 && f.values.length === 1,
+    why: 'one quantitative value and no groups: a histogram shows where values gather, spread and trail off, by counts in equal bins read from a common baseline',
+  },
+  {
+    id: 'distribution.groups-few-points',
+    intent: 'distribution',
+    form: 'strip',
+    applies: (f) => f.keys.length === 1 && largestGroup(f) <= MAX_STRIP_POINTS,
+    why: `a value by group, at most ${MAX_STRIP_POINTS} values in any group: every value drawn as a jittered dot, so clusters, gaps and sample size stay visible (a summary would hide them)`,
+  },
+  {
+    id: 'distribution.groups-many-points',
+    intent: 'distribution',
+    form: 'box',
+    applies: (f) => f.keys.length === 1 && largestGroup(f) > MAX_STRIP_POINTS,
+    why: `a value by group, more than ${MAX_STRIP_POINTS} values in the largest group: dots would pile into a smear, so each group is summarised by a box plot (quartiles, whiskers, outliers; Tukey 1977)`,
   },
 ];
 

@@ -70,6 +70,10 @@ export const CATALOGUE = {
   'choice.dumbbell-units-differ': 'error',
   'choice.aggregate-not-additive': 'error',
   'choice.donut-too-many-parts': 'error',
+  'choice.group-key-not-categorical': 'error',
+  'choice.histogram-with-groups': 'error',
+  'choice.no-group-key': 'error',
+  'choice.many-groups': 'warning',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -102,6 +106,7 @@ export const CATALOGUE = {
   'derive.parts-folded': 'warning',
   'derive.zero-total': 'warning',
   'derive.whole-is-zero': 'error',
+  'derive.cannot-bin': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',

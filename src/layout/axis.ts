@@ -48,6 +48,13 @@ function labelsThatFit(ticks: number[], sizes: number[], length: number, gap: nu
   return shown;
 }
 
+/** The d3-format specifier of a number style, or the specifier itself (a style may come as either). */
+function formatOf(style: unknown): string {
+  if (typeof style === 'string') return style;
+  const format = typeof style === 'object' && style !== null ? (style as { format?: unknown }).format : undefined;
+  return typeof format === 'string' ? format : '';
+}
+
 /**
  * Ticks for a value axis of `length` px that covers [lo, hi] (and zero, for bars). The domain
  * is fitted to the outer ticks. Fewer ticks are tried until no two labels overlap; where even
@@ -57,8 +64,11 @@ export function valueTicks(lo: number, hi: number, length: number, direction: 'v
   const gap = style.size * 0.5;
   // A non-finite length (a defect upstream) must not leave m as NaN, which never reaches 2.
   const wanted = Number.isFinite(length) ? Math.round(length / PX_PER_TICK[direction]) + 1 : 2;
+  // A value written as whole numbers (d3-format type "d", e.g. counts) gets whole-number ticks: no "2.5 rows".
+  const whole = /d$/.test(formatOf(specifier));
   for (let m = Math.max(2, Math.min(10, wanted)); ; m--) {
     const ticks = niceTicks(lo, hi, m, true);
+    if (whole && m > 2 && !ticks.every(Number.isInteger)) continue;
     const labels = ticks.map(tickFormatter(ticks, specifier));
     const shown = labelsThatFit(ticks, extents(labels, direction, style, measure), length, gap);
     if (shown.every(Boolean) || m <= 2) return { ticks, labels, shown, domain: [ticks[0]!, ticks[ticks.length - 1]!] };

@@ -1,5 +1,5 @@
-import type { BarPlan } from '../../src/forms/bar-plan.js';
 import { readFileSync } from 'node:fs';
+import type { BarPlan } from '../../src/forms/bar-plan.js';
 import { describe, expect, it } from 'vitest';
 import { bars, checkBarContracts } from './bar-contracts.js';
 import { demoBriefs, renderDemo, renderRows } from '../helpers.js';
