@@ -92,6 +92,10 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
       color: { type: 'string', minLength: 1, description: 'For intent correlation: the column coded by colour.' },
       shape: { type: 'string', minLength: 1, description: 'For intent correlation: the column coded by shape.' },
       area: { type: 'string', minLength: 1, description: 'For intent correlation: the column whose value each circle\'s area shows (`size` is the frame).' },
+      facet: {
+        description: 'Small multiples: one panel per level of this column, all on shared scales; `{ by, context: true }` also draws the other panels in grey behind each.',
+        anyOf: [{ type: 'string', minLength: 1 }, { type: 'object', additionalProperties: false, required: ['by'], properties: { by: { type: 'string', minLength: 1 }, context: { type: 'boolean', default: false } } }],
+      },
     },
   };
 }

@@ -5,6 +5,7 @@ import type { TextMeasurer } from '../font/measurer.js';
 import type { Style } from '../style/types.js';
 import type { Table } from '../table/types.js';
 import { checkBriefRules, checkValueUnit, SHAPE_CHECKS } from './checks.js';
+import { chooseFacet } from './facet.js';
 import { applyHardRules } from './hard-rules.js';
 import { matchRule } from './rules.js';
 import type { Candidate, Choice, Decision } from './types.js';
@@ -50,5 +51,9 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext,
   problems.push(...planned.diagnostics);
   if (!planned.ok || hasErrors(problems)) return failure(problems);
   rationale.push(...planned.value.decisions);
-  return success({ form: form.name, intent: brief.intent, rule: rule?.id ?? 'pinned', plan: planned.value.plan, rationale }, problems);
+  const faceted = chooseFacet(fields, brief, form, planned.value.facet);
+  problems.push(...faceted.problems);
+  if (hasErrors(problems)) return failure(problems);
+  rationale.push(...faceted.decisions);
+  return success({ form: form.name, intent: brief.intent, rule: rule?.id ?? 'pinned', plan: planned.value.plan, rationale, ...(faceted.facet ? { facet: faceted.facet } : {}) }, problems);
 }

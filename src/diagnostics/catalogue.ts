@@ -59,6 +59,9 @@ export const CATALOGUE = {
   'choice.line-on-categorical': 'error',
   'choice.radial-not-cyclic': 'error',
   'choice.too-many-colours': 'error',
+  'choice.facet-not-supported': 'error',
+  'choice.facet-on-key': 'error',
+  'choice.too-many-groups': 'warning',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -67,6 +70,7 @@ export const CATALOGUE = {
   'derive.too-many-ordered-bars': 'error',
   'derive.uneven-dates': 'warning',
   'derive.not-finite': 'error',
+  'derive.too-many-grouped-bars': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',
@@ -75,6 +79,7 @@ export const CATALOGUE = {
   'layout.text-off-canvas': 'warning',
   'layout.text-overlap': 'warning',
   'layout.labels-unplaced': 'warning',
+  'layout.panels-refused': 'warning',
   // output
   'output.write-failed': 'error',
   'output.raster-failed': 'error',

@@ -1,4 +1,4 @@
-import { max, min } from 'd3-array';
+import { fsum, max, min } from 'd3-array';
 import { deriveBars, type BarDatum, type CapacityFor, type DerivedBars } from '../derive/bars.js';
 import { plotFor } from '../layout/compose.js';
 import { memoized, type CartesianDomains, type LabelRoom, type LayoutContext, type PlotArea, type ScaleProbe } from '../layout/kit-types.js';
@@ -122,6 +122,7 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
   derive: (table, plan, ctx) => deriveBars(table, plan, capacityFor(plan, ctx), barGroups(table, plan.key, plan.value, ctx)),
   domains: (derived) => domainsOf(derived, derived.query.orientation === 'vertical'),
   room: labelRoom,
+  facets: { noun: 'total', value: (derived) => fsum(derived.bars, (b) => b.value), minBand: () => MIN_BAND_PX },
   layout(derived, area, ctx) {
     const texts = valueTexts(derived, ctx);
     const marks: SceneNode[] = [];

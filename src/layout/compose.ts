@@ -13,6 +13,7 @@ import { memoized, ticksFor, type CartesianDomains, type FormMarks, type FormWor
 import { plotBox, tickCount, type PlotBox } from './plot-box.js';
 import { bandScale, linearScale, type BandScale, type LinearScale, type Scale } from './scales.js';
 import { timeScale, type TimeScale } from './time-scale.js';
+import type { FacetHooks } from './facet-types.js';
 
 /** What the composer needs of a form drawn on a left and a bottom axis. */
 export interface CartesianForm<D> {
@@ -22,6 +23,8 @@ export interface CartesianForm<D> {
   /** Room the form's own labels need beyond its marks, measured against a first look at the scales. Default: none. */
   room?(derived: D, probe: ScaleProbe, ctx: LayoutContext): LabelRoom;
   layout(derived: D, area: PlotArea, ctx: LayoutContext): FormMarks;
+  /** Present when the form can be drawn as small multiples (src/layout/facet-compose.ts). Default: none. */
+  facets?: FacetHooks<D>;
 }
 
 const NO_ROOM: LabelRoom = { low: 0, high: 0, show: false };
@@ -62,7 +65,8 @@ function bottomTime(channel: TimeChannel, plot: Box, ctx: LayoutContext): TimeSc
   return timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'));
 }
 
-interface FittedScales { x: Scale; y: Scale; room: LabelRoom }
+/** Both scales of a plot and the room taken for the form's labels. */
+export interface FittedScales { x: Scale; y: Scale; room: LabelRoom }
 
 /** Both scales over the plot box, with the given room taken for the form's labels. */
 function scalesWith(domains: CartesianDomains, box: PlotBox, bottomProbe: ValueTicks | undefined, bottomBand: BandScale | undefined, room: LabelRoom, side: 'left' | 'bottom' | undefined, ctx: LayoutContext): FittedScales {
@@ -84,7 +88,7 @@ const holds = (given: LabelRoom, again: LabelRoom) => again.show === given.show 
  * ticks, and so domain, may differ), and widened until it holds, so a label never lands beyond
  * the plot on a scale it was not measured against.
  */
-function fitScales<D>(form: CartesianForm<D>, derived: D, domains: CartesianDomains, box: PlotBox, ctx: LayoutContext): FittedScales {
+export function fitScales<D>(form: CartesianForm<D>, derived: D, domains: CartesianDomains, box: PlotBox, ctx: LayoutContext): FittedScales {
   const { plot, left } = box;
   const bottomBand = domains.bottom.kind === 'band' ? bandScale(domains.bottom.domain, [plot.x, plot.x + plot.width], ctx.style.spacing.bandPadding) : undefined;
   const leftBand: BandScale | undefined = left.kind === 'band' ? left.band : undefined;
@@ -104,7 +108,8 @@ function fitScales<D>(form: CartesianForm<D>, derived: D, domains: CartesianDoma
   }
 }
 
-function drawAxis(side: 'left' | 'bottom', domains: CartesianDomains, scales: FittedScales, box: PlotBox, body: Box, ctx: LayoutContext): DrawnAxis {
+/** One axis of a plot, drawn by the drawer for its channel and scale. */
+export function drawAxis(side: 'left' | 'bottom', domains: CartesianDomains, scales: FittedScales, box: PlotBox, body: Box, ctx: LayoutContext): DrawnAxis {
   const channel = domains[side];
   const scale = side === 'left' ? scales.y : scales.x;
   if (channel.kind === 'linear' && scale.kind === 'linear') return drawLinearAxis(side, scale, channel, box.plot, body, ctx, domains.zeroLine === side);
@@ -114,7 +119,8 @@ function drawAxis(side: 'left' | 'bottom', domains: CartesianDomains, scales: Fi
   throw new Error(`no axis drawer for a ${channel.kind} channel on the ${side}`);
 }
 
-function zeroLine(domains: CartesianDomains, scales: FittedScales, plot: Box, ctx: LayoutContext): SceneNode[] {
+/** The zero line across a plot, where the form asks for one. */
+export function zeroLine(domains: CartesianDomains, scales: FittedScales, plot: Box, ctx: LayoutContext): SceneNode[] {
   const { lines } = ctx.style;
   if (domains.zeroLine === 'left' && scales.y.kind === 'linear') return [rule('zero-line', 'zero-line', plot.x, scales.y.map(0), plot.x + plot.width, scales.y.map(0), lines.zero, lines.zeroWidth)];
   if (domains.zeroLine === 'bottom' && scales.x.kind === 'linear') return [rule('zero-line', 'zero-line', scales.x.map(0), plot.y, scales.x.map(0), plot.y + plot.height, lines.zero, lines.zeroWidth)];
