@@ -31,6 +31,13 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type),
     why: 'one ordered key and one value: bars in key order, because the order of the key carries meaning',
   },
+  {
+    id: 'compare.two-keys',
+    intent: 'compare',
+    form: 'grouped-bar',
+    applies: (f) => f.keys.length === 2,
+    why: 'two keys and one value: bars grouped by the first key, one bar per level of the second side by side in its own colour, so values compare by length within each key and each group can be followed across keys',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */
