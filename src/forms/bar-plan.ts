@@ -37,8 +37,7 @@ function barsOf(input: PlanInput, key: Field, value: Field | undefined): { label
   return { labels: groups.map((g) => g.labels[0]!), extent: lo === undefined || hi === undefined ? [0, 1] : [lo, hi] };
 }
 
-/** The order of the bars (or of a grouped chart's keys): the brief's `order:`, else by value for a categorical key and in key order for an ordered one. */
-export function chooseOrder(input: PlanInput, key: Field, problems: Diagnostic[], decisions: Decision[]): BarPlan['order'] {
+function chooseOrder(input: PlanInput, key: Field, problems: Diagnostic[], decisions: Decision[]): BarPlan['order'] {
   let order = input.brief.order;
   if (order === 'cluster') {
     problems.push(diagnostic(input.lenient ? 'choice.lenient-fallback' : 'choice.order-not-applicable', '`order: cluster` applies to heat maps, not to bars', {
@@ -62,7 +61,7 @@ export function chooseOrder(input: PlanInput, key: Field, problems: Diagnostic[]
  * Upright or lying bars: upright when the key runs like time or numbers, or when every label fits
  * its band in the plot box that upright bars would get (measured by the composer's own plot box).
  */
-export function chooseOrientation(input: PlanInput, key: Field, value: Field | undefined): { vertical: boolean; decision: Decision } {
+function chooseOrientation(input: PlanInput, key: Field, value: Field | undefined): { vertical: boolean; decision: Decision } {
   const { brief, style, measure } = input;
   if (key.type === 'temporal' || key.type === 'quantitative') {
     return { vertical: true, decision: { decision: 'vertical bars', rule: `the key is ${key.type}, so it runs left to right as time and numbers do; labels are thinned if crowded` } };

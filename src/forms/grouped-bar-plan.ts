@@ -1,11 +1,11 @@
 import type { Decision } from '../choose/types.js';
-import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import { diagnostic, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import { AGGREGATORS } from '../derive/aggregate.js';
 import type { GroupedBarQuery } from '../derive/grouped-bars.js';
 import { groupRows } from '../derive/group.js';
 import { compareText } from '../derive/order.js';
 import { isOrdered, refOf, type Field } from '../fields/types.js';
-import { chooseOrder, chooseOrientation, type BarPlan } from './bar-plan.js';
+import { planBar, type BarPlan } from './bar-plan.js';
 import type { Planned, PlanInput } from './types.js';
 
 /** Most groups side by side within a key before the bars stop reading as one group each (common practice: about 6). */
@@ -36,25 +36,18 @@ function tooManyGroups(group: Field, n: number): Diagnostic {
   });
 }
 
-/** The grouped bar form's plan: the keys' order and orientation (as for bars), the groups' one order and their colours, each decision with its rule. */
+/** The grouped bar form's plan: the bar plan for its first key (order, orientation, how rows combine), then the groups' one order and their colours, each decision with its rule. */
 export function planGroupedBar(input: PlanInput): Outcome<Planned<GroupedBarPlan>> {
-  const { fields, brief, style } = input;
-  const [key, group] = [fields.keys[0]!, fields.keys[1]!];
-  const value = fields.values[0];
-  const problems: Diagnostic[] = [];
-  const decisions: Decision[] = [];
-  const order = chooseOrder(input, key, problems, decisions);
-  if (problems.some((p) => p.severity === 'error')) return failure(problems);
-  const orientation = chooseOrientation(input, key, value);
-  decisions.push(orientation.decision);
-  const { groups, decision } = groupOrder(input, group, value);
+  const bars = planBar(input);
+  if (!bars.ok) return bars;
+  const group = input.fields.keys[1]!;
+  const problems: Diagnostic[] = [...bars.diagnostics];
+  const decisions: Decision[] = [...bars.value.decisions];
+  const { groups, decision } = groupOrder(input, group, input.fields.values[0]);
   decisions.push(decision);
   decisions.push({ decision: `a legend names the ${groups.length} groups of \`${group.name}\``, rule: 'compare.two-keys: the groups are told apart by colour, so a key to the colours is needed; it lists them in the order they stand' });
   if (groups.length > MAX_GROUPS) problems.push(tooManyGroups(group, groups.length));
-  if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same keys combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });
-  const colours = groups.map((_, i) => style.palette.categorical[i % style.palette.categorical.length]!);
-  return success({
-    plan: { key: refOf(key), group: refOf(group), value: value && refOf(value), orientation: orientation.vertical ? 'vertical' : 'horizontal', order, aggregate: brief.aggregate, groups, colours },
-    decisions,
-  }, problems);
+  const { categorical } = input.style.palette;
+  const colours = groups.map((_, i) => categorical[i % categorical.length]!);
+  return success({ plan: { ...bars.value.plan, group: refOf(group), groups, colours }, decisions }, problems);
 }
