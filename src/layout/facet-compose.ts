@@ -115,19 +115,38 @@ function drawPanels<D>(form: FacetForm<D>, shown: readonly FacetPanel<D>[], doma
   return out;
 }
 
+/**
+ * The frame, the grid and each panel's scales: the grid settled with its note, the domains
+ * narrowed to the panels drawn (a panel left out must not stretch the scales), and the label
+ * column widened once if the ticks drawn need more than the first measure.
+ */
+function placePanels<D>(form: FacetForm<D>, whole: D, panels: readonly FacetPanel<D>[], notes: string[], ctx: LayoutContext) {
+  const domainsOf = (of: readonly FacetPanel<D>[]) => unionDomains(form.domains(whole, ctx), of.map((p) => form.domains(p.derived, { ...ctx, memo: p.memo })));
+  const settled = settleGrid(form, panels, domainsOf(panels), notes, ctx);
+  const { body } = settled.framed;
+  let layout = settled.layout;
+  const fitted = layout.grid.panels.length;
+  let domains = domainsOf(panels);
+  if (fitted > 0 && fitted < panels.length) {
+    const own = domainsOf(panels.slice(0, fitted));
+    const again = facetPanels(body, own, fitted, settled.minPlot, ctx);
+    if (again.grid.panels.length === fitted) { domains = own; layout = again; }
+  }
+  let scales = panelScales(form, panels.slice(0, fitted), domains, layout, ctx);
+  const need = leftLabelsNeed(scales[0], ctx);
+  if (need > layout.leftColumn + 1e-9) {
+    const wider = facetPanels(body, domains, fitted, settled.minPlot, ctx, need);
+    // Widening must not cost a panel that the note already counts as drawn.
+    if (wider.grid.panels.length === fitted) { layout = wider; scales = panelScales(form, panels.slice(0, fitted), domains, layout, ctx); }
+  }
+  return { framed: settled.framed, layout, domains, scales };
+}
+
 function composeFacets<D>(form: FacetForm<D>, whole: D, panels: readonly FacetPanel<D>[], spec: FacetSpec, ctx: LayoutContext, extraNotes: string[], drop: ReadonlySet<string>): Composed {
   const { brief, measure } = ctx;
   const words = facetWords(form, whole, panels, spec, ctx);
-  const domains = unionDomains(form.domains(whole, ctx), panels.map((p) => form.domains(p.derived, { ...ctx, memo: p.memo })));
-  const settled = settleGrid(form, panels, domains, [...words.notes, ...extraNotes], ctx);
-  const { frame, body, legend } = settled.framed;
-  let layout = settled.layout;
-  let scales = panelScales(form, panels, domains, layout, ctx);
-  // The ticks drawn can need a wider label column than the first measure: widen it, once.
-  if (leftLabelsNeed(scales[0], ctx) > layout.leftColumn + 1e-9) {
-    layout = facetPanels(body, domains, layout.grid.panels.length, settled.minPlot, ctx, leftLabelsNeed(scales[0], ctx));
-    scales = panelScales(form, panels, domains, layout, ctx);
-  }
+  const { framed, layout, domains, scales } = placePanels(form, whole, panels, [...words.notes, ...extraNotes], ctx);
+  const { frame, body, legend } = framed;
   const shown = panels.slice(0, layout.grid.panels.length);
   if (shown.length === 0) {
     return { scene: sceneOf(form.name, words, [...frame.texts], [{ id: 'panel', plot: layout.region, axes: [] }], legend, ctx), diagnostics: [noPanel(spec.field, brief.size)], dropped: [] };

@@ -75,6 +75,19 @@ describe('small multiples: perceptual contracts', () => {
     for (const p of dump.panels) expect(Math.min(p.plot.width, p.plot.height)).toBeGreaterThanOrEqual(40);
   });
 
+  it('a panel left out does not stretch the scales of the panels drawn', async () => {
+    // "Odd" totals 0.5, the smallest, so it is the first left out; its values span -99.5 to 100.
+    const rows = [...sites(14), { site: 'Odd', k: 'a', v: 100 }, { site: 'Odd', k: 'b', v: -99.5 }];
+    const r = await renderRows(brief({ size: { width: 400, height: 300 } }), rows);
+    const dump = dumpScene(r.scene!);
+    expect(dump.panels.map((p) => p.facet!.site)).not.toContain('Odd');
+    const drawnMax = Math.max(...dump.marks.filter((m) => m.role === 'bar').map((m) => m.datum!.v as number));
+    const [lo, hi] = dump.panels[0]!.axes.find((a) => a.orient === 'left')!.domain as number[];
+    expect(lo).toBe(0);
+    expect(hi).toBeLessThan(100);
+    expect(hi).toBeGreaterThanOrEqual(drawnMax);
+  });
+
   it('with `context: true` each panel shows the other panels\' marks in grey, behind its own, with no datum', async () => {
     const r = await renderRows(brief({ facet: { by: 'site', context: true } }), sites(3));
     const dump = dumpScene(r.scene!);
