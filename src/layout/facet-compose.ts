@@ -10,6 +10,7 @@ import { facetPanels, type FacetPanels } from './facet-panels.js';
 import type { FacetHooks } from './facet-types.js';
 import { facetWords, greyed, panelTitle, refusalNote } from './facet-words.js';
 import type { CartesianDomains, LayoutContext } from './kit-types.js';
+import { capText } from './text.js';
 
 /** One panel to draw: its facet level, the form's numbers for its rows, and its own memory of measured results. */
 export interface FacetPanel<D> {
@@ -29,11 +30,18 @@ export interface FacetSpec {
 /** A form that can be drawn as small multiples. */
 export type FacetForm<D> = CartesianForm<D> & { facets: FacetHooks<D> };
 
-/** The smallest plot a panel may have: MIN_PLOT_PX either way, and every band at least as thick as the form's marks need. */
-function minimumPlot<D>(form: FacetForm<D>, panels: readonly FacetPanel<D>[], domains: CartesianDomains): { width: number; height: number } {
+/**
+ * The smallest plot a panel may have: MIN_PLOT_PX either way, every band at least as thick as
+ * the form's marks need, and as wide as the widest label of a bottom band axis (labels can be
+ * thinned, but one label wider than its panel would run into the next).
+ */
+function minimumPlot<D>(form: FacetForm<D>, panels: readonly FacetPanel<D>[], domains: CartesianDomains, ctx: LayoutContext): { width: number; height: number } {
   const band = Math.max(1, ...panels.map((p) => form.facets.minBand?.(p.derived) ?? 1));
   const along = (side: 'left' | 'bottom') => { const c = domains[side]; return c.kind === 'band' ? c.domain.length * band : 0; };
-  return { width: Math.max(MIN_PLOT_PX, along('bottom')), height: Math.max(MIN_PLOT_PX, along('left')) };
+  const { tick } = ctx.style.text;
+  const bottom = domains.bottom;
+  const widest = bottom.kind === 'band' ? Math.max(0, ...bottom.domain.map((l) => ctx.measure.width(capText(l), tick.size, tick.weight))) : 0;
+  return { width: Math.max(MIN_PLOT_PX, along('bottom'), widest), height: Math.max(MIN_PLOT_PX, along('left')) };
 }
 
 /** Scales for each panel, all over the same domains and plot size (so the same ticks), with room for every panel's labels. */
@@ -56,13 +64,13 @@ function leftLabelsNeed(scales: FittedScales | undefined, ctx: LayoutContext): n
 
 /** The grid and the notes it needs: panels that do not fit are named in a note, which takes room, so settle until the note holds. */
 function settleGrid<D>(form: FacetForm<D>, panels: readonly FacetPanel<D>[], domains: CartesianDomains, notes: string[], ctx: LayoutContext) {
-  const minPlot = minimumPlot(form, panels, domains);
+  const minPlot = minimumPlot(form, panels, domains, ctx);
   let all = notes;
   for (let i = 0; ; i++) {
     const framed = frameFor(domains.legend, all, ctx);
     const layout = facetPanels(framed.body, domains, panels.length, minPlot, ctx);
     const shown = layout.grid.panels.length;
-    const note = shown < panels.length && shown > 0 ? [refusalNote(panels.slice(shown).map((p) => p.level), shown, panels.length)] : [];
+    const note = shown < panels.length ? [refusalNote(panels.slice(shown).map((p) => p.level), shown, panels.length)] : [];
     const next = [...notes, ...note];
     if (i === 3 || next.join('\u0000') === all.join('\u0000')) return { framed, layout, notes: all, minPlot };
     all = next;

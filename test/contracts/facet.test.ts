@@ -88,6 +88,19 @@ describe('small multiples: perceptual contracts', () => {
     expect(hi).toBeGreaterThanOrEqual(drawnMax);
   });
 
+  it('a bottom key label wider than a panel widens the panels (fewer fit), never running into the next (found by the property test)', async () => {
+    const rows = ['A', 'B', 'C'].map((site, i) => ({ site, k: 'a'.repeat(60), v: i + 1 }));
+    const r = await renderRows(brief({ size: { width: 794, height: 300 } }), rows);
+    const dump = dumpScene(r.scene!);
+    checkFacetContracts(dump, 'site');
+    expect(codes(r)).not.toContain('layout.text-overlap');
+    const label = dump.texts.find((t) => t.role === 'tick' && t.text.startsWith('aaa'))!;
+    for (const p of dump.panels) expect(p.plot.width).toBeGreaterThanOrEqual(label.width);
+    // 3 panels at 240 px would fit side by side; the label's 363 px allow only 2 per row.
+    expect(new Set(dump.panels.map((p) => p.plot.x)).size).toBe(2);
+    expect(dump.panels).toHaveLength(3);
+  });
+
   it('with `context: true` each panel shows the other panels\' marks in grey, behind its own, with no datum', async () => {
     const r = await renderRows(brief({ facet: { by: 'site', context: true } }), sites(3));
     const dump = dumpScene(r.scene!);
