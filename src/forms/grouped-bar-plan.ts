@@ -42,7 +42,8 @@ export function planGroupedBar(input: PlanInput): Outcome<Planned<GroupedBarPlan
   if (!bars.ok) return bars;
   const group = input.fields.keys[1]!;
   const problems: Diagnostic[] = [...bars.diagnostics];
-  const decisions: Decision[] = [...bars.value.decisions];
+  // The bar plan sorts bars; here it sorts keys, each by its value over all its groups.
+  const decisions: Decision[] = bars.value.decisions.map((d) => (bars.value.plan.order === 'value' && d.decision.startsWith('bars sorted by value') ? { ...d, decision: 'keys sorted by their overall value, largest first; ties by label' } : d));
   const { groups, decision } = groupOrder(input, group, input.fields.values[0]);
   decisions.push(decision);
   decisions.push({ decision: `a legend names the ${groups.length} groups of \`${group.name}\``, rule: 'compare.two-keys: the groups are told apart by colour, so a key to the colours is needed; it lists them in the order they stand' });

@@ -79,7 +79,8 @@ describe('rules for grouped bars', () => {
     const r = await renderRows(grouped(), two(3));
     expect(r.choice!.form).toBe('grouped-bar');
     expect(r.rationale[0]!.rule).toMatch(/^compare\.two-keys/);
-    expect(r.rationale.map((d) => d.decision)).toEqual(expect.arrayContaining(['the value axis starts at zero', 'a legend names the 3 groups of `g`']));
+    expect(r.rationale.map((d) => d.decision)).toEqual(expect.arrayContaining(['the value axis starts at zero', 'a legend names the 3 groups of `g`', 'keys sorted by their overall value, largest first; ties by label']));
+    expect(r.rationale.some((d) => d.decision.startsWith('bars sorted'))).toBe(false);
     expect(codes(r)).toEqual([]);
   });
 
