@@ -6,6 +6,7 @@ import { layoutFacets, type FacetForm, type FacetPanel } from '../layout/facet-c
 import type { LayoutContext } from '../layout/kit-types.js';
 import type { Scene } from '../scene/types.js';
 import type { Table } from '../table/types.js';
+import { PanelMemo } from './panel-memo.js';
 
 /** A small-multiples render: its scene (when it could be drawn), diagnostics, and the decisions made while laying it out. */
 export interface FacetedChart {
@@ -49,13 +50,14 @@ export function renderFacets(form: AnyForm, table: Table, choice: Choice, ctx: L
   if (!canFacet(form)) {
     return { decisions: [], diagnostics: [diagnostic('render.internal', `the ${form.noun} was chosen for small multiples but cannot be drawn in panels; this is a defect in chartwright`, { hint: 'please report it with the brief and data' })] };
   }
-  const whole = form.derive(table, choice.plan, { ...ctx, memo: new Map() });
+  const chartMemo = ctx.memo ?? new Map<string, unknown>();
+  const whole = form.derive(table, choice.plan, { ...ctx, memo: new PanelMemo(chartMemo) });
   if (!whole.ok) return { decisions: [], diagnostics: whole.diagnostics };
   const split = splitTable(table, facet.field);
   const diagnostics: Diagnostic[] = [...whole.diagnostics.filter((d) => d.code === 'derive.missing-values'), ...split.diagnostics];
   const panels: (FacetPanel<unknown> & { label: string; sortKey: number; value: number })[] = [];
   for (const part of split.parts) {
-    const memo = new Map<string, unknown>();
+    const memo = new PanelMemo(chartMemo);
     const derived = form.derive(part.table, choice.plan, { ...ctx, memo });
     diagnostics.push(...derived.diagnostics.filter((d) => d.code !== 'derive.missing-values'));
     if (!derived.ok) return { decisions: [], diagnostics: once(diagnostics) };
