@@ -111,7 +111,8 @@ function drawPanels<D>(form: FacetForm<D>, shown: readonly FacetPanel<D>[], doma
     if (spec.context) for (const other of shown) if (other !== panel) out.context.push(...greyed(form.layout(other.derived, area, { ...ctx, memo: other.memo }).marks, ctx));
     const drawn = form.layout(panel.derived, area, { ...ctx, memo: panel.memo });
     out.marks.push(...drawn.marks);
-    out.over.push(...zeroLine(domains, scales[i]!, box.plot, ctx), ...axes.flatMap((a) => a.tickMarks));
+    // One zero line per panel, each with its own id.
+    out.over.push(...zeroLine(domains, scales[i]!, box.plot, ctx).map((n) => ({ ...n, id: ctx.id('zero-line', panel.level) })), ...axes.flatMap((a) => a.tickMarks));
     out.tickLabels.push(...axes.flatMap((a) => a.labels));
     out.titles.push(panelTitle(panel.level, layout.cells[i]!, ctx));
     out.labels.push(...drawn.labels);

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { dumpScene, type SceneDump } from '../../src/scene/dump.js';
+import { nodesOf } from '../../src/scene/walk.js';
 import { codes, renderDemo, renderRows, root } from '../helpers.js';
 import { checkFacetContracts } from './facet-contracts.js';
 
@@ -26,6 +27,9 @@ describe('small multiples: perceptual contracts', () => {
     const r = await renderRows(brief(), sites(5));
     const dump = dumpScene(r.scene!);
     checkFacetContracts(dump, 'site');
+    // Every node of the scene has its own id (one zero line per panel, not one id five times).
+    const ids = nodesOf(r.scene!.root).map((n) => n.id);
+    expect(new Set(ids).size).toBe(ids.length);
     for (const p of dump.panels) {
       const axis = p.axes.find((a) => a.orient === 'left')!;
       const [d0, d1] = axis.domain as number[];
