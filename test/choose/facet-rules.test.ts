@@ -8,8 +8,9 @@ import { codes, renderRows } from '../helpers.js';
 const rows = ['North', 'South', 'East'].flatMap((site, i) => ['a', 'b'].map((k, j) => ({ site, k, v: i + j + 1 })));
 const brief = (extra: Record<string, unknown>) => ({ intent: 'compare', keys: 'k', values: 'v', fields: { v: { unit: 'units' } }, ...extra });
 
+/** A field as chooseFacet reads it (name, label, type): the rest of a Field does not matter here. */
 function field(name: string, type: Field['type'] = 'categorical'): Field {
-  return { name, label: name, type, role: 'other', unit: undefined, format: undefined, levels: [], column: { name, type: 'text', values: [], text: [], missing: [] } };
+  return { name, label: name, type, role: 'other', unit: undefined, format: undefined, levels: [], column: { name, type: 'text', values: [], text: [], missing: [] } } as unknown as Field;
 }
 
 describe('rules for small multiples', () => {
