@@ -19,6 +19,14 @@ function dataSource(raw: Record<string, unknown>): DataSource {
   return { kind: 'file', path: String(raw.data) };
 }
 
+/** `facet: col` or `facet: { by, context }`, with its default. */
+function facetOption(value: unknown): ResolvedBrief['facet'] {
+  if (value === undefined) return undefined;
+  if (typeof value === 'string') return { by: value, context: false };
+  const { by, context } = value as { by: string; context?: boolean };
+  return { by, context: context ?? false };
+}
+
 /** Applies defaults to a schema-valid brief object. */
 export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
   const size = (raw.size ?? {}) as { width?: number; height?: number };
@@ -50,6 +58,7 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     area: raw.area as string | undefined,
     after: raw.after as string | undefined,
     fit: raw.fit as ResolvedBrief['fit'],
+    facet: facetOption(raw.facet),
   };
 }
 

@@ -100,6 +100,10 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
       area: { type: 'string', minLength: 1, description: 'For intent correlation: the column whose value each circle\'s area shows (`size` is the frame).' },
       after: { type: 'string', minLength: 1, description: 'For intent schedule: the column naming each task\'s predecessor.' },
       fit: { type: 'string', enum: ['linear'], description: 'For intent correlation: draw a least-squares line through the points.' },
+      facet: {
+        description: 'Small multiples: one panel per level of this column, all on shared scales; `{ by, context: true }` also draws the other panels in grey behind each.',
+        anyOf: [{ type: 'string', minLength: 1 }, { type: 'object', additionalProperties: false, required: ['by'], properties: { by: { type: 'string', minLength: 1 }, context: { type: 'boolean', default: false } } }],
+      },
     },
   };
 }

@@ -117,6 +117,13 @@ export interface ResolvedBrief {
   after: string | undefined;
   /** For intent correlation: a fitted line drawn through the points (`linear`: least squares). Default: undefined (none). */
   fit: 'linear' | undefined;
+  /**
+   * Small multiples: one panel per level of the column `by`, every panel on one shared x and y
+   * scale; `context` draws the other panels' marks in light grey behind each panel's own. The
+   * brief's short form `facet: <column>` is `{ by: <column>, context: false }`. Any intent.
+   * Default: undefined (one plot).
+   */
+  facet: { by: string; context: boolean } | undefined;
 }
 
 /** The intents and forms a brief may name: those the rule table answers and the registry draws. */

@@ -24,10 +24,10 @@ export function checkCompareShape(fields: Fields, brief: ResolvedBrief): Diagnos
       path: '/keys', expected: 'one column name', hint: candidates.length ? `add \`keys: ${candidates[0]}\`` : 'add `keys:` naming a column of labels',
     }));
   }
-  if (fields.keys.length > 1) {
-    problems.push(diagnostic('choice.too-many-keys', `compare with ${fields.keys.length} keys (grouped bars or a heat map) is not supported yet`, {
-      path: '/keys', found: fields.keys.map((k) => k.name).join(', '), expected: 'one key column',
-      hint: 'chart one key per brief for now, or sum the table over the other key first',
+  if (fields.keys.length > 2) {
+    problems.push(diagnostic('choice.too-many-keys', `compare with ${fields.keys.length} keys is not drawn: bars take one key, grouped bars two`, {
+      path: '/keys', found: fields.keys.map((k) => k.name).join(', '), expected: 'one or two key columns',
+      hint: 'sum the table over the extra keys first, or show one panel per level of one of them with `facet:`',
     }));
   }
   if (fields.values.length === 0 && brief.aggregate !== 'count') {

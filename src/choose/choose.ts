@@ -6,6 +6,7 @@ import type { TextMeasurer } from '../font/measurer.js';
 import type { Style } from '../style/types.js';
 import type { Table } from '../table/types.js';
 import { checkBriefRules, checkValueUnit, SHAPE_CHECKS } from './checks.js';
+import { chooseFacet } from './facet.js';
 import { applyHardRules } from './hard-rules.js';
 import { matchRule } from './rules.js';
 import type { Candidate, Choice, Decision } from './types.js';
@@ -53,6 +54,10 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext,
   rationale.push(...planned.value.decisions);
   const numbers = notationDecision(fields);
   if (numbers) rationale.push(numbers);
+  const faceted = chooseFacet(fields, brief, form, planned.value.facet);
+  problems.push(...faceted.problems);
+  if (hasErrors(problems)) return failure(problems);
+  rationale.push(...faceted.decisions);
   const { size } = planned.value;
-  return success({ form: form.name, intent: brief.intent, rule: rule?.id ?? 'pinned', plan: planned.value.plan, rationale, ...(size ? { size } : {}) }, problems);
+  return success({ form: form.name, intent: brief.intent, rule: rule?.id ?? 'pinned', plan: planned.value.plan, rationale, ...(size ? { size } : {}), ...(faceted.facet ? { facet: faceted.facet } : {}) }, problems);
 }

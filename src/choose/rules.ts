@@ -148,6 +148,13 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length === 1 && largestGroup(f) > MAX_STRIP_POINTS,
     why: `a value by group, more than ${MAX_STRIP_POINTS} values in the largest group: dots would pile into a smear, so each group is summarised by a box plot (quartiles, whiskers, outliers; Tukey 1977)`,
   },
+  {
+    id: 'compare.two-keys',
+    intent: 'compare',
+    form: 'grouped-bar',
+    applies: (f) => f.keys.length === 2,
+    why: 'two keys and one value: bars grouped by the first key, one bar per level of the second side by side in its own colour, so values compare by length within each key and each group can be followed across keys',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */

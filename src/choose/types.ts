@@ -1,6 +1,6 @@
 import type { FormName, Intent, ResolvedBrief } from '../brief/types.js';
 import type { Outcome } from '../diagnostics/diagnostic.js';
-import type { Fields } from '../fields/types.js';
+import type { FieldRef, Fields } from '../fields/types.js';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Style } from '../style/types.js';
 import type { Table } from '../table/types.js';
@@ -47,12 +47,44 @@ export interface PlanInput {
   memo?: Map<string, unknown>;
 }
 
-/** A form's plan and the decisions (with their rules) it made. */
+/**
+ * A form's plan and the decisions (with their rules) it made. `facet` is how a plan asks for
+ * small multiples itself (e.g. a line chart with more series than direct labels can hold asks
+ * for one panel per series): the column to split by, whether to draw the other panels as grey
+ * context, and why (the rationale's rule). A brief's `facet:` wins over it. Default: none.
+ */
 export interface Planned<Plan> {
   plan: Plan;
   decisions: Decision[];
   /** The frame the form needs, when it grows a side the brief leaves open. Default: the brief's size. */
   size?: { width: number; height: number };
+  facet?: FacetRequest;
+}
+
+/** A form's own request for small multiples (see Planned.facet). */
+export interface FacetRequest {
+  /** The column whose levels become panels. */
+  by: string;
+  /** Draw the other panels' marks in grey behind each panel's own. */
+  context: boolean;
+  /** Why the form asks for panels, as the rationale states it. */
+  why: string;
+}
+
+/** How panels are ordered: by the form's facet value (largest first), by label, as the data gives them, or in the facet field's own order. */
+export type FacetOrder = 'value' | 'label' | 'data' | 'key';
+
+/** Small multiples as chosen: the field split by, the panel order, and whether grey context is drawn. */
+export interface ChosenFacet {
+  field: FieldRef;
+  context: boolean;
+  order: FacetOrder;
+}
+
+/** What the choice stage knows of a form's small multiples: what orders its panels, in words (e.g. "their total"). */
+export interface FacetWords {
+  /** What a panel is ranked by, e.g. "total" or "latest value". */
+  noun: string;
 }
 
 /** What the choice stage needs of a form: its name, its traits, and its plan. The registry's forms are passed in. */
@@ -62,6 +94,8 @@ export interface Candidate {
   noun: string;
   traits: FormTraits;
   plan(input: PlanInput): Outcome<Planned<unknown>>;
+  /** Present when the form can be drawn as small multiples. Default: none (a facet is refused). */
+  facets?: FacetWords;
 }
 
 /** The chart form chosen for a brief, the rule that fired, its plan, and the reasons. */
@@ -74,4 +108,6 @@ export interface Choice<Plan = unknown> {
   rationale: Decision[];
   /** The frame the chart is drawn in, when the form grew it beyond the brief's default. */
   size?: { width: number; height: number };
+  /** Small multiples, asked for by the brief (`facet:`) or by the form's plan. Default: none. */
+  facet?: ChosenFacet;
 }

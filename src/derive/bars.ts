@@ -84,7 +84,8 @@ export interface DerivedBars<Q extends BarQuery = BarQuery> {
  */
 export type CapacityFor = (fold: FoldSummary | undefined, bars: readonly BarDatum[]) => number;
 
-function sortBars(bars: BarDatum[], keyOf: Map<string, number>, order: BarQuery['order']): BarDatum[] {
+/** Bars in the query's order: by value (largest first, ties by label), by label, in key order, or as the data gives them. */
+export function sortBars(bars: BarDatum[], keyOf: Map<string, number>, order: BarQuery['order']): BarDatum[] {
   const byValue = (a: BarDatum, b: BarDatum) => b.value - a.value || compareText(a.label, b.label);
   if (order === 'value') return [...bars].sort(byValue);
   if (order === 'label') return [...bars].sort((a, b) => compareNatural(a.label, b.label));
@@ -193,7 +194,8 @@ function unevenDates(bars: BarDatum[], keyOf: Map<string, number>, query: BarQue
   })];
 }
 
-function combineGroups(groups: RowGroup[], query: BarQuery, problems: Diagnostic[]): BarDatum[] | undefined {
+/** Each group's rows combined by the query's aggregate into one bar; undefined (with a diagnostic) when a result is not finite. */
+export function combineGroups(groups: RowGroup[], query: BarQuery, problems: Diagnostic[]): BarDatum[] | undefined {
   const aggregator = AGGREGATORS[query.aggregate];
   const combined = groups.filter((g) => g.values.length > 1);
   if (combined.length && query.value && query.aggregateStated !== false) {

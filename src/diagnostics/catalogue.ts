@@ -74,6 +74,9 @@ export const CATALOGUE = {
   'choice.histogram-with-groups': 'error',
   'choice.no-group-key': 'error',
   'choice.many-groups': 'warning',
+  'choice.facet-not-supported': 'error',
+  'choice.facet-on-key': 'error',
+  'choice.too-many-groups': 'warning',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -107,6 +110,7 @@ export const CATALOGUE = {
   'derive.zero-total': 'warning',
   'derive.whole-is-zero': 'error',
   'derive.cannot-bin': 'error',
+  'derive.too-many-grouped-bars': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',
@@ -116,6 +120,7 @@ export const CATALOGUE = {
   'layout.text-overlap': 'warning',
   'layout.labels-unplaced': 'warning',
   'layout.overplotted': 'warning',
+  'layout.panels-refused': 'warning',
   // output
   'output.write-failed': 'error',
   'output.raster-failed': 'error',

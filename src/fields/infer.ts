@@ -77,6 +77,7 @@ export function inferFields(table: Table, brief: ResolvedBrief): Outcome<Fields>
     ...checkNames(brief.values, '/values', table, brief.values.length > 1),
     ...Object.keys(brief.fields).flatMap((name) => checkNames([name], pointer('/fields', name), table, false)),
     ...COLUMN_OPTIONS.flatMap((option) => (brief[option] === undefined ? [] : checkNames([brief[option]!], `/${option}`, table, false))),
+    ...(brief.facet ? checkNames([brief.facet.by], '/facet', table, false) : []),
   ];
   if (hasErrors(problems)) return failure(problems);
   const all = table.columns.map((column): Field => {

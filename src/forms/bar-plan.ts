@@ -39,6 +39,18 @@ function combinedOf(grouped: Grouped): Combined | undefined {
 }
 
 /**
+ * The keys whose rows are combined. In small multiples a key repeats once per panel, so repeats
+ * are counted within each panel; faceting by a key itself is refused by the facet rules.
+ */
+function repeatsOf(input: PlanInput, key: Field, value: Field | undefined, grouped: Grouped): Combined | undefined {
+  const by = input.brief.facet?.by;
+  if (by === undefined) return combinedOf(grouped);
+  const facet = input.fields.all.find((f) => f.name === by);
+  if (!facet || input.brief.keys.includes(by)) return undefined;
+  return combinedOf(groupRows(input.table, { keys: [refOf(key), refOf(facet)], value: value && refOf(value) }));
+}
+
+/**
  * Rows sharing a key are combined by the aggregate: a sum of a value that does not add up
  * (shares, pH, temperatures) is refused with a mean offered; combining when the brief states no
  * `aggregate:` is warned about, so it is never a surprise.
@@ -170,13 +182,14 @@ export function planBar(input: PlanInput): Outcome<Planned<BarPlan>> {
   const decisions: Decision[] = [];
   const order = chooseOrder(input, key, problems, decisions);
   const grouped = barGroups(input.table, refOf(key), value && refOf(value), input);
-  const combined = combinedOf(grouped);
+  const combined = repeatsOf(input, key, value, grouped);
   problems.push(...checkCombining(input, key, value, combined));
   if (problems.some((p) => p.severity === 'error')) return failure(problems);
   const orientation = chooseOrientation(input, key, value);
   decisions.push(orientation.decision);
   const notes = barNotes({ key: refOf(key), value: value && refOf(value), order, aggregate: brief.aggregate, noData: grouped.noValue, ...(combined ? { combined } : {}) }, undefined, '', String);
-  const grown = orientation.vertical || key.type === 'temporal' || key.type === 'quantitative' ? {} : grownFrame(input, key, value, notes);
+  // Small multiples divide the frame among panels, which are measured by the facet layout.
+  const grown = orientation.vertical || key.type === 'temporal' || key.type === 'quantitative' || brief.facet ? {} : grownFrame(input, key, value, notes);
   if (grown.decision) decisions.push(grown.decision);
   if (combined && value) decisions.push({ decision: `rows with the same ${key.label.toLowerCase()} ${AGGREGATORS[brief.aggregate].verb}`, rule: brief.aggregateStated ? 'the brief asks for it (`aggregate:`)' : 'sum is the default for rows sharing a key; the note and the axis title say so' });
   else if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });

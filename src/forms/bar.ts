@@ -1,4 +1,4 @@
-import { max, min } from 'd3-array';
+import { fsum, max, min } from 'd3-array';
 import { deriveBars, type BandNeed, type BarDatum, type CapacityFor, type DerivedBars } from '../derive/bars.js';
 import type { Outcome } from '../diagnostics/diagnostic.js';
 import type { Table } from '../table/types.js';
@@ -141,6 +141,7 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
   derive: deriveBarChart,
   domains: (derived) => domainsOf(derived, derived.query.orientation === 'vertical'),
   room: labelRoom,
+  facets: { noun: 'total', value: (derived) => fsum(derived.bars, (b) => b.value), minBand: () => MIN_BAND_PX },
   layout(derived, area, ctx) {
     const texts = valueTexts(derived, ctx);
     const marks: SceneNode[] = [];

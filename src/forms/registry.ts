@@ -5,6 +5,7 @@ import { CHANGE_BAR } from './change-bar.js';
 import { DONUT } from './donut.js';
 import { DOT } from './dot.js';
 import { GANTT } from './gantt.js';
+import { GROUPED_BAR } from './grouped-bar.js';
 import { HISTOGRAM } from './histogram.js';
 import { INDEX_LINE } from './index-line.js';
 import { LINE } from './line.js';
@@ -16,7 +17,7 @@ import { STRIP } from './strip.js';
 import type { AnyForm } from './types.js';
 
 /** The forms chartwright draws: one entry per form file in src/forms/. */
-export const FORMS: readonly AnyForm[] = [BAR, LINE, INDEX_LINE, CHANGE_BAR, SLOPE, GANTT, SCATTER, DOT, STACKED_BAR, NORMALIZED_BAR, DONUT, HISTOGRAM, STRIP, BOX];
+export const FORMS: readonly AnyForm[] = [BAR, GROUPED_BAR, LINE, INDEX_LINE, CHANGE_BAR, SLOPE, GANTT, SCATTER, DOT, STACKED_BAR, NORMALIZED_BAR, DONUT, HISTOGRAM, STRIP, BOX];
 
 /** The form of a name, if it is drawn. */
 export function formNamed(name: FormName | string): AnyForm | undefined {

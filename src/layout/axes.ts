@@ -30,7 +30,7 @@ function thinned(field: string, k: number, total: number, shown: number): Diagno
 }
 
 /** The title of a left axis sits above the plot at the body's left edge; a bottom axis's title is centred under its tick labels. */
-function axisTitleNode(side: 'left' | 'bottom', channel: Channel, plot: Box, body: Box, ctx: LayoutContext): TextNode {
+export function axisTitleNode(side: 'left' | 'bottom', channel: Channel, plot: Box, body: Box, ctx: LayoutContext): TextNode {
   const { style, measure } = ctx;
   const { tickGap, lineHeight: factor } = style.spacing;
   const title = (x: number, top: number, anchor: TextNode['anchor']) => textNode(measure, { id: `axis-title-${channel.name}`, role: 'axis-title', text: channel.title, style: style.text.axisTitle, x, top, anchor });

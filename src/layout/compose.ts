@@ -5,15 +5,18 @@ import type { Box, PanelInfo, Scene, SceneNode, TextNode } from '../scene/types.
 import { allNodes } from '../scene/walk.js';
 import type { ValueTicks } from './axis.js';
 import { drawBottomBandAxis, drawLeftBandAxis, drawLinearAxis, drawTimeAxis, rule, type DrawnAxis } from './axes.js';
-import { checkScene, overlappingBoxes } from './checks.js';
+import { checkScene } from './checks.js';
 import { layoutFrame } from './frame.js';
 import type { LegendLayout, LegendSpec } from './legend.js';
 import { layoutLegends } from './legends.js';
-import { placeLabels } from './place-labels.js';
+import { placeFormLabels } from './place-labels.js';
 import { memoized, ticksFor, type CartesianDomains, type FormMarks, type FormWords, type LabelRoom, type LayoutContext, type LinearChannel, type PlotArea, type ScaleProbe, type TimeChannel } from './kit-types.js';
 import { plotBox, tickCount, type PlotBox } from './plot-box.js';
 import { bandScale, linearScale, type BandScale, type LinearScale, type Scale } from './scales.js';
 import { timeScale, type TimeGrain, type TimeScale } from './time-scale.js';
+import type { FacetHooks } from './facet-types.js';
+
+export { placeFormLabels };
 
 /** What the composer needs of a form drawn on a left and a bottom axis. */
 export interface CartesianForm<D> {
@@ -23,6 +26,8 @@ export interface CartesianForm<D> {
   /** Room the form's own labels need beyond its marks, measured against a first look at the scales. Default: none. */
   room?(derived: D, probe: ScaleProbe, ctx: LayoutContext): LabelRoom;
   layout(derived: D, area: PlotArea, ctx: LayoutContext): FormMarks;
+  /** Present when the form can be drawn as small multiples (src/layout/facet-compose.ts). Default: none. */
+  facets?: FacetHooks<D>;
 }
 
 const NO_ROOM: LabelRoom = { low: 0, high: 0, show: false };
@@ -78,7 +83,8 @@ function finestTick(channel: TimeChannel): TimeGrain {
   return channel.grain === undefined || channel.grain === 'second' ? 'minute' : channel.grain;
 }
 
-interface FittedScales { x: Scale; y: Scale; room: LabelRoom }
+/** Both scales of a plot and the room taken for the form's labels. */
+export interface FittedScales { x: Scale; y: Scale; room: LabelRoom }
 
 /** Both scales over the plot box, with the given room taken for the form's labels. */
 function scalesWith(domains: CartesianDomains, box: PlotBox, bottomProbe: ValueTicks | undefined, bottomBand: BandScale | undefined, room: LabelRoom, side: 'left' | 'bottom' | undefined, ctx: LayoutContext): FittedScales {
@@ -100,7 +106,7 @@ const holds = (given: LabelRoom, again: LabelRoom) => again.show === given.show 
  * ticks, and so domain, may differ), and widened until it holds, so a label never lands beyond
  * the plot on a scale it was not measured against.
  */
-function fitScales<D>(form: CartesianForm<D>, derived: D, domains: CartesianDomains, box: PlotBox, ctx: LayoutContext): FittedScales {
+export function fitScales<D>(form: CartesianForm<D>, derived: D, domains: CartesianDomains, box: PlotBox, ctx: LayoutContext): FittedScales {
   const { plot, left } = box;
   const bottomBand = domains.bottom.kind === 'band' ? bandScale(domains.bottom.domain, [plot.x, plot.x + plot.width], ctx.style.spacing.bandPadding) : undefined;
   const leftBand: BandScale | undefined = left.kind === 'band' ? left.band : undefined;
@@ -120,7 +126,8 @@ function fitScales<D>(form: CartesianForm<D>, derived: D, domains: CartesianDoma
   }
 }
 
-function drawAxis(side: 'left' | 'bottom', domains: CartesianDomains, scales: FittedScales, box: PlotBox, body: Box, ctx: LayoutContext): DrawnAxis {
+/** One axis of a plot, drawn by the drawer for its channel and scale. */
+export function drawAxis(side: 'left' | 'bottom', domains: CartesianDomains, scales: FittedScales, box: PlotBox, body: Box, ctx: LayoutContext): DrawnAxis {
   const channel = domains[side];
   const scale = side === 'left' ? scales.y : scales.x;
   if (channel.kind === 'linear' && scale.kind === 'linear') return drawLinearAxis(side, scale, channel, box.plot, body, ctx, domains.zeroLine === side);
@@ -130,7 +137,8 @@ function drawAxis(side: 'left' | 'bottom', domains: CartesianDomains, scales: Fi
   throw new Error(`no axis drawer for a ${channel.kind} channel on the ${side}`);
 }
 
-function zeroLine(domains: CartesianDomains, scales: FittedScales, plot: Box, ctx: LayoutContext): SceneNode[] {
+/** The zero line across a plot, where the form asks for one. */
+export function zeroLine(domains: CartesianDomains, scales: FittedScales, plot: Box, ctx: LayoutContext): SceneNode[] {
   const { lines } = ctx.style;
   if (domains.zeroLine === 'left' && scales.y.kind === 'linear') return [rule('zero-line', 'zero-line', plot.x, scales.y.map(0), plot.x + plot.width, scales.y.map(0), lines.zero, lines.zeroWidth)];
   if (domains.zeroLine === 'bottom' && scales.x.kind === 'linear') return [rule('zero-line', 'zero-line', scales.x.map(0), plot.y, scales.x.map(0), plot.y + plot.height, lines.zero, lines.zeroWidth)];
@@ -154,20 +162,6 @@ export function placeLegend(spec: LegendSpec | LegendSpec[] | undefined, body: B
   const probe = layoutLegends(specs, { x: 0, y: body.y, width, placement: 'right' }, style, measure);
   const right = layoutLegends(specs, { x: body.x + body.width - probe.width, y: body.y, width: probe.width, placement: 'right' }, style, measure);
   return { legend: right, body: { ...body, width: Math.max(0, body.width - right.width - gap) } };
-}
-
-/**
- * The form's labels that overlap no other text, taken in the form's order (its priority); the
- * rest are left out, never drawn on top of another (common practice for chart labels).
- */
-export function placeFormLabels(labels: readonly TextNode[], fixed: readonly SceneNode[], size: { width: number; height: number }, drop: ReadonlySet<string> = new Set()): { kept: TextNode[]; dropped: TextNode[] } {
-  const obstacles = fixed.filter((n): n is TextNode => n.kind === 'text').map((n) => n.box);
-  // Most forms place their labels clear of everything already: a sweep finds that without building an index.
-  const inside = (b: Box) => b.x >= -1e-6 && b.y >= -1e-6 && b.x + b.width <= size.width + 1e-6 && b.y + b.height <= size.height + 1e-6;
-  if (drop.size === 0 && labels.every((l) => inside(l.box)) && overlappingBoxes([...labels.map((l) => l.box), ...obstacles]).length === 0) return { kept: [...labels], dropped: [] };
-  const { unplaced } = placeLabels(labels.filter((l) => !drop.has(l.id)).map((l) => ({ id: l.id, boxes: [l.box] })), obstacles, { x: 0, y: 0, ...size });
-  const out = new Set([...unplaced, ...drop]);
-  return { kept: labels.filter((l) => !out.has(l.id)), dropped: labels.filter((l) => out.has(l.id)) };
 }
 
 /** The frame, the legend and the plot box a chart of these domains and notes gets. */

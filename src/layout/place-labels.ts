@@ -1,5 +1,6 @@
 import RBush from 'rbush';
-import type { Box } from '../scene/types.js';
+import { overlappingBoxes } from './checks.js';
+import type { Box, SceneNode, TextNode } from '../scene/types.js';
 
 /** A label to place along one axis: it wants its centre at `want` and spans `size` px. */
 export interface DodgeItem {
@@ -130,4 +131,18 @@ export function placeLabels(candidates: readonly LabelCandidate[], obstacles: re
     placed.push({ id: c.id, box, candidate: i });
   }
   return { placed, unplaced };
+}
+
+/**
+ * The form's labels that overlap no other text, taken in the form's order (its priority); the
+ * rest are left out, never drawn on top of another (common practice for chart labels).
+ */
+export function placeFormLabels(labels: readonly TextNode[], fixed: readonly SceneNode[], size: { width: number; height: number }, drop: ReadonlySet<string> = new Set()): { kept: TextNode[]; dropped: TextNode[] } {
+  const obstacles = fixed.filter((n): n is TextNode => n.kind === 'text').map((n) => n.box);
+  // Most forms place their labels clear of everything already: a sweep finds that without building an index.
+  const inside = (b: Box) => b.x >= -1e-6 && b.y >= -1e-6 && b.x + b.width <= size.width + 1e-6 && b.y + b.height <= size.height + 1e-6;
+  if (drop.size === 0 && labels.every((l) => inside(l.box)) && overlappingBoxes([...labels.map((l) => l.box), ...obstacles]).length === 0) return { kept: [...labels], dropped: [] };
+  const { unplaced } = placeLabels(labels.filter((l) => !drop.has(l.id)).map((l) => ({ id: l.id, boxes: [l.box] })), obstacles, { x: 0, y: 0, ...size });
+  const out = new Set([...unplaced, ...drop]);
+  return { kept: labels.filter((l) => !out.has(l.id)), dropped: labels.filter((l) => out.has(l.id)) };
 }

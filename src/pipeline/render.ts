@@ -18,6 +18,7 @@ import { writeSvg } from '../svg/write.js';
 import { readTable } from '../table/load.js';
 import type { Table } from '../table/types.js';
 import type { RenderEnv } from './env.js';
+import { renderFacets } from './facets.js';
 import { VOCABULARY } from './vocabulary.js';
 
 /** One render: a brief as text or value, where it lives, and how strict to be. */
@@ -151,6 +152,12 @@ export function renderInputs(inputs: RenderInputs, measure: TextMeasurer, opts: 
   // A form may grow a side of the frame the brief leaves open; layout draws in that frame.
   const frameSize = choice.value.size;
   const ctx: LayoutContext = { brief: frameSize ? { ...brief, size: frameSize } : brief, style, measure, id: idMaker(), memo };
+  if (choice.value.facet) {
+    const faceted = renderFacets(form, table, choice.value, ctx);
+    all.push(...locate(faceted.diagnostics));
+    lap('layout');
+    return { brief, choice: choice.value, rationale: [...rationale, ...faceted.decisions], ...(faceted.scene ? { scene: faceted.scene } : {}), diagnostics: all };
+  }
   const derived = form.derive(table, choice.value.plan, ctx);
   all.push(...locate(derived.diagnostics));
   lap('derive');

@@ -16,7 +16,9 @@ export type Role =
   | 'gridline' | 'zero-line' | 'reference' | 'tick' | 'tick-mark' | 'axis-line' | 'axis-title'
   | 'legend' | 'legend-title' | 'legend-swatch' | 'legend-label'
   // words
-  | 'label' | 'leader' | 'title' | 'subtitle' | 'note' | 'source';
+  | 'label' | 'leader' | 'title' | 'subtitle' | 'note' | 'source'
+  // small multiples: the other panels' marks drawn in grey behind a panel's own
+  | 'context';
 
 /** How a mark is painted. Absent parts are not written (SVG defaults apply). */
 export interface Paint {

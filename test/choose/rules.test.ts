@@ -104,8 +104,9 @@ describe('rules for the compare intent', () => {
     expect(codes(await renderRows({ intent: 'compare', keys: 'pier' }, piers))).toEqual(['choice.no-value']);
   });
 
-  it('refuses two keys until grouped bars exist', async () => {
-    expect(codes(await renderRows({ intent: 'compare', keys: ['pier', 'n'], values: 'n' }, piers))).toContain('choice.too-many-keys');
+  it('refuses three keys: bars take one key, grouped bars two', async () => {
+    const rows = piers.map((p) => ({ ...p, a: 'x', b: 'y' }));
+    expect(codes(await renderRows({ intent: 'compare', keys: ['pier', 'a', 'b'], values: 'n' }, rows))).toContain('choice.too-many-keys');
   });
 
   it('honours a pinned bar form and refuses forms not drawn yet', async () => {

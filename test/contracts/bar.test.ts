@@ -2,13 +2,13 @@ import { readFileSync } from 'node:fs';
 import type { BarPlan } from '../../src/forms/bar-plan.js';
 import { describe, expect, it } from 'vitest';
 import { bars, checkBarContracts } from './bar-contracts.js';
-import { demoBriefs, renderDemo, renderRows } from '../helpers.js';
+import { demoBriefs, renderDemo, renderRows, yaml } from '../helpers.js';
 
-/** The gallery's bar charts: the briefs of intent compare (other forms keep their own contracts). */
-const barDemos = () => demoBriefs().filter((f) => /^intent: compare$/m.test(readFileSync(f, 'utf8')));
+/** Gallery briefs drawn as one plain bar chart: one key, no panels (grouped bars and small multiples have contracts of their own). */
+const plainBars = (file: string) => { const b = yaml(readFileSync(file, 'utf8')); return typeof b.keys === 'string' && b.facet === undefined; };
 
 describe('perceptual contracts on every gallery chart', () => {
-  for (const file of barDemos()) {
+  for (const file of demoBriefs().filter(plainBars)) {
     it(`${file.split('/').pop()} keeps the bar chart contracts`, async () => {
       const { result, dump } = await renderDemo(file);
       // Other forms keep their own contracts (test/contracts/scatter.test.ts, …).
