@@ -44,6 +44,7 @@ export function checkCompareShape(fields: Fields, brief: ResolvedBrief): Diagnos
 /** The data-shape check of each intent that has rules. */
 export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: ResolvedBrief) => Diagnostic[]>> = {
   compare: checkCompareShape,
+  cycle: checkCompareShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */

@@ -31,6 +31,13 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type),
     why: 'one ordered key and one value: bars in key order, because the order of the key carries meaning',
   },
+  {
+    id: 'cycle.cyclic-key',
+    intent: 'cycle',
+    form: 'radial-bar',
+    applies: (f) => f.keys.length === 1,
+    why: 'one cyclic key and one value: bars around a circle keep every key next to its neighbours, the last next to the first (a key that is not cyclic is refused by the radial hard rule)',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */

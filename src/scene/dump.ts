@@ -20,6 +20,9 @@ export interface DumpMark {
   series?: Datum;
   /** For rasters: the grid of data cells drawn. */
   grid?: { columns: number; rows: number };
+  /** For radial bars: the centre angle (degrees clockwise from 12 o'clock) and the outer radius (px). */
+  angle?: number;
+  radius?: number;
 }
 
 /** A text in the scene dump: its measured box (top-left, width, height). */
@@ -69,6 +72,8 @@ function flatten(node: SceneNode, marks: DumpMark[], texts: DumpText[]): void {
       role: node.role, kind: 'path', d: pathData(node.commands), ...(node.fill ? { fill: node.fill } : {}), ...paintOf(node), ...datum,
       ...(node.points ? { points: node.points.map((p) => ({ x: round(p.x), y: round(p.y), ...(p.datum ? { datum: p.datum } : {}) })) } : {}),
       ...(node.series ? { series: node.series } : {}),
+      ...(node.angle !== undefined ? { angle: round(node.angle) } : {}),
+      ...(node.radius !== undefined ? { radius: round(node.radius) } : {}),
     }); return;
     case 'circle': marks.push({ role: node.role, kind: 'circle', cx: round(node.cx), cy: round(node.cy), r: round(node.r), fill: node.fill, ...paintOf(node), ...datum }); return;
     case 'image': marks.push({ role: node.role, kind: 'image', ...roundBox(node), ...(node.grid ? { grid: node.grid } : {}) }); return;
@@ -76,7 +81,7 @@ function flatten(node: SceneNode, marks: DumpMark[], texts: DumpText[]): void {
 }
 
 function roundAxis(a: AxisInfo): AxisInfo {
-  return { ...a, tickPositions: a.tickPositions.map(round), range: [round(a.range[0]), round(a.range[1])] };
+  return { ...a, tickPositions: a.tickPositions.map(round), range: [round(a.range[0]), round(a.range[1])], ...(a.position !== undefined ? { position: round(a.position) } : {}) };
 }
 
 function roundPanel(p: PanelInfo): PanelInfo {
