@@ -2,6 +2,7 @@ import type { Intent, ResolvedBrief } from '../brief/types.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
 import { applyHardRules } from './hard-rules.js';
+import { checkFlowShape } from './multi-checks.js';
 import { formsForIntent } from './rules.js';
 import type { Candidate } from './types.js';
 
@@ -45,6 +46,7 @@ export function checkCompareShape(fields: Fields, brief: ResolvedBrief): Diagnos
 export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: ResolvedBrief) => Diagnostic[]>> = {
   compare: checkCompareShape,
   cycle: checkCompareShape,
+  flow: checkFlowShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */

@@ -38,6 +38,13 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length === 1,
     why: 'one cyclic key and one value: bars around a circle keep every key next to its neighbours, the last next to the first (a key that is not cyclic is refused by the radial hard rule)',
   },
+  {
+    id: 'flow.ordered-key-and-series',
+    intent: 'flow',
+    form: 'stream',
+    applies: (f) => f.keys.length === 2,
+    why: 'an ordered key, a series key and one value: a streamgraph shows how the total flows and how each series waxes and wanes along the key, its layers stacked so they bend as little as they can (Byron & Wattenberg 2008)',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */

@@ -60,6 +60,8 @@ export const CATALOGUE = {
   'choice.radial-not-cyclic': 'error',
   'choice.too-many-colours': 'error',
   'choice.radial-negative': 'error',
+  'choice.stream-negative': 'error',
+  'choice.flow-needs-series': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -68,6 +70,7 @@ export const CATALOGUE = {
   'derive.too-many-ordered-bars': 'error',
   'derive.uneven-dates': 'warning',
   'derive.not-finite': 'error',
+  'derive.stream-too-few-keys': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',
