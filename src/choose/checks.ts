@@ -2,7 +2,7 @@ import type { Intent, ResolvedBrief } from '../brief/types.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
 import { applyHardRules } from './hard-rules.js';
-import { checkFlowShape } from './multi-checks.js';
+import { checkFlowShape, checkProfileShape } from './multi-checks.js';
 import { formsForIntent } from './rules.js';
 import type { Candidate } from './types.js';
 
@@ -47,6 +47,7 @@ export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: Resolv
   compare: checkCompareShape,
   cycle: checkCompareShape,
   flow: checkFlowShape,
+  profile: checkProfileShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */

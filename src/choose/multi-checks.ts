@@ -27,3 +27,19 @@ export function checkFlowShape(fields: Fields, _brief: ResolvedBrief): Diagnosti
   }
   return [...problems, ...quantitativeValues(fields, 'layer thicknesses')];
 }
+
+/** The profile intent's data shape: at least two numeric values (the attributes), and at most one key (the items' names). */
+export function checkProfileShape(fields: Fields, _brief: ResolvedBrief): Diagnostic[] {
+  const problems: Diagnostic[] = [];
+  if (fields.values.length < 2) {
+    problems.push(diagnostic('choice.profile-too-few-values', `a profile compares items across several attributes; ${fields.values.length === 0 ? 'no value is' : 'one value is'} given`, {
+      path: '/values', found: fields.values.map((v) => v.name).join(', ') || 'none', expected: 'two or more numeric columns', hint: 'list the attributes in `values:`, or compare one value with bars (intent: compare)',
+    }));
+  }
+  if (fields.keys.length > 1) {
+    problems.push(diagnostic('choice.too-many-keys', `a profile names its items with one key, not ${fields.keys.length}`, {
+      path: '/keys', found: fields.keys.map((k) => k.name).join(', '), expected: 'at most one key column', hint: 'keep the column that names the items in `keys:`',
+    }));
+  }
+  return [...problems, ...quantitativeValues(fields, 'axes')];
+}

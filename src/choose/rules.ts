@@ -45,6 +45,13 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length === 2,
     why: 'an ordered key, a series key and one value: a streamgraph shows how the total flows and how each series waxes and wanes along the key, its layers stacked so they bend as little as they can (Byron & Wattenberg 2008)',
   },
+  {
+    id: 'profile.many-values',
+    intent: 'profile',
+    form: 'parallel',
+    applies: (f) => f.values.length > 12,
+    why: 'more than twelve quantitative values: a scatterplot matrix would need too many small panels, so parallel coordinates give each value its own axis and each item one line across them',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */

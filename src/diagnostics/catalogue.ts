@@ -62,6 +62,8 @@ export const CATALOGUE = {
   'choice.radial-negative': 'error',
   'choice.stream-negative': 'error',
   'choice.flow-needs-series': 'error',
+  'choice.overplotting': 'warning',
+  'choice.profile-too-few-values': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
