@@ -55,7 +55,7 @@ export const INTENT_OPTIONS = {
   index: ['change'],
   start: ['schedule'],
   end: ['schedule'],
-  color: ['correlation'],
+  color: ['correlation', 'profile'],
   shape: ['correlation'],
   area: ['correlation'],
 } as const satisfies Partial<Record<keyof ResolvedBrief, readonly Intent[]>>;

@@ -52,6 +52,13 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.values.length > 12,
     why: 'more than twelve quantitative values: a scatterplot matrix would need too many small panels, so parallel coordinates give each value its own axis and each item one line across them',
   },
+  {
+    id: 'profile.few-values',
+    intent: 'profile',
+    form: 'scatter-matrix',
+    applies: (f) => f.values.length >= 3 && f.values.length <= 12,
+    why: 'three to twelve quantitative values: a scatterplot matrix shows every pair of them, each by position on common scales, where parallel coordinates would show only neighbouring pairs',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */
