@@ -4,6 +4,7 @@ import type { Fields } from '../fields/types.js';
 import { applyHardRules } from './hard-rules.js';
 import { partsShapeChecks } from './parts-checks.js';
 import { checkDistributionShape } from './distribution-checks.js';
+import { checkFlowShape, checkProfileShape } from './multi-checks.js';
 import { formsForIntent } from './rules.js';
 import { checkTrendShape } from './trend-checks.js';
 import { checkScheduleShape } from './schedule-checks.js';
@@ -57,6 +58,9 @@ export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: Resolv
   correlation: checkCorrelationShape,
   ...partsShapeChecks(checkCompareShape),
   distribution: checkDistributionShape,
+  cycle: checkCompareShape,
+  flow: checkFlowShape,
+  profile: checkProfileShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */
@@ -64,7 +68,7 @@ export const INTENT_OPTIONS = {
   index: ['change'],
   start: ['schedule'],
   end: ['schedule'],
-  color: ['correlation'],
+  color: ['correlation', 'profile'],
   shape: ['correlation'],
   area: ['correlation'],
   after: ['schedule'],

@@ -155,6 +155,34 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length === 2,
     why: 'two keys and one value: bars grouped by the first key, one bar per level of the second side by side in its own colour, so values compare by length within each key and each group can be followed across keys',
   },
+  {
+    id: 'cycle.cyclic-key',
+    intent: 'cycle',
+    form: 'radial-bar',
+    applies: (f) => f.keys.length === 1,
+    why: 'one cyclic key and one value: bars around a circle keep every key next to its neighbours, the last next to the first (a key that is not cyclic is refused by the radial hard rule)',
+  },
+  {
+    id: 'flow.ordered-key-and-series',
+    intent: 'flow',
+    form: 'stream',
+    applies: (f) => f.keys.length === 2,
+    why: 'an ordered key, a series key and one value: a streamgraph shows how the total flows and how each series waxes and wanes along the key, its layers stacked so they bend as little as they can (Byron & Wattenberg 2008)',
+  },
+  {
+    id: 'profile.many-values',
+    intent: 'profile',
+    form: 'parallel',
+    applies: (f) => f.values.length > 12,
+    why: 'more than twelve quantitative values: a scatterplot matrix would need too many small panels, so parallel coordinates give each value its own axis and each item one line across them',
+  },
+  {
+    id: 'profile.few-values',
+    intent: 'profile',
+    form: 'scatter-matrix',
+    applies: (f) => f.values.length >= 3 && f.values.length <= 12,
+    why: 'three to twelve quantitative values: a scatterplot matrix shows every pair of them, each by position on common scales, where parallel coordinates would show only neighbouring pairs',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */

@@ -9,6 +9,8 @@ import type { Table } from '../table/types.js';
 export interface Decision {
   decision: string;
   rule: string;
+  /** Figures behind the decision, for `explain --json` (e.g. the r of two neighbouring axes). Default: none. */
+  data?: Record<string, string | number>;
 }
 
 /**

@@ -77,6 +77,11 @@ export const CATALOGUE = {
   'choice.facet-not-supported': 'error',
   'choice.facet-on-key': 'error',
   'choice.too-many-groups': 'warning',
+  'choice.radial-negative': 'error',
+  'choice.stream-negative': 'error',
+  'choice.flow-needs-series': 'error',
+  'choice.overplotting': 'warning',
+  'choice.profile-too-few-values': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -111,6 +116,7 @@ export const CATALOGUE = {
   'derive.whole-is-zero': 'error',
   'derive.cannot-bin': 'error',
   'derive.too-many-grouped-bars': 'error',
+  'derive.stream-too-few-keys': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',

@@ -22,6 +22,9 @@ export interface DumpMark {
   grid?: { columns: number; rows: number };
   /** For points: the shape drawn (a shape other than a circle also carries cx, cy and its equal-area r). */
   shape?: string;
+  /** For radial bars: the centre angle (degrees clockwise from 12 o'clock) and the outer radius (px). */
+  angle?: number;
+  radius?: number;
 }
 
 /** A text in the scene dump: its measured box (top-left, width, height). */
@@ -72,6 +75,8 @@ function flatten(node: SceneNode, marks: DumpMark[], texts: DumpText[]): void {
       ...(node.points ? { points: node.points.map((p) => ({ x: round(p.x), y: round(p.y), ...(p.datum ? { datum: p.datum } : {}) })) } : {}),
       ...(node.series ? { series: node.series } : {}),
       ...(node.at ? { cx: round(node.at.cx), cy: round(node.at.cy), r: round(node.at.r) } : {}), ...(node.shape ? { shape: node.shape } : {}),
+      ...(node.angle !== undefined ? { angle: round(node.angle) } : {}),
+      ...(node.radius !== undefined ? { radius: round(node.radius) } : {}),
     }); return;
     case 'circle': marks.push({ role: node.role, kind: 'circle', cx: round(node.cx), cy: round(node.cy), r: round(node.r), fill: node.fill, ...(node.shape ? { shape: node.shape } : {}), ...paintOf(node), ...datum }); return;
     case 'image': marks.push({ role: node.role, kind: 'image', ...roundBox(node), ...(node.grid ? { grid: node.grid } : {}) }); return;
@@ -79,7 +84,7 @@ function flatten(node: SceneNode, marks: DumpMark[], texts: DumpText[]): void {
 }
 
 function roundAxis(a: AxisInfo): AxisInfo {
-  return { ...a, tickPositions: a.tickPositions.map(round), range: [round(a.range[0]), round(a.range[1])] };
+  return { ...a, tickPositions: a.tickPositions.map(round), range: [round(a.range[0]), round(a.range[1])], ...(a.position !== undefined ? { position: round(a.position) } : {}) };
 }
 
 function roundPanel(p: PanelInfo): PanelInfo {

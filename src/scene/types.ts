@@ -84,6 +84,10 @@ export interface PathNode extends NodeBase, Paint {
   at?: { cx: number; cy: number; r: number };
   /** For a point mark: the shape it is drawn as (circle, square, triangle, …). */
   shape?: string;
+  /** For a radial bar: the angle of its centre line, degrees clockwise from 12 o'clock. */
+  angle?: number;
+  /** For a radial bar: its outer radius, px from the circle's centre. */
+  radius?: number;
 }
 
 export interface CircleNode extends NodeBase, Paint {
@@ -141,6 +145,8 @@ export interface AxisInfo {
   range: [number, number];
   /** The kind of scale. */
   scale: ScaleKind;
+  /** For an axis among several side by side (parallel coordinates): its x, px. */
+  position?: number;
 }
 
 /** One panel of a chart: its plot box, its axes, and the facet level it shows (if faceted). */

@@ -79,7 +79,7 @@ describe('rules for the compare intent', () => {
   });
 
   it('every other intent answers that it is not supported yet', async () => {
-    for (const intent of ['matrix', 'cycle']) {
+    for (const intent of ['matrix']) {
       const r = await renderRows({ intent, keys: 'pier', values: 'n' }, piers);
       expect(r.diagnostics).toMatchObject([{ code: 'choice.intent-not-supported', path: '/intent' }]);
     }
@@ -111,7 +111,7 @@ describe('rules for the compare intent', () => {
 
   it('honours a pinned bar form and refuses forms not drawn yet', async () => {
     expect((await renderRows({ intent: 'compare', keys: 'pier', values: 'n', form: 'bar' }, piers)).ok).toBe(true);
-    expect(codes(await renderRows({ intent: 'compare', keys: 'pier', values: 'n', form: 'stream' }, piers))).toEqual(['choice.form-not-supported']);
+    expect(codes(await renderRows({ intent: 'compare', keys: 'pier', values: 'n', form: 'heatmap' }, piers))).toEqual(['choice.form-not-supported']);
   });
 
   it('refuses cluster order for bars', async () => {

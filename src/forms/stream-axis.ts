@@ -1,0 +1,46 @@
+import type { DerivedStream } from '../derive/stream.js';
+import { drawBottomBandAxis, drawLinearAxis, drawTimeAxis, type DrawnAxis } from '../layout/axes.js';
+import { ticksFor, type LayoutContext } from '../layout/kit-types.js';
+import { tickCount } from '../layout/plot-box.js';
+import { bandScale, linearScale } from '../layout/scales.js';
+import { lineHeight } from '../layout/text.js';
+import { timeScale } from '../layout/time-scale.js';
+import type { Box } from '../scene/types.js';
+
+/** The height a bottom axis takes under the plot: its tick labels and its title, with their gaps. */
+export function bottomAxisHeight(ctx: LayoutContext): number {
+  const { text, spacing } = ctx.style;
+  return 2 * spacing.tickGap + lineHeight(text.tick, spacing.lineHeight) + lineHeight(text.axisTitle, spacing.lineHeight);
+}
+
+/** The range inside the plot's width that keeps the first and last tick labels inside it. */
+function inset(plot: Box, labels: readonly string[], ctx: LayoutContext): [number, number] {
+  const { tick } = ctx.style.text;
+  const half = (i: number) => (labels.length ? ctx.measure.width(labels[i]!, tick.size, tick.weight) / 2 : 0);
+  return [plot.x + half(0), plot.x + plot.width - half(labels.length - 1)];
+}
+
+/**
+ * The key axis under a streamgraph and each key's x: a time axis for dates, a linear one for
+ * numbers, evenly spaced bands for ordered levels.
+ */
+export function streamAxis(derived: DerivedStream, plot: Box, body: Box, ctx: LayoutContext): { xs: number[]; axis: DrawnAxis } {
+  const { time } = derived.query;
+  const keys = derived.keys;
+  const extent: [number, number] = [keys[0]!.at, keys[keys.length - 1]!.at];
+  const base = { name: 'key', field: time.name, title: time.label };
+  if (time.type === 'temporal') {
+    const probe = timeScale(extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'));
+    const [l, r] = inset(plot, probe.labels, ctx);
+    const scale = timeScale(extent, [l, r], tickCount(r - l, 'horizontal'));
+    return { xs: keys.map((k) => scale.map(k.at)), axis: drawTimeAxis('bottom', scale, { kind: 'time', ...base, extent }, plot, body, ctx) };
+  }
+  if (time.type === 'quantitative') {
+    const channel = { kind: 'linear' as const, ...base, extent, format: time.format };
+    const [l, r] = inset(plot, ticksFor(ctx, extent[0], extent[1], plot.width, 'horizontal', time.format).labels, ctx);
+    const scale = linearScale(ticksFor(ctx, extent[0], extent[1], r - l, 'horizontal', time.format), [l, r]);
+    return { xs: keys.map((k) => scale.map(k.at)), axis: drawLinearAxis('bottom', scale, channel, plot, body, ctx) };
+  }
+  const band = bandScale(keys.map((k) => k.label), [plot.x, plot.x + plot.width], ctx.style.spacing.bandPadding);
+  return { xs: keys.map((k) => band.center(k.label)), axis: drawBottomBandAxis(band, { kind: 'band', ...base, domain: band.domain }, plot, body, ctx) };
+}
