@@ -1,0 +1,81 @@
+/** How two row (or column) vectors are compared. */
+export type DistanceName = 'euclidean' | 'correlation';
+
+/**
+ * A symmetric distance matrix over n items, stored row-major in one array (d[i * n + j]), with
+ * what the missing cells did to it.
+ */
+export interface DistanceMatrix {
+  n: number;
+  d: Float64Array;
+  /** Pairs compared over fewer coordinates than the vectors have, because a cell was missing. */
+  partialPairs: number;
+  /** Pairs that shared no coordinate (or too few for a correlation), given the largest distance found. */
+  undefinedPairs: number;
+}
+
+/** Each vector centred and scaled to unit standard deviation over its present values (NaN = missing); a constant vector becomes all zeros. */
+export function standardizeRows(rows: readonly Float64Array[]): Float64Array[] {
+  return rows.map((row) => {
+    let [sum, count] = [0, 0];
+    for (const v of row) if (!Number.isNaN(v)) { sum += v; count++; }
+    const mean = count ? sum / count : 0;
+    let ss = 0;
+    for (const v of row) if (!Number.isNaN(v)) ss += (v - mean) ** 2;
+    const sd = count > 1 ? Math.sqrt(ss / (count - 1)) : 0;
+    return row.map((v) => (Number.isNaN(v) ? NaN : sd > 0 ? (v - mean) / sd : 0));
+  });
+}
+
+/**
+ * Euclidean distance over the coordinates present in both vectors, scaled up by √(p / used) so a
+ * pair missing some cells is not made to look closer (as R's `dist` does: "the sum is scaled up
+ * proportionally to the number of columns used"). NaN when no coordinate is shared.
+ */
+function euclidean(a: Float64Array, b: Float64Array): { d: number; used: number } {
+  let [sum, used] = [0, 0];
+  for (let k = 0; k < a.length; k++) {
+    const x = a[k]! - b[k]!;
+    if (Number.isNaN(x)) continue;
+    sum += x * x;
+    used++;
+  }
+  return { d: used ? Math.sqrt((sum * a.length) / used) : NaN, used };
+}
+
+/** 1 − Pearson r over the coordinates present in both; NaN with fewer than two shared or a constant vector. */
+function correlation(a: Float64Array, b: Float64Array): { d: number; used: number } {
+  let [sa, sb, used] = [0, 0, 0];
+  for (let k = 0; k < a.length; k++) if (!Number.isNaN(a[k]! - b[k]!)) { sa += a[k]!; sb += b[k]!; used++; }
+  if (used < 2) return { d: NaN, used };
+  const [ma, mb] = [sa / used, sb / used];
+  let [sab, saa, sbb] = [0, 0, 0];
+  for (let k = 0; k < a.length; k++) {
+    if (Number.isNaN(a[k]! - b[k]!)) continue;
+    const [x, y] = [a[k]! - ma, b[k]! - mb];
+    sab += x * y; saa += x * x; sbb += y * y;
+  }
+  return { d: saa > 0 && sbb > 0 ? 1 - sab / Math.sqrt(saa * sbb) : NaN, used };
+}
+
+/**
+ * The distances between every pair of vectors (NaN marks a missing cell). Pairwise-complete: each
+ * pair is compared over the coordinates both have. A pair with nothing to compare gets the
+ * largest distance found, so it is joined last rather than first.
+ */
+export function distanceMatrix(rows: readonly Float64Array[], metric: DistanceName): DistanceMatrix {
+  const n = rows.length;
+  const d = new Float64Array(n * n);
+  const measure = metric === 'euclidean' ? euclidean : correlation;
+  let [partialPairs, undefinedPairs, largest] = [0, 0, 0];
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      const r = measure(rows[i]!, rows[j]!);
+      if (r.used < rows[i]!.length) partialPairs++;
+      d[i * n + j] = d[j * n + i] = r.d;
+      if (r.d > largest) largest = r.d;
+    }
+  }
+  for (let k = 0; k < d.length; k++) if (Number.isNaN(d[k]!)) { d[k] = largest; undefinedPairs++; }
+  return { n, d, partialPairs, undefinedPairs: undefinedPairs / 2 };
+}
