@@ -36,9 +36,11 @@ const ALLOWED: Record<string, RegExp> = {
   derive: /^(derive|fields\/labels)/,
   scene: /^(scene|svg\/path)/,
   svg: /^(svg|scene\/ids|font\/measurer|font\/metrics)/,
-  layout: /^(layout|svg\/path|scene\/(ids|walk)|font\/measurer)/,
+  // Data rasters (large heat maps, dense layouts) are embedded PNGs: layout encodes them.
+  layout: /^(layout|svg\/path|scene\/(ids|walk)|font\/measurer|raster\/png-encode$)/,
   // A form: the layout kit, the scene, derive operations, field helpers and types.
-  forms: /^(forms\/|layout\/|scene\/|derive\/|svg\/path$|fields\/labels$)/,
+  // A form may ask WCAG which ink reads better on a colour it fills (heat map cell values).
+  forms: /^(forms\/|layout\/|scene\/|derive\/|svg\/path$|fields\/labels$|color\/wcag$)/,
   raster: /^raster\//,
   pipeline: /^(pipeline|brief|table|fields|choose|derive|forms|layout|scene|svg|font|style)\//,
   io: /^(io|pipeline|font|style|color|svg|table|diagnostics)\//,

@@ -45,6 +45,9 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     color: raw.color as string | undefined,
     shape: raw.shape as string | undefined,
     area: raw.area as string | undefined,
+    linkage: raw.linkage as ResolvedBrief['linkage'],
+    distance: raw.distance as ResolvedBrief['distance'],
+    standardize: raw.standardize as boolean | undefined,
   };
 }
 

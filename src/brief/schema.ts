@@ -1,4 +1,4 @@
-import { AGGREGATES, FIELD_TYPES, ORDERS, type BriefVocabulary } from './types.js';
+import { AGGREGATES, DISTANCE_NAMES, FIELD_TYPES, LINKAGE_NAMES, ORDERS, type BriefVocabulary } from './types.js';
 
 /** The subset of JSON Schema the brief schema uses, and `validateAgainstSchema` understands. */
 export interface SchemaNode {
@@ -34,6 +34,7 @@ const fieldHint: SchemaNode = {
     format: { type: 'string', description: 'd3-format specifier for numbers, e.g. ",d".' },
     order: { type: 'array', items: { anyOf: [{ type: 'string' }, { type: 'number' }] }, description: 'Level order for ordinal or cyclic fields.' },
     label: { type: 'string', description: 'Readable name used in axis titles.' },
+    midpoint: { type: 'number', description: 'A meaningful centre of the values: colour diverges from it.' },
   },
 };
 
@@ -92,6 +93,9 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
       color: { type: 'string', minLength: 1, description: 'For intent correlation: the column coded by colour.' },
       shape: { type: 'string', minLength: 1, description: 'For intent correlation: the column coded by shape.' },
       area: { type: 'string', minLength: 1, description: 'For intent correlation: the column whose value each circle\'s area shows (`size` is the frame).' },
+      linkage: { type: 'string', enum: LINKAGE_NAMES, description: 'For intent matrix: how clusters of rows and columns are joined (default average).' },
+      distance: { type: 'string', enum: DISTANCE_NAMES, description: 'For intent matrix: how rows and columns are compared (default euclidean).' },
+      standardize: { type: 'boolean', description: 'For intent matrix: scale each row to mean 0 and standard deviation 1 before clustering.' },
     },
   };
 }

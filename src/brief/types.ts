@@ -13,6 +13,7 @@ export type Intent = (typeof INTENTS)[number];
 export const FORM_NAMES = [
   'bar', 'grouped-bar', 'stacked-bar', 'normalized-bar', 'line', 'index-line', 'slope', 'gantt',
   'scatter', 'histogram', 'strip', 'box', 'heatmap', 'scatter-matrix', 'parallel', 'stream', 'radial-bar', 'donut',
+  'dense',
 ] as const;
 export type FormName = (typeof FORM_NAMES)[number];
 
@@ -38,7 +39,15 @@ export interface FieldHint {
   order?: (string | number)[];
   /** Human-readable name used in titles. Default: the column name made readable. */
   label?: string;
+  /** A meaningful centre of the values (a target, a neutral score): colour diverges from it. Default: none (0 when the data straddle it). */
+  midpoint?: number;
 }
+
+export const LINKAGE_NAMES = ['single', 'complete', 'average', 'ward'] as const;
+export type Linkage = (typeof LINKAGE_NAMES)[number];
+
+export const DISTANCE_NAMES = ['euclidean', 'correlation'] as const;
+export type Distance = (typeof DISTANCE_NAMES)[number];
 
 /** Where the table comes from. */
 export type DataSource =
@@ -92,6 +101,12 @@ export interface ResolvedBrief {
   color: string | undefined;
   shape: string | undefined;
   area: string | undefined;
+  /** For intent matrix: how clusters of rows and columns are joined. Default: undefined (average linkage). */
+  linkage: Linkage | undefined;
+  /** For intent matrix: how rows (and columns) are compared. Default: undefined (Euclidean). */
+  distance: Distance | undefined;
+  /** For intent matrix: scale each row to mean 0 and standard deviation 1 before clustering rows. Default: undefined (not standardized). */
+  standardize: boolean | undefined;
 }
 
 /** The intents and forms a brief may name: those the rule table answers and the registry draws. */

@@ -2,6 +2,7 @@ import type { Intent, ResolvedBrief } from '../brief/types.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
 import { applyHardRules } from './hard-rules.js';
+import { checkMatrixShape } from './matrix-checks.js';
 import { formsForIntent } from './rules.js';
 import type { Candidate } from './types.js';
 
@@ -44,6 +45,7 @@ export function checkCompareShape(fields: Fields, brief: ResolvedBrief): Diagnos
 /** The data-shape check of each intent that has rules. */
 export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: ResolvedBrief) => Diagnostic[]>> = {
   compare: checkCompareShape,
+  matrix: checkMatrixShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */
@@ -54,6 +56,9 @@ export const INTENT_OPTIONS = {
   color: ['correlation'],
   shape: ['correlation'],
   area: ['correlation'],
+  linkage: ['matrix'],
+  distance: ['matrix'],
+  standardize: ['matrix'],
 } as const satisfies Partial<Record<keyof ResolvedBrief, readonly Intent[]>>;
 
 /** An intent-specific option given to an intent that does not use it is refused, not silently dropped. */

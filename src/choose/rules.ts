@@ -31,6 +31,13 @@ export const RULES: readonly Rule[] = [
     applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type),
     why: 'one ordered key and one value: bars in key order, because the order of the key carries meaning',
   },
+  {
+    id: 'matrix.two-keys',
+    intent: 'matrix',
+    form: 'heatmap',
+    applies: (f) => f.keys.length === 2,
+    why: 'two keys and one value: a heat map shows every row × column pair at once, colour standing for the value; clustering brings similar rows and columns together so blocks show',
+  },
 ];
 
 /** The first rule that matches the intent and the fields (and leads to the pinned form, when one is pinned). */
