@@ -12,6 +12,17 @@ export interface Rule {
   why: string;
 }
 
+/** Items beyond which bars cannot show them all (they would fold): a dense pixel layout shows every one (common practice; the design's figure). */
+export const DENSE_ITEMS = 10_000;
+
+/** How many items a compare or distribution brief has: the key's levels, or the value's rows without a key (or with a key that is not categorical). */
+function itemCount(f: Fields): number {
+  const key = f.keys[0];
+  return key && key.levels.length ? key.levels.length : (key ?? f.values[0])?.column.values.length ?? 0;
+}
+
+const manyItems = (f: Fields) => itemCount(f) >= DENSE_ITEMS;
+
 /**
  * The rule table, as data: the first rule whose intent and data shape match chooses the form.
  * Adding a form means adding a row here, one file in src/forms/ and its registry line.
@@ -21,14 +32,14 @@ export const RULES: readonly Rule[] = [
     id: 'compare.categorical-key',
     intent: 'compare',
     form: 'bar',
-    applies: (f) => f.keys.length === 1 && !isOrdered(f.keys[0]!.type),
+    applies: (f) => f.keys.length === 1 && !isOrdered(f.keys[0]!.type) && !manyItems(f),
     why: 'one categorical key and one value: bars compare values by length from a common baseline, read more accurately than angles, areas or colour (Cleveland & McGill 1984)',
   },
   {
     id: 'compare.ordered-key',
     intent: 'compare',
     form: 'bar',
-    applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type),
+    applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type) && !manyItems(f),
     why: 'one ordered key and one value: bars in key order, because the order of the key carries meaning',
   },
   {
@@ -37,6 +48,20 @@ export const RULES: readonly Rule[] = [
     form: 'heatmap',
     applies: (f) => f.keys.length === 2,
     why: 'two keys and one value: a heat map shows every row × column pair at once, colour standing for the value; clustering brings similar rows and columns together so blocks show',
+  },
+  {
+    id: 'compare.many-items',
+    intent: 'compare',
+    form: 'dense',
+    applies: (f) => f.keys.length === 1 && manyItems(f),
+    why: '10,000 or more keys: more than bars can show without folding, so one small cell per key, coloured by value, shows them all',
+  },
+  {
+    id: 'distribution.many-items',
+    intent: 'distribution',
+    form: 'dense',
+    applies: (f) => f.keys.length <= 1 && f.values.length === 1 && manyItems(f),
+    why: '10,000 or more items: one small cell per item, coloured by value and sorted, shows the shape of the whole distribution',
   },
 ];
 

@@ -72,14 +72,14 @@ function fullestShare(sorted: Float64Array, breaks: readonly number[]): number {
 /**
  * Sequential classes: nice equal intervals, unless one of them would hold more than SKEW_SHARE
  * of the values (a skewed distribution would show in one colour); then quantiles, so each class
- * holds about as many values. At most the ramp's steps and MAX_CLASSES.
+ * holds about as many values (unless `equalOnly`). At most the ramp's steps and MAX_CLASSES.
  */
-export function sequentialClasses(sorted: Float64Array, ramp: readonly string[]): ColourClasses {
+export function sequentialClasses(sorted: Float64Array, ramp: readonly string[], equalOnly = false): ColourClasses {
   const [lo, hi] = [sorted[0]!, sorted[sorted.length - 1]!];
   const most = Math.min(MAX_CLASSES, ramp.length);
   if (lo === hi) return { method: 'equal-interval', classes: [{ from: lo, to: hi, fill: spreadRamp(ramp, 1)[0]! }] };
   const equal = equalIntervalBreaks(lo, hi, most);
-  const quantile = fullestShare(sorted, equal) > SKEW_SHARE ? quantileBreaks(sorted, Math.min(most, TARGET_CLASSES)) : undefined;
+  const quantile = !equalOnly && fullestShare(sorted, equal) > SKEW_SHARE ? quantileBreaks(sorted, Math.min(most, TARGET_CLASSES)) : undefined;
   const breaks = quantile && quantile.length > 2 ? quantile : equal;
   const fills = spreadRamp(ramp, breaks.length - 1);
   return { method: breaks === equal ? 'equal-interval' : 'quantile', classes: fills.map((fill, i) => ({ from: breaks[i]!, to: breaks[i + 1]!, fill })) };

@@ -2,13 +2,13 @@ import { format } from 'd3-format';
 import type { Aggregate } from '../brief/types.js';
 import type { Decision } from '../choose/types.js';
 import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
-import { divergingClasses, sequentialClasses, type ColourClasses } from '../derive/classes.js';
+import type { ColourClasses } from '../derive/classes.js';
 import { buildMatrix, type ValueMatrix } from '../derive/matrix.js';
 import type { ClusterOptions } from '../derive/reorder.js';
 import { isOrdered, refOf, type FieldRef } from '../fields/types.js';
 import { memoized } from '../layout/kit-types.js';
-import type { Style } from '../style/types.js';
 import type { Table } from '../table/types.js';
+import { chooseClasses } from './colour-classes.js';
 import type { Planned, PlanInput } from './types.js';
 
 /** Above this many cells a heat map is drawn as one embedded raster image, not one rect per cell (measured: bench/heatmap.bench.js; 200 × 200). */
@@ -55,23 +55,6 @@ function clusterDecisions(options: ClusterOptions, brief: PlanInput['brief'], de
   decisions.push({ decision: 'ties between equal distances broken by input position', rule: 'the lowest row or column position wins, so the same table always gives the same order' });
 }
 
-/** Sequential classes, or diverging ones around a declared midpoint or zero when the data straddle it; each with its rule. */
-function chooseClasses(m: ValueMatrix, value: FieldRef, midpoint: number | undefined, style: Style, decisions: Decision[]): ColourClasses {
-  const values = Float64Array.from(m.cells.filter((v) => !Number.isNaN(v))).sort();
-  const [lo, hi] = values.length ? [values[0]!, values[values.length - 1]!] : [0, 0];
-  const straddles = lo < 0 && hi > 0;
-  if (midpoint !== undefined || straddles) {
-    const centre = midpoint ?? 0;
-    const classes = divergingClasses(lo, hi, centre, style.palette.diverging);
-    decisions.push({ decision: `diverging colours around ${centre}, ${classes.classes.length} classes of equal width`, rule: midpoint !== undefined ? `\`fields.${value.name}.midpoint\` declares ${centre} a meaningful centre, so values are read as above or below it` : 'the values straddle zero, so they are read as above or below it; equal steps each side, the same lightness at the same distance' });
-    return classes;
-  }
-  const classes = values.length ? sequentialClasses(values, style.palette.sequential) : { method: 'equal-interval' as const, classes: [] };
-  const how = classes.method === 'quantile' ? 'quantile classes (about as many cells in each)' : 'equal-interval classes with round boundaries';
-  decisions.push({ decision: `sequential colours in ${classes.classes.length} ${how}`, rule: `a reader tells only about 10 steps of one colour apart, so values are binned and the legend states each class's bounds; ${classes.method === 'quantile' ? 'equal intervals would put more than half the cells in one class' : 'equal intervals keep equal value differences as equal colour steps'}` });
-  return classes;
-}
-
 /** The heat map's plan: rows, columns and value, order, clustering, colour classes, and raster or vector cells. */
 export function planHeatmap(input: PlanInput): Outcome<Planned<HeatmapPlan>> {
   const { fields, brief, table } = input;
@@ -85,7 +68,7 @@ export function planHeatmap(input: PlanInput): Outcome<Planned<HeatmapPlan>> {
   if (order === 'cluster') clusterDecisions(cluster, brief, decisions);
   const m = matrixOf(input, table, { rows, columns, value, aggregate: brief.aggregate });
   if (m.combined > 0) decisions.push({ decision: `rows sharing a row and column combined by ${brief.aggregate}`, rule: brief.aggregate === 'sum' ? 'a cell shows one value; rows of the same pair are summed unless `aggregate:` says otherwise' : 'the brief asks for it (`aggregate:`)' });
-  const classes = chooseClasses(m, value, brief.fields[value.name]?.midpoint, input.style, decisions);
+  const classes = chooseClasses(m.cells, value, brief.fields[value.name]?.midpoint, input.style, decisions);
   const cells = m.rows.length * m.columns.length;
   const raster = cells > RASTER_CELLS;
   if (raster) decisions.push({ decision: `cells drawn as one embedded raster image (${m.columns.length} × ${m.rows.length} pixels, one per cell)`, rule: `more than ${format(',')(RASTER_CELLS)} cells: one rect each would make the SVG many megabytes; the raster keeps every cell's colour exact` });

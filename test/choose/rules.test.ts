@@ -76,7 +76,7 @@ describe('rules for the compare intent', () => {
   });
 
   it('every other intent answers that it is not supported yet', async () => {
-    for (const intent of ['trend', 'part-to-whole', 'matrix', 'cycle']) {
+    for (const intent of ['trend', 'part-to-whole', 'cycle']) {
       const r = await renderRows({ intent, keys: 'pier', values: 'n' }, piers);
       expect(r.diagnostics).toMatchObject([{ code: 'choice.intent-not-supported', path: '/intent' }]);
     }
