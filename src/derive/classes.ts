@@ -44,7 +44,8 @@ export function equalIntervalBreaks(lo: number, hi: number, most: number): numbe
     const start = Math.floor(lo / step) * step;
     const stop = Math.ceil(hi / step) * step;
     const breaks = ticks(start, stop, Math.round((stop - start) / step));
-    if (breaks.length - 1 <= most) return breaks;
+    // Spans near the smallest doubles give no usable steps: then one class from lo to hi.
+    if (breaks.length >= 2 && breaks.length - 1 <= most && breaks[0]! <= lo && breaks[breaks.length - 1]! >= hi) return breaks;
   }
   return [lo, hi];
 }
