@@ -34,9 +34,12 @@ const cold = coldRuns({
   jsdomCold: ['bench/cold-jsdom.js'],
 }, 15);
 const memory = node(['bench/memory-loop.js', '500']);
+const matrix = node(['bench/matrix.js']);
 
 const f = (ms) => (ms < 1 ? ms.toFixed(2) : ms < 10 ? ms.toFixed(1) : ms.toFixed(0));
 const x = (a, b) => `${(a / b).toFixed(2)}×`;
+const mb = (bytes) => `${(bytes / 1e6).toFixed(2)} MB`;
+const s = (t) => `${(t.wall / 1000).toFixed(2)} s (CPU ${(t.cpu / 1000).toFixed(2)} s)`;
 const table = [
   `Measured ${new Date().toISOString().slice(0, 10)}: ${process.platform}/${process.arch}, Node ${process.version}, ${cpus().length} cores; medians. Chart: demo-data/hut-overnights (40 bars, 720 × 900).`,
   '',
@@ -52,6 +55,9 @@ const table = [
   `| … text as glyph outlines only (resvg's encoder) | ${f(png.outlinesOnly)} ms | | ${x(png.outlinesOnly, png.plain)} of plain |`,
   `| … zlib encoder only (live text, font files) | ${f(png.encoderOnly)} ms | | ${x(png.encoderOnly, png.plain)} of plain |`,
   `| peak RSS over ${memory.renders} brief → PNG renders (scale 2) | ${memory.peakRssMiB.toFixed(0)} MiB | target ≤ 300 MiB | ${f(memory.msPerPng)} ms each |`,
+  `| clustering + optimal leaf order, 1,000 × 50 matrix (rows and columns) | ${s(matrix.clusterMs)} | target < 5 s | |`,
+  `| heat map 1,000 × 1,000 from CSV to SVG (clustered, one raster) | ${s(matrix.heatMs)}, SVG ${mb(matrix.heatSvgBytes)} | target < 5 s, < 2 MB | CSV ${mb(matrix.heatCsvBytes)} |`,
+  `| dense layout of 100,000 items from CSV to SVG | ${s(matrix.denseMs)}, SVG ${mb(matrix.denseSvgBytes)} | | |`,
 ].join('\n');
 writeFileSync(join(root, 'bench', 'results.md'), `${table}\n`);
 console.log(table);

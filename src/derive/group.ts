@@ -22,7 +22,7 @@ export interface RowGroup {
 }
 
 /** Where a row's key sits in the key's own order: time, number, or level index (levels looked up by Map, not indexOf). */
-function keyOrderOf(ref: FieldRef, column: Column): (row: number) => number {
+export function keyOrderOf(ref: FieldRef, column: Column): (row: number) => number {
   const index = new Map(ref.levels.map((level, i) => [level, i]));
   return (row) => {
     const v = column.values[row];
@@ -31,7 +31,8 @@ function keyOrderOf(ref: FieldRef, column: Column): (row: number) => number {
   };
 }
 
-function missingDiagnostic(rows: number[], noun: 'line' | 'row', what: string, table: Table, field: string, hint: string, notZero: boolean): Diagnostic {
+/** The warning for rows left out because a key or the value is missing, naming the rows. */
+export function missingDiagnostic(rows: number[], noun: 'line' | 'row', what: string, table: Table, field: string, hint: string, notZero: boolean): Diagnostic {
   const one = rows.length === 1;
   return diagnostic('derive.missing-values', `${describeRows(rows, noun)} ha${one ? 's' : 've'} ${what} and ${one ? 'is' : 'are'} left out${notZero ? ', not drawn as zero' : ''}`, {
     file: table.origin.file, field, rows, hint,

@@ -7,91 +7,95 @@ export function orderCost(order: readonly number[], d: Float64Array, n: number):
   return cost;
 }
 
-/** Each node's items, in the tree's own (left, right) order, indexed by node id. */
-function leavesOf(children: readonly ([number, number] | undefined)[], n: number): number[][] {
-  const leaves: number[][] = [];
-  children.forEach((c, v) => { leaves[v] = v < n ? [v] : [...leaves[c![0]]!, ...leaves[c![1]]!]; });
-  return leaves;
+/** The tree with its items renumbered by their place in the tree's own order, so every subtree is a range [start, end) split at `split`. */
+interface RangeTree {
+  order: number[];
+  start: Int32Array;
+  split: Int32Array;
+  end: Int32Array;
+  children: ([number, number] | undefined)[];
 }
 
-/**
- * The items that may end node v's order next to u when u is at its other end: the items of
- * the child of v that does not hold u (side[] marked for v); an item alone is its own end.
- */
-function outerOf(v: number, u: number, children: readonly ([number, number] | undefined)[], leaves: readonly number[][], side: Int32Array): readonly number[] {
-  const c = children[v];
-  if (!c) return [u];
-  return side[u] === c[0] ? leaves[c[1]]! : leaves[c[0]]!;
+function rangeTree(tree: ClusterTree): RangeTree {
+  const children = childrenOf(tree);
+  const size = children.length;
+  const [start, split, end] = [new Int32Array(size), new Int32Array(size), new Int32Array(size)];
+  const order: number[] = [];
+  // Explicit stack: a chain from single linkage is n deep.
+  const stack: [number, boolean][] = [[size - 1, false]];
+  while (stack.length) {
+    const [v, done] = stack.pop()!;
+    const c = children[v];
+    if (!c) { start[v] = split[v] = order.length; order.push(v); end[v] = order.length; continue; }
+    if (done) { start[v] = start[c[0]]!; split[v] = start[c[1]]!; end[v] = end[c[1]]!; continue; }
+    stack.push([v, true], [c[1], false], [c[0], false]);
+  }
+  return { order, start, split, end, children };
+}
+
+/** The items that may end child c next to position u (inside c): the other half of c, or u alone when c is an item. */
+function otherHalf(t: RangeTree, c: number, u: number): [number, number] {
+  if (!t.children[c]) return [u, u + 1];
+  return u < t.split[c]! ? [t.split[c]!, t.end[c]!] : [t.start[c]!, t.split[c]!];
 }
 
 /**
  * Optimal leaf ordering (Bar-Joseph, Gifford & Jaakkola 2001, Bioinformatics 17 Suppl 1): of the
  * 2^(n−1) orders a tree allows by flipping its nodes, the one with the least sum of distances
  * between neighbours (their criterion with similarity = −distance). Dynamic programme over the
- * tree: M(v, u, w) is the cheapest order of v's items from u to w, with u and w in different
- * children of v, so each pair of items has one M, stored in an n × n table. For each u, the best
- * join into each k of the right child is found first, which makes it O(n³) at worst and much
- * less on balanced trees. Ties go to the first pair found (lowest positions in the tree's order).
+ * tree: M(u, w) is the cheapest order of the smallest subtree holding u and w that starts at u
+ * and ends at w, so one n × n table holds every M. Items are renumbered so each subtree is a
+ * range; for each u the best join into each k of the right child is found first, which makes it
+ * O(n³) at worst and far less on balanced trees. Ties go to the first pair in the tree's order.
  */
-export function optimalLeafOrder(tree: ClusterTree, d: Float64Array): number[] {
+export function optimalLeafOrder(tree: ClusterTree, dist: Float64Array): number[] {
   const { n } = tree;
   if (n <= 2) return Array.from({ length: n }, (_, i) => i);
-  const children = childrenOf(tree);
-  const leaves = leavesOf(children, n);
+  const t = rangeTree(tree);
+  const d = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) d[i * n + j] = dist[t.order[i]! * n + t.order[j]!]!;
   const M = new Float64Array(n * n);
-  // side[u] while processing a node: the child of that node holding u.
-  const side = new Int32Array(n);
   const T = new Float64Array(n);
-  for (let v = n; v < children.length; v++) {
-    const [l, r] = children[v]!;
-    markSides(l, children, leaves, side);
-    markSides(r, children, leaves, side);
-    for (const u of leaves[l]!) {
-      const ms = outerOf(l, u, children, leaves, side);
-      for (const k of leaves[r]!) {
+  for (let v = n; v < t.children.length; v++) {
+    const [l, r] = t.children[v]!;
+    const [s, c] = [t.split[v]!, t.end[v]!];
+    for (let u = t.start[v]!; u < s; u++) {
+      const [m0, m1] = otherHalf(t, l, u);
+      for (let k = s; k < c; k++) {
         let best = Infinity;
-        for (const m of ms) { const c = M[u * n + m]! + d[m * n + k]!; if (c < best) best = c; }
+        for (let m = m0; m < m1; m++) { const x = M[u * n + m]! + d[k * n + m]!; if (x < best) best = x; }
         T[k] = best;
       }
-      for (const w of leaves[r]!) {
+      for (let w = s; w < c; w++) {
+        const [k0, k1] = otherHalf(t, r, w);
         let best = Infinity;
-        for (const k of outerOf(r, w, children, leaves, side)) { const c = T[k]! + M[k * n + w]!; if (c < best) best = c; }
+        for (let k = k0; k < k1; k++) { const x = T[k]! + M[w * n + k]!; if (x < best) best = x; }
         M[u * n + w] = M[w * n + u] = best;
       }
     }
   }
-  return unwind(children.length - 1, children, leaves, M, d, n, side);
+  return unwind(t, M, d, n).map((i) => t.order[i]!);
 }
 
-/** Records, for every item under node c, which child of c holds it (nothing for an item alone). */
-function markSides(c: number, children: readonly ([number, number] | undefined)[], leaves: readonly number[][], side: Int32Array): void {
-  const kids = children[c];
-  if (!kids) return;
-  for (const x of leaves[kids[0]]!) side[x] = kids[0];
-  for (const x of leaves[kids[1]]!) side[x] = kids[1];
-}
-
-/** The order of the root's items: the cheapest ends, then each node's halves joined at their best pair, top down. */
-function unwind(root: number, children: readonly ([number, number] | undefined)[], leaves: readonly number[][], M: Float64Array, d: Float64Array, n: number, side: Int32Array): number[] {
-  const [l, r] = children[root]!;
+/** The order of the root's items (renumbered): the cheapest ends, then each node's halves joined at their best pair, top down. */
+function unwind(t: RangeTree, M: Float64Array, d: Float64Array, n: number): number[] {
+  const root = t.children.length - 1;
   let [bu, bw, best] = [-1, -1, Infinity];
-  for (const u of leaves[l]!) for (const w of leaves[r]!) if (M[u * n + w]! < best) [bu, bw, best] = [u, w, M[u * n + w]!];
+  for (let u = 0; u < t.split[root]!; u++) for (let w = t.split[root]!; w < n; w++) if (M[u * n + w]! < best) [bu, bw, best] = [u, w, M[u * n + w]!];
   const order: number[] = [];
-  // Explicit stack (deep trees from single linkage would overflow recursion): [node, first item, last item].
   const stack: [number, number, number][] = [[root, bu, bw]];
   while (stack.length) {
     const [v, u, w] = stack.pop()!;
-    const kids = children[v];
+    const kids = t.children[v];
     if (!kids) { order.push(u); continue; }
-    const [a, b] = leaves[kids[0]]!.includes(u) ? kids : [kids[1], kids[0]];
-    markSides(a, children, leaves, side);
-    const ms = outerOf(a, u, children, leaves, side);
-    markSides(b, children, leaves, side);
-    const ks = outerOf(b, w, children, leaves, side);
+    // u's child comes first; w is in the other.
+    const [a, b] = u < t.split[v]! ? kids : [kids[1], kids[0]];
+    const [m0, m1] = otherHalf(t, a, u);
+    const [k0, k1] = otherHalf(t, b, w);
     let [bm, bk, cost] = [-1, -1, Infinity];
-    for (const m of ms) for (const k of ks) {
-      const c = M[u * n + m]! + d[m * n + k]! + M[k * n + w]!;
-      if (c < cost) [bm, bk, cost] = [m, k, c];
+    for (let m = m0; m < m1; m++) for (let k = k0; k < k1; k++) {
+      const x = M[u * n + m]! + d[m * n + k]! + M[k * n + w]!;
+      if (x < cost) [bm, bk, cost] = [m, k, x];
     }
     stack.push([b, bk, w], [a, u, bm]);
   }

@@ -71,6 +71,6 @@ export function heatmapGuides(d: DerivedHeatmap, g: HeatmapGeometry, ctx: Layout
   const gap = ctx.style.spacing.tickGap;
   const titleBox = textBoxHeight(ctx.measure, ts);
   const columnTitle = textNode(ctx.measure, { id: 'axis-title-column', role: 'axis-title', text: columns.info.title, style: ts, x: g.matrix.x + g.matrix.width / 2, top: g.columnLabelTop + g.columnLabelHeight + gap, anchor: 'middle' });
-  const rowTitle = textNode(ctx.measure, { id: 'axis-title-row', role: 'axis-title', text: truncateText(ctx.measure, rows.info.title, ts, g.rowLabelWidth), style: ts, x: g.rowLabelX, top: g.matrix.y - gap - titleBox });
+  const rowTitle = textNode(ctx.measure, { id: 'axis-title-row', role: 'axis-title', text: truncateText(ctx.measure, rows.info.title, ts, g.rowLabelWidth), style: ts, x: g.rowLabelX, top: g.matrix.y - gap - titleBox - textBoxHeight(ctx.measure, ctx.style.text.tick) / 2 });
   return { texts: [...rows.nodes, ...columns.nodes, columnTitle, rowTitle], axes: [rows.info, columns.info] };
 }

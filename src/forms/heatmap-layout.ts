@@ -67,7 +67,8 @@ export function heatmapGeometry(derived: DerivedHeatmap, body: Box, ctx: LayoutC
   const { axisTitle: ts } = style.text;
   const rowTitle = measure.width(capText(axisTitle(derived.query.rows, derived.query.rows.label)), ts.size, ts.weight);
   const rowLabelWidth = Math.min(Math.max(widest(derived.matrix.rows, ctx), rowTitle), body.width * LABEL_SHARE);
-  const top = Math.max(dendroH, titleLine) + gap;
+  // The row key's title sits half a label line above the matrix: the first row's label may reach that far up.
+  const top = Math.max(dendroH, titleLine + line / 2) + gap;
   const left = clustered ? dendroW + gap : 0;
   const width = Math.max(1, body.width - left - gap - rowLabelWidth);
   const colWide = widest(derived.matrix.columns, ctx);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { DENSE_ITEMS } from '../../src/choose/rules.js';
 import type { DensePlan } from '../../src/forms/dense-plan.js';
 import { dumpScene } from '../../src/scene/dump.js';
-import { codes, renderRows } from '../helpers.js';
+import { renderRows } from '../helpers.js';
 
 const items = (n: number) => Array.from({ length: n }, (_, i) => ({ meter: `M${i}`, litres: (i * 7919) % 1000 }));
 const compare = { intent: 'compare', keys: 'meter', values: 'litres', fields: { litres: { unit: 'litres' } } };
