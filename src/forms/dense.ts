@@ -10,6 +10,7 @@ import { valueFormatter } from '../layout/number-format.js';
 import { rasterNode } from '../layout/raster-image.js';
 import type { Table } from '../table/types.js';
 import { denseItems, planDense, type DensePlan } from './dense-plan.js';
+import { classLegend } from './colour-classes.js';
 import type { FormDef } from './types.js';
 
 /** A dense layout's items in drawing order, and the grid they fill. */
@@ -21,10 +22,7 @@ export interface DerivedDense {
   grid: DenseGrid;
 }
 
-function legendOf(d: Pick<DerivedDense, 'query'>): LegendSpec {
-  const { classes } = d.query.classes;
-  return { kind: 'binned', field: d.query.value.name, title: axisTitle(d.query.value, d.query.value.label), bins: classes.map((c) => ({ from: c.from, to: c.to, fill: c.fill })), format: valueFormatter(classes.flatMap((c) => [c.from, c.to]), d.query.value.format) };
-}
+const legendOf = (d: Pick<DerivedDense, 'query'>): LegendSpec => classLegend(d.query.value, d.query.classes);
 
 function countNote(plan: DensePlan, n: number): string {
   const what = plan.key ? `${plan.key.label.toLowerCase()} values` : 'rows';

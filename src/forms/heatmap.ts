@@ -6,12 +6,12 @@ import { axisTitle } from '../layout/axis.js';
 import { frameFor } from '../layout/compose.js';
 import { memoized, type LayoutContext } from '../layout/kit-types.js';
 import type { LegendSpec } from '../layout/legend.js';
-import { valueFormatter } from '../layout/number-format.js';
 import type { Box } from '../scene/types.js';
 import { heatmapGuides } from './heatmap-guides.js';
 import { heatmapGeometry, type DerivedHeatmap, type HeatmapGeometry } from './heatmap-layout.js';
 import { dendrogramPaths, rasterCells, vectorCells } from './heatmap-marks.js';
 import { matrixOf, planHeatmap, type HeatmapPlan } from './heatmap-plan.js';
+import { classLegend } from './colour-classes.js';
 import type { FormDef } from './types.js';
 
 const byCodePoint = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
@@ -38,10 +38,7 @@ function deriveHeatmap(table: Parameters<typeof planHeatmap>[0]['table'], plan: 
   return success<DerivedHeatmap>({ query: plan, matrix: m, rowOrder: sorted(m.rows, isOrdered(plan.rows.type)), columnOrder: sorted(m.columns, isOrdered(plan.columns.type)), rowTree: undefined, columnTree: undefined }, problems);
 }
 
-function legendOf(d: DerivedHeatmap): LegendSpec {
-  const classes = d.query.classes.classes;
-  return { kind: 'binned', field: d.query.value.name, title: axisTitle(d.query.value, d.query.value.label), bins: classes.map((c) => ({ from: c.from, to: c.to, fill: c.fill })), format: valueFormatter(classes.flatMap((c) => [c.from, c.to]), d.query.value.format) };
-}
+const legendOf = (d: DerivedHeatmap): LegendSpec => classLegend(d.query.value, d.query.classes);
 
 function missingNote(d: DerivedHeatmap): string[] {
   const n = d.matrix.missing;

@@ -13,16 +13,7 @@ export const BACTERIA_DISTANCES = Float64Array.from([
 ]);
 
 /** A deterministic pseudo-random generator (mulberry32), so random matrices are the same on every run. */
-export function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export { seededRandom as seeded } from '../../src/color/random.js';
 
 /** A rows × columns matrix of uniform values in [0, 100). */
 export function randomMatrix(rows: number, columns: number, random: () => number): Float64Array[] {
