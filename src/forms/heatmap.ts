@@ -46,8 +46,10 @@ function missingNote(d: DerivedHeatmap): string[] {
   return [`${format(',')(n)} cell${n === 1 ? ' has' : 's have'} no value: drawn ${d.query.raster ? 'in grey' : 'hatched'}, not as zero.`];
 }
 
+const ordinal = (k: number) => (k === 2 ? 'second' : `${k}th`);
+
 function thinNote(g: HeatmapGeometry, d: DerivedHeatmap): string[] {
-  const part = (k: number, n: number, what: string) => (k > 1 ? [`every ${k === 2 ? 'second' : `${k}th`} of ${format(',')(n)} ${what}`] : []);
+  const part = (k: number, n: number, what: string) => (k > 1 ? [`every ${ordinal(k)} of ${format(',')(n)} ${what}`] : []);
   const parts = [...part(g.rowStep, d.rowOrder.length, 'rows'), ...part(g.columnStep, d.columnOrder.length, 'columns')];
   return parts.length ? [`Too many to label each at this size: labelled are ${parts.join(' and ')}.`] : [];
 }
@@ -94,7 +96,7 @@ export const HEATMAP: FormDef<HeatmapPlan, DerivedHeatmap> = {
     ];
     const guides = heatmapGuides(d, g, ctx);
     const thinned = [[g.rowStep, d.query.rows.name, d.rowOrder.length], [g.columnStep, d.query.columns.name, d.columnOrder.length]] as const;
-    const diagnostics = thinned.filter(([k]) => k > 1).map(([k, field, n]) => diagnostic('layout.labels-thinned', `${n} labels do not all fit; every ${k}th is shown`, { field, hint: 'make the chart larger with `size:`' }));
+    const diagnostics = thinned.filter(([k]) => k > 1).map(([k, field, n]) => diagnostic('layout.labels-thinned', `${n} labels do not all fit; every ${ordinal(k)} is shown (the note says so)`, { field, hint: 'make the chart larger with `size:`' }));
     return { marks: [...cells.marks, ...trees], labels: cells.labels, guides: guides.texts, panels: [{ id: 'panel', plot: g.matrix, axes: guides.axes }], diagnostics };
   },
 };
