@@ -38,11 +38,11 @@ export const LINKAGES: Record<LinkageName, Update> = {
 
 /** The nearest other active slot of slot i: the smallest distance, ties to the lowest slot. */
 function nearest(d: Float64Array, n: number, active: Uint8Array, i: number): { j: number; dist: number } {
-  let [j, dist] = [-1, Infinity];
+  let j = -1, dist = Infinity;
   for (let k = 0; k < n; k++) {
     if (k === i || !active[k]) continue;
     const v = d[i * n + k]!;
-    if (v < dist) [j, dist] = [k, v];
+    if (v < dist) { j = k; dist = v; }
   }
   return { j, dist };
 }
