@@ -14,8 +14,8 @@ import type { Planned, PlanInput } from './types.js';
 export interface DensePlan {
   key: FieldRef | undefined;
   value: FieldRef;
-  /** value: largest first; key: the key's own order; data: as the rows give them. */
-  order: 'value' | 'key' | 'data';
+  /** value: largest first; key: the key's own order; label: A→Z; data: as the rows give them. */
+  order: 'value' | 'key' | 'label' | 'data';
   aggregate: Aggregate;
   classes: ColourClasses;
 }
@@ -53,6 +53,10 @@ function chooseOrder(input: PlanInput, key: FieldRef | undefined, problems: Diag
   if (order === 'data') {
     decisions.push({ decision: 'items in data order', rule: 'the brief asks for it (`order:`): runs and changes along the data show as bands' });
     return 'data';
+  }
+  if (order === 'label' && key && !isOrdered(key.type)) {
+    decisions.push({ decision: 'items in label order (A→Z by code point)', rule: 'the brief asks for it (`order:`)' });
+    return 'label';
   }
   if ((order === 'auto' || order === 'label') && key && isOrdered(key.type)) {
     decisions.push({ decision: `items in the order of \`${key.name}\``, rule: `the key is ${key.type}, so its order carries meaning` });

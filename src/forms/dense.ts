@@ -26,7 +26,7 @@ const legendOf = (d: Pick<DerivedDense, 'query'>): LegendSpec => classLegend(d.q
 
 function countNote(plan: DensePlan, n: number): string {
   const what = plan.key ? `${plan.key.label.toLowerCase()} values` : 'rows';
-  const order = plan.order === 'value' ? 'in value order, largest first' : plan.order === 'key' ? `in ${plan.key!.label.toLowerCase()} order` : 'in data order';
+  const order = plan.order === 'value' ? 'in value order, largest first' : plan.order === 'key' ? `in ${plan.key!.label.toLowerCase()} order` : plan.order === 'label' ? 'in label order' : 'in data order';
   return `${format(',')(n)} ${what}, one square cell each, ${order}, read left to right in rows from the top.`;
 }
 
@@ -38,6 +38,7 @@ function deriveDense(table: Table, plan: DensePlan, ctx: LayoutContext) {
   const index = Array.from({ length: n }, (_, i) => i);
   if (plan.order === 'value') index.sort((a, b) => items.values[b]! - items.values[a]! || a - b);
   if (plan.order === 'key') index.sort((a, b) => items.sortKeys![a]! - items.sortKeys![b]! || a - b);
+  if (plan.order === 'label') index.sort((a, b) => (items.labels![a]! < items.labels![b]! ? -1 : items.labels![a]! > items.labels![b]! ? 1 : a - b));
   const body = frameFor(legendOf({ query: plan }), [countNote(plan, n)], ctx).body;
   const grid = denseGrid(n, body.width, body.height);
   if (!grid) {

@@ -7,6 +7,7 @@ import { frameFor } from '../layout/compose.js';
 import { memoized, type LayoutContext } from '../layout/kit-types.js';
 import type { LegendSpec } from '../layout/legend.js';
 import type { Box } from '../scene/types.js';
+import type { Table } from '../table/types.js';
 import { heatmapGuides } from './heatmap-guides.js';
 import { heatmapGeometry, type DerivedHeatmap, type HeatmapGeometry } from './heatmap-layout.js';
 import { dendrogramPaths, rasterCells, vectorCells } from './heatmap-marks.js';
@@ -17,7 +18,7 @@ import type { FormDef } from './types.js';
 const byCodePoint = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
 
 /** Rows and columns in drawing order: clustered and leaf-ordered, A→Z (or the key's own order), or as the data give them. */
-function deriveHeatmap(table: Parameters<typeof planHeatmap>[0]['table'], plan: HeatmapPlan, ctx: LayoutContext) {
+function deriveHeatmap(table: Table, plan: HeatmapPlan, ctx: LayoutContext) {
   const m = matrixOf(ctx, table, plan);
   if (m.rows.length === 0 || m.columns.length === 0) {
     return failure<DerivedHeatmap>([...m.diagnostics, diagnostic('derive.no-rows', 'no row has both keys and a value to draw', { field: plan.value.name, hint: 'check that the key and value columns are filled in' })]);

@@ -37,6 +37,11 @@ describe('rules for the dense pixel layout', () => {
     expect(r.rationale.some((d) => d.decision === 'items in data order')).toBe(true);
   });
 
+  it('order: label puts the items A→Z', async () => {
+    const r = await renderRows({ ...compare, form: 'dense', order: 'label' }, items(50));
+    expect(r.choice).toMatchObject({ form: 'dense', plan: { order: 'label' } });
+  });
+
   it('in value order the classes are equal intervals (quantiles would make every band equal)', async () => {
     const skewed = items(3000).map((x, i) => ({ ...x, litres: i < 2900 ? i % 50 : 5000 + i }));
     const r = await renderRows({ ...compare, form: 'dense' }, skewed);
