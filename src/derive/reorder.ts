@@ -44,10 +44,11 @@ export function dendrogramNodes(axis: Pick<ClusteredAxis, 'tree' | 'order'>): { 
 }
 
 /**
- * Both sides of a matrix clustered and ordered: its rows as vectors over the columns, and its
- * columns as vectors over the rows (of the standardized rows, when asked; the cells keep their values).
+ * The sides of a matrix asked for, clustered and ordered: its rows as vectors over the columns,
+ * its columns as vectors over the rows (of the standardized rows, when asked; the cells keep
+ * their values). A side not asked for is undefined.
  */
-export function clusterMatrix(m: Pick<ValueMatrix, 'rows' | 'columns' | 'cells'>, options: ClusterOptions): { rows: ClusteredAxis; columns: ClusteredAxis } {
+export function clusterMatrix(m: Pick<ValueMatrix, 'rows' | 'columns' | 'cells'>, options: ClusterOptions, sides = { rows: true, columns: true }): { rows?: ClusteredAxis; columns?: ClusteredAxis } {
   const rows = vectorsOf(m, false);
   const scaled = options.standardize ? standardizeRows(rows) : rows;
   let cells = m.cells;
@@ -55,5 +56,8 @@ export function clusterMatrix(m: Pick<ValueMatrix, 'rows' | 'columns' | 'cells'>
     cells = new Float64Array(m.cells.length);
     scaled.forEach((r, i) => cells.set(r, i * m.columns.length));
   }
-  return { rows: clusterAxis(scaled, options), columns: clusterAxis(vectorsOf({ ...m, cells }, true), options) };
+  return {
+    ...(sides.rows ? { rows: clusterAxis(scaled, options) } : {}),
+    ...(sides.columns ? { columns: clusterAxis(vectorsOf({ ...m, cells }, true), options) } : {}),
+  };
 }

@@ -49,7 +49,7 @@ function widest(labels: readonly string[], ctx: LayoutContext): number {
 }
 
 /**
- * The heat map's geometry in a body: dendrogram left and above (when clustered), row labels at
+ * The heat map's geometry in a body: dendrograms left and above (for a side clustered), row labels at
  * the right (as wide as their title too), column labels below (turned when they do not fit their
  * columns upright), the column key's title under them and the row key's title above the row
  * labels; the matrix takes the rest.
@@ -60,16 +60,16 @@ export function heatmapGeometry(derived: DerivedHeatmap, body: Box, ctx: LayoutC
   const gap = style.spacing.tickGap;
   const line = textBoxHeight(measure, style.text.tick);
   const titleLine = textBoxHeight(measure, style.text.axisTitle);
-  const clustered = derived.rowTree !== undefined;
   const [nr, nc] = [derived.matrix.rows.length, derived.matrix.columns.length];
-  const dendroW = clustered ? clamp(body.width * DENDROGRAM_SHARE, DENDROGRAM_PX) : 0;
-  const dendroH = clustered ? clamp(body.height * DENDROGRAM_SHARE, DENDROGRAM_PX) : 0;
+  const [byRows, byColumns] = [derived.rowTree !== undefined, derived.columnTree !== undefined];
+  const dendroW = byRows ? clamp(body.width * DENDROGRAM_SHARE, DENDROGRAM_PX) : 0;
+  const dendroH = byColumns ? clamp(body.height * DENDROGRAM_SHARE, DENDROGRAM_PX) : 0;
   const { axisTitle: ts } = style.text;
   const rowTitle = measure.width(capText(axisTitle(derived.query.rows, derived.query.rows.label)), ts.size, ts.weight);
   const rowLabelWidth = Math.min(Math.max(widest(derived.matrix.rows, ctx), rowTitle), body.width * LABEL_SHARE);
   // The row key's title sits half a label line above the matrix: the first row's label may reach that far up.
   const top = Math.max(dendroH, titleLine + line / 2) + gap;
-  const left = clustered ? dendroW + gap : 0;
+  const left = byRows ? dendroW + gap : 0;
   const width = Math.max(1, body.width - left - gap - rowLabelWidth);
   const colWide = widest(derived.matrix.columns, ctx);
   const upright = colWide + 2 <= width / nc;
@@ -78,8 +78,8 @@ export function heatmapGeometry(derived: DerivedHeatmap, body: Box, ctx: LayoutC
   const matrix = { x: body.x + left, y: body.y + top, width, height };
   return {
     matrix,
-    rowDendrogram: clustered ? { x: body.x, y: matrix.y, width: dendroW, height } : undefined,
-    columnDendrogram: clustered ? { x: matrix.x, y: body.y + top - gap - dendroH, width, height: dendroH } : undefined,
+    rowDendrogram: byRows ? { x: body.x, y: matrix.y, width: dendroW, height } : undefined,
+    columnDendrogram: byColumns ? { x: matrix.x, y: body.y + top - gap - dendroH, width, height: dendroH } : undefined,
     rowLabelX: matrix.x + width + gap,
     rowLabelWidth,
     columnLabelsTurned: !upright,

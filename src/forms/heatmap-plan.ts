@@ -52,8 +52,15 @@ function chooseOrder(input: PlanInput, problems: Diagnostic[], decisions: Decisi
   return 'cluster';
 }
 
-function clusterDecisions(options: ClusterOptions, brief: PlanInput['brief'], decisions: Decision[]): void {
-  decisions.push({ decision: `rows and columns reordered by hierarchical clustering (${options.linkage} linkage, ${options.distance} distance), then by optimal leaf ordering`, rule: 'similar rows and columns side by side let blocks of similar values show; of the orders the tree allows, the one with the least distance between neighbours is drawn (Bar-Joseph, Gifford & Jaakkola 2001); dendrograms beside and above show the tree, branch heights to scale' });
+/** Keys with an order of their own (time, numbers, levels, cycles) keep it; the other sides are clustered, each decision stated. */
+function orderedSides(keys: [FieldRef, FieldRef], options: ClusterOptions, brief: PlanInput['brief'], decisions: Decision[]): void {
+  const kept = keys.filter((k) => isOrdered(k.type));
+  for (const k of kept) decisions.push({ decision: `${k === keys[0] ? 'rows' : 'columns'} in the order of \`${k.name}\`, not clustered`, rule: `the key is ${k.type}, so its order carries meaning; reordering it by similarity would hide that order` });
+  if (kept.length < 2) clusterDecisions(options, brief, decisions, kept.length ? (kept[0] === keys[0] ? 'columns' : 'rows') : 'rows and columns');
+}
+
+function clusterDecisions(options: ClusterOptions, brief: PlanInput['brief'], decisions: Decision[], sides: string): void {
+  decisions.push({ decision: `${sides} reordered by hierarchical clustering (${options.linkage} linkage, ${options.distance} distance), then by optimal leaf ordering`, rule: `similar ${sides} side by side let blocks of similar values show; of the orders the tree allows, the one with the least distance between neighbours is drawn (Bar-Joseph, Gifford & Jaakkola 2001); a dendrogram beside each clustered side shows the tree, branch heights to scale` });
   decisions.push(brief.linkage ? { decision: `${options.linkage} linkage`, rule: 'the brief asks for it (`linkage:`)' } : { decision: 'average linkage', rule: 'the default: the distance between two clusters is the mean distance between their members, neither chaining like single linkage nor ruled by the farthest pair like complete linkage' });
   if (brief.distance) decisions.push({ decision: `${options.distance} distance`, rule: options.distance === 'correlation' ? 'the brief asks for it (`distance:`): 1 − Pearson r, so rows that rise and fall together are close whatever their level' : 'the brief asks for it (`distance:`)' });
   if (options.standardize) decisions.push({ decision: 'each row standardized (mean 0, standard deviation 1) before clustering', rule: 'the brief asks for it (`standardize:`): rows are compared by their pattern, not their level; the colours still show the values as given' });
@@ -70,7 +77,7 @@ export function planHeatmap(input: PlanInput): Outcome<Planned<HeatmapPlan>> {
   const order = chooseOrder(input, problems, decisions);
   if (problems.some((p) => p.severity === 'error')) return failure(problems);
   const cluster: ClusterOptions = { linkage: brief.linkage ?? 'average', distance: brief.distance ?? 'euclidean', standardize: brief.standardize ?? false };
-  if (order === 'cluster') clusterDecisions(cluster, brief, decisions);
+  if (order === 'cluster') orderedSides([rows, columns], cluster, brief, decisions);
   const m = matrixOf(input, table, { rows, columns, value, aggregate: brief.aggregate });
   if (m.combined > 0) decisions.push({ decision: `rows sharing a row and column combined by ${brief.aggregate}`, rule: brief.aggregate === 'sum' ? 'a cell shows one value; rows of the same pair are summed unless `aggregate:` says otherwise' : 'the brief asks for it (`aggregate:`)' });
   const classes = chooseClasses(m.cells, value, brief.fields[value.name]?.midpoint, input.style, decisions);

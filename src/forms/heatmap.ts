@@ -30,13 +30,15 @@ function deriveHeatmap(table: Table, plan: HeatmapPlan, ctx: LayoutContext) {
     }));
   }
   const identity = (labels: string[]) => labels.map((_, i) => i);
-  if (plan.order === 'cluster') {
-    const clustered = clusterMatrix(m, plan.cluster);
-    return success<DerivedHeatmap>({ query: plan, matrix: m, rowOrder: clustered.rows.order, columnOrder: clustered.columns.order, rowTree: clustered.rows.tree, columnTree: clustered.columns.tree }, problems);
-  }
-  // Keys with an order of their own are already in it; categorical ones sort by code point for `label`.
+  // Keys with an order of their own are already in it (and never clustered); categorical ones sort by code point for `label`.
   const sorted = (labels: string[], ordered: boolean) => (plan.order === 'label' && !ordered ? identity(labels).sort((a, b) => byCodePoint(labels[a]!, labels[b]!)) : identity(labels));
-  return success<DerivedHeatmap>({ query: plan, matrix: m, rowOrder: sorted(m.rows, isOrdered(plan.rows.type)), columnOrder: sorted(m.columns, isOrdered(plan.columns.type)), rowTree: undefined, columnTree: undefined }, problems);
+  const sides = { rows: plan.order === 'cluster' && !isOrdered(plan.rows.type), columns: plan.order === 'cluster' && !isOrdered(plan.columns.type) };
+  const clustered = sides.rows || sides.columns ? clusterMatrix(m, plan.cluster, sides) : {};
+  return success<DerivedHeatmap>({
+    query: plan, matrix: m,
+    rowOrder: clustered.rows?.order ?? sorted(m.rows, isOrdered(plan.rows.type)), columnOrder: clustered.columns?.order ?? sorted(m.columns, isOrdered(plan.columns.type)),
+    rowTree: clustered.rows?.tree, columnTree: clustered.columns?.tree,
+  }, problems);
 }
 
 const legendOf = (d: DerivedHeatmap): LegendSpec => classLegend(d.query.value, d.query.classes);
@@ -81,7 +83,7 @@ export const HEATMAP: FormDef<HeatmapPlan, DerivedHeatmap> = {
   words(d, ctx) {
     const value = axisTitle(d.query.value, d.query.value.label);
     const [nr, nc] = [d.matrix.rows.length, d.matrix.columns.length];
-    const how = d.rowTree ? 'rows and columns clustered by similarity' : `rows and columns in ${d.query.order} order`;
+    const how = d.rowTree && d.columnTree ? 'rows and columns clustered by similarity' : d.rowTree ? 'rows clustered by similarity' : d.columnTree ? 'columns clustered by similarity' : `rows and columns in ${d.query.order === 'cluster' ? 'their keys\'' : d.query.order} order`;
     return {
       title: `${value} by ${d.query.rows.label.toLowerCase()} and ${d.query.columns.label.toLowerCase()}`,
       description: `Heat map of ${value.toLowerCase()}: ${nr} ${d.query.rows.label.toLowerCase()} rows by ${nc} ${d.query.columns.label.toLowerCase()} columns, ${how}, coloured in ${d.query.classes.classes.length} classes.`,

@@ -32,6 +32,17 @@ describe('rules for the matrix intent', () => {
     expect(r.scene!.root.children.some((n) => n.role === 'dendrogram')).toBe(false);
   });
 
+  it('a key with an order of its own (months) keeps it: only the other side is clustered, with its dendrogram', async () => {
+    const months = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun'];
+    const data = ['North', 'South', 'East', 'West'].flatMap((site, i) => months.map((month, j) => ({ site, month, level: ((i * 7 + j * 3) % 11) + (i % 2) * 20 })));
+    const r = await renderRows({ intent: 'matrix', keys: ['site', 'month'], values: 'level', fields: { level: { unit: 'reads' } } }, data);
+    expect(decisions(r)).toMatch(/columns in the order of `month`, not clustered \| the key is cyclic/);
+    expect(decisions(r)).toMatch(/^rows reordered by hierarchical clustering/m);
+    expect(r.scene!.axes.find((a) => a.orient === 'bottom')!.domain).toEqual(months);
+    const ids = JSON.stringify(r.scene!.root).match(/dendrogram-(row|column)/g) ?? [];
+    expect(new Set(ids)).toEqual(new Set(['dendrogram-row']));
+  });
+
   it('values either side of zero, or a declared midpoint, get diverging colours', async () => {
     const signed = rows.map((x) => ({ ...x, level: (x.level as number) - 30 }));
     expect((await renderRows(matrix(), signed)).choice!.plan).toMatchObject({ classes: { method: 'diverging', midpoint: 0 } });
