@@ -36,9 +36,12 @@ const cold = coldRuns({
 const memory = node(['bench/memory-loop.js', '500']);
 const line = node(['bench/line.js']);
 const mb = (bytes) => `${(bytes / 1e6).toFixed(2)} MB`;
+const matrix = node(['bench/matrix.js']);
 
 const f = (ms) => (ms < 1 ? ms.toFixed(2) : ms < 10 ? ms.toFixed(1) : ms.toFixed(0));
 const x = (a, b) => `${(a / b).toFixed(2)}×`;
+const mb = (bytes) => `${(bytes / 1e6).toFixed(2)} MB`;
+const s = (t) => `${(t.wall / 1000).toFixed(2)} s (CPU ${(t.cpu / 1000).toFixed(2)} s)`;
 const table = [
   `Measured ${new Date().toISOString().slice(0, 10)}: ${process.platform}/${process.arch}, Node ${process.version}, ${cpus().length} cores; medians. Chart: demo-data/hut-overnights (40 bars, 720 × 900).`,
   '',
@@ -56,6 +59,9 @@ const table = [
   `| peak RSS over ${memory.renders} brief → PNG renders (scale 2) | ${memory.peakRssMiB.toFixed(0)} MiB | target ≤ 300 MiB | ${f(memory.msPerPng)} ms each |`,
   `| 1,000,000-point line from rows in memory to SVG, M4 (CPU time) | ${f(line.svgMs)} ms, ${mb(line.svgBytes)} | every point through a string template: ${f(line.plainSvgMs)} ms, ${mb(line.plainSvgBytes)} | ${x(line.svgMs, line.plainSvgMs)} its time, ${x(line.svgBytes, line.plainSvgBytes)} its bytes |`,
   `| … to PNG at scale 2 (CPU time) | ${f(line.pngMs)} ms | resvg on the every-point SVG: ${f(line.plainPngMs)} ms | ${x(line.pngMs, line.plainPngMs)} of it |`,
+  `| clustering + optimal leaf order, 1,000 × 50 matrix (rows and columns) | ${s(matrix.clusterMs)} | target < 5 s | |`,
+  `| heat map 1,000 × 1,000 from CSV to SVG (clustered, one raster) | ${s(matrix.heatMs)}, SVG ${mb(matrix.heatSvgBytes)} | target < 5 s, < 2 MB | CSV ${mb(matrix.heatCsvBytes)} |`,
+  `| dense layout of 100,000 items from CSV to SVG | ${s(matrix.denseMs)}, SVG ${mb(matrix.denseSvgBytes)} | | |`,
 ].join('\n');
 writeFileSync(join(root, 'bench', 'results.md'), `${table}\n`);
 console.log(table);

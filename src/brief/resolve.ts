@@ -59,6 +59,9 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     after: raw.after as string | undefined,
     fit: raw.fit as ResolvedBrief['fit'],
     facet: facetOption(raw.facet),
+    linkage: raw.linkage as ResolvedBrief['linkage'],
+    distance: raw.distance as ResolvedBrief['distance'],
+    standardize: raw.standardize as boolean | undefined,
   };
 }
 

@@ -1,4 +1,4 @@
-import { AGGREGATES, FIELD_TYPES, NOTATIONS, ORDERS, type BriefVocabulary } from './types.js';
+import { AGGREGATES, DISTANCE_NAMES, FIELD_TYPES, LINKAGE_NAMES, NOTATIONS, ORDERS, type BriefVocabulary } from './types.js';
 
 /** The subset of JSON Schema the brief schema uses, and `validateAgainstSchema` understands. */
 export interface SchemaNode {
@@ -36,6 +36,7 @@ const fieldHint: SchemaNode = {
     label: { type: 'string', description: 'Readable name used in axis titles.' },
     additive: { type: 'boolean', description: 'Whether values of this column may be added up (false for rates, shares, temperatures, pH). Default: false for the units %, ‰, °C, °F, K, pH and dB, true otherwise.' },
     zero: { type: 'string', enum: ['meaningful', 'arbitrary'], description: 'Whether zero means none or is an arbitrary point (e.g. °C); a line leaves an arbitrary zero out of its axis.' },
+    midpoint: { type: 'number', description: 'A meaningful centre of the values: colour diverges from it.' },
   },
 };
 
@@ -104,6 +105,9 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
         description: 'Small multiples: one panel per level of this column, all on shared scales; `{ by, context: true }` also draws the other panels in grey behind each.',
         anyOf: [{ type: 'string', minLength: 1 }, { type: 'object', additionalProperties: false, required: ['by'], properties: { by: { type: 'string', minLength: 1 }, context: { type: 'boolean', default: false } } }],
       },
+      linkage: { type: 'string', enum: LINKAGE_NAMES, description: 'For intent matrix: how clusters of rows and columns are joined (default average).' },
+      distance: { type: 'string', enum: DISTANCE_NAMES, description: 'For intent matrix: how rows and columns are compared (default euclidean).' },
+      standardize: { type: 'boolean', description: 'For intent matrix: scale each row to mean 0 and standard deviation 1 before clustering.' },
     },
   };
 }

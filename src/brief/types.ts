@@ -15,6 +15,7 @@ export const FORM_NAMES = [
   'scatter', 'histogram', 'strip', 'box', 'heatmap', 'scatter-matrix', 'parallel', 'stream', 'radial-bar', 'donut',
   'change-bar',
   'dot',
+  'dense',
 ] as const;
 export type FormName = (typeof FORM_NAMES)[number];
 
@@ -53,7 +54,15 @@ export interface FieldHint {
   additive?: boolean;
   /** Whether the value's zero means "none" ('meaningful') or is an arbitrary point of its scale ('arbitrary', e.g. °C): a line's value axis leaves an arbitrary zero out. Default: 'meaningful'. */
   zero?: 'meaningful' | 'arbitrary';
+  /** A meaningful centre of the values (a target, a neutral score): colour diverges from it. Default: none (0 when the data straddle it). */
+  midpoint?: number;
 }
+
+export const LINKAGE_NAMES = ['single', 'complete', 'average', 'ward'] as const;
+export type Linkage = (typeof LINKAGE_NAMES)[number];
+
+export const DISTANCE_NAMES = ['euclidean', 'correlation'] as const;
+export type Distance = (typeof DISTANCE_NAMES)[number];
 
 /** Where the table comes from. */
 export type DataSource =
@@ -124,6 +133,12 @@ export interface ResolvedBrief {
    * Default: undefined (one plot).
    */
   facet: { by: string; context: boolean } | undefined;
+  /** For intent matrix: how clusters of rows and columns are joined. Default: undefined (average linkage). */
+  linkage: Linkage | undefined;
+  /** For intent matrix: how rows (and columns) are compared. Default: undefined (Euclidean). */
+  distance: Distance | undefined;
+  /** For intent matrix: scale each row to mean 0 and standard deviation 1 before clustering rows. Default: undefined (not standardized). */
+  standardize: boolean | undefined;
 }
 
 /** The intents and forms a brief may name: those the rule table answers and the registry draws. */

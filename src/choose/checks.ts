@@ -5,7 +5,8 @@ import { applyHardRules } from './hard-rules.js';
 import { partsShapeChecks } from './parts-checks.js';
 import { checkDistributionShape } from './distribution-checks.js';
 import { checkFlowShape, checkProfileShape } from './multi-checks.js';
-import { formsForIntent } from './rules.js';
+import { checkMatrixShape } from './matrix-checks.js';
+import { formsForIntent, RULES } from './rules.js';
 import { checkTrendShape } from './trend-checks.js';
 import { checkScheduleShape } from './schedule-checks.js';
 import { checkShiftShape } from './shift-checks.js';
@@ -61,6 +62,7 @@ export const SHAPE_CHECKS: Partial<Record<Intent, (fields: Fields, brief: Resolv
   cycle: checkCompareShape,
   flow: checkFlowShape,
   profile: checkProfileShape,
+  matrix: checkMatrixShape,
 };
 
 /** Brief options that belong to some intents only, and the intents that use them. */
@@ -73,6 +75,9 @@ export const INTENT_OPTIONS = {
   area: ['correlation'],
   after: ['schedule'],
   fit: ['correlation'],
+  linkage: ['matrix'],
+  distance: ['matrix'],
+  standardize: ['matrix'],
 } as const satisfies Partial<Record<keyof ResolvedBrief, readonly Intent[]>>;
 
 /** An intent-specific option given to an intent that does not use it is refused, not silently dropped. */
@@ -114,6 +119,22 @@ function checkPercentOfFractions(value: Fields['values'][number]): Diagnostic[] 
   return [diagnostic('choice.percent-of-fractions', `the value \`${value.name}\` has unit % but every number lies between 0 and 1 (e.g. ${numbers.find((v) => v > 0 && v < 1)}), so it is probably a fraction and would be labelled as under one percent`, {
     path: `/fields/${value.name}/unit`, field: value.name, found: 'numbers between 0 and 1', expected: 'percentages from 0 to 100',
     hint: `write it as a percentage with \`fields: { ${value.name}: { format: ".0%" } }\` and remove \`unit: "%"\`, or multiply the column by 100`,
+  })];
+}
+
+/**
+ * A pinned form answers the brief's intent only if a rule row leads that intent to it: a scatter
+ * plot pinned under `intent: compare` would be asked for data of another shape. Refused with the
+ * intents the form answers and the forms the intent offers; checked after the hard rules, whose
+ * refusals (a radial form on a key that is not cyclic) say more.
+ */
+export function checkPinnedForm(brief: ResolvedBrief): Diagnostic[] {
+  if (brief.form === undefined || formsForIntent(brief.intent).includes(brief.form)) return [];
+  const intents = RULES.filter((r) => r.form === brief.form).map((r) => r.intent).filter((i, n, all) => all.indexOf(i) === n);
+  const offered = formsForIntent(brief.intent);
+  return [diagnostic('choice.form-not-for-intent', `the form ${brief.form} does not answer intent ${brief.intent}${intents.length ? `: it answers ${intents.join(' or ')}` : ''}`, {
+    path: '/form', found: brief.form, expected: offered.join(', '),
+    hint: intents.length ? `use \`intent: ${intents[0]}\`, or pin one of the forms of intent ${brief.intent}: ${offered.join(', ')}` : `pin one of the forms of intent ${brief.intent}: ${offered.join(', ')}`,
   })];
 }
 

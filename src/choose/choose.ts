@@ -5,7 +5,7 @@ import type { Fields } from '../fields/types.js';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Style } from '../style/types.js';
 import type { Table } from '../table/types.js';
-import { checkBriefRules, checkValueUnit, SHAPE_CHECKS } from './checks.js';
+import { checkBriefRules, checkPinnedForm, checkValueUnit, SHAPE_CHECKS } from './checks.js';
 import { chooseFacet } from './facet.js';
 import { applyHardRules } from './hard-rules.js';
 import { matchRule } from './rules.js';
@@ -41,7 +41,7 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext,
     })]);
   }
   const hard = applyHardRules({ traits: form.traits, form: form.noun, brief, fields, maxColours: ctx.style.palette.categorical.length }, ctx.lenient);
-  problems.push(...hard.problems);
+  problems.push(...hard.problems, ...checkPinnedForm(brief));
   if (hasErrors(problems)) return failure(problems);
   problems.push(...checkValueUnit(fields));
   // A pinned form is explained by its own rule row when one fits, never by another form's.

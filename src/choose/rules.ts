@@ -19,6 +19,16 @@ export interface Rule {
 
 /** Whether the brief marks one of its values `zero: arbitrary`, or gives two values: what may lead compare to dots. */
 const mayBeDots = (b: ResolvedBrief) => b.values.length === 2 || b.values.some((v) => Object.hasOwn(b.fields, v) && b.fields[v]!.zero === 'arbitrary');
+/** Items beyond which bars cannot show them all (they would fold): a dense pixel layout shows every one (common practice; the design's figure). */
+export const DENSE_ITEMS = 10_000;
+
+/** How many items a compare or distribution brief has: the key's levels, or the value's rows without a key (or with a key that is not categorical). */
+function itemCount(f: Fields): number {
+  const key = f.keys[0];
+  return key && key.levels.length ? key.levels.length : (key ?? f.values[0])?.column.values.length ?? 0;
+}
+
+const manyItems = (f: Fields) => itemCount(f) >= DENSE_ITEMS;
 
 /**
  * The rule table, as data: the first rule whose intent and data shape match chooses the form.
@@ -45,14 +55,14 @@ export const RULES: readonly Rule[] = [
     id: 'compare.categorical-key',
     intent: 'compare',
     form: 'bar',
-    applies: (f) => f.keys.length === 1 && !isOrdered(f.keys[0]!.type),
+    applies: (f) => f.keys.length === 1 && !isOrdered(f.keys[0]!.type) && !manyItems(f),
     why: 'one categorical key and one value: bars compare values by length from a common baseline, read more accurately than angles, areas or colour (Cleveland & McGill 1984)',
   },
   {
     id: 'compare.ordered-key',
     intent: 'compare',
     form: 'bar',
-    applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type),
+    applies: (f) => f.keys.length === 1 && isOrdered(f.keys[0]!.type) && !manyItems(f),
     why: 'one ordered key and one value: bars in key order, because the order of the key carries meaning',
   },
   {
@@ -182,6 +192,29 @@ export const RULES: readonly Rule[] = [
     form: 'scatter-matrix',
     applies: (f) => f.values.length >= 3 && f.values.length <= 12,
     why: 'three to twelve quantitative values: a scatterplot matrix shows every pair of them, each by position on common scales, where parallel coordinates would show only neighbouring pairs',
+  },
+  {
+    id: 'matrix.two-keys',
+    intent: 'matrix',
+    form: 'heatmap',
+    applies: (f) => f.keys.length === 2,
+    why: 'two keys and one value: a heat map shows every row × column pair at once, colour standing for the value; clustering brings similar rows and columns together so blocks show',
+  },
+  {
+    id: 'compare.many-items',
+    intent: 'compare',
+    form: 'dense',
+    applies: (f) => f.keys.length === 1 && manyItems(f),
+    why: '10,000 or more keys: more than bars can show without folding, so one small cell per key, coloured by value, shows them all',
+  },
+  {
+    // After the histogram, strip and box rows: a distribution is binned or summarised by default,
+    // so this row is reached only when the brief pins \`form: dense\`.
+    id: 'distribution.many-items',
+    intent: 'distribution',
+    form: 'dense',
+    applies: (f) => f.keys.length <= 1 && f.values.length === 1,
+    why: 'the brief pins a dense layout: one small cell per item, coloured by value and sorted, shows the shape of the whole distribution item by item',
   },
 ];
 

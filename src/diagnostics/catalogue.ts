@@ -46,6 +46,7 @@ export const CATALOGUE = {
   // choice: the rules
   'choice.intent-not-supported': 'error',
   'choice.form-not-supported': 'error',
+  'choice.form-not-for-intent': 'error',
   'choice.no-key': 'error',
   'choice.too-many-keys': 'error',
   'choice.no-value': 'error',
@@ -82,6 +83,7 @@ export const CATALOGUE = {
   'choice.flow-needs-series': 'error',
   'choice.overplotting': 'warning',
   'choice.profile-too-few-values': 'error',
+  'choice.matrix-needs-two-keys': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
   'derive.missing-values': 'warning',
@@ -117,6 +119,8 @@ export const CATALOGUE = {
   'derive.cannot-bin': 'error',
   'derive.too-many-grouped-bars': 'error',
   'derive.stream-too-few-keys': 'error',
+  'derive.missing-cells': 'warning',
+  'derive.too-many-items': 'error',
   // layout: text and geometry
   'layout.labels-thinned': 'info',
   'layout.label-truncated': 'warning',

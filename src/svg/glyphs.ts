@@ -35,6 +35,13 @@ export class GlyphDefs {
   }
 }
 
+/** Where the text run starts before any rotation: the box's left edge, which a turned text's box no longer gives. */
+function startX(node: TextNode, measure: TextMeasurer): number {
+  if (!node.rotate) return node.box.x;
+  const width = measure.width(node.text, node.size, node.weight);
+  return node.anchor === 'start' ? node.x : node.anchor === 'middle' ? node.x - width / 2 : node.x - width;
+}
+
 /** A text node drawn as glyph outlines: one group scaled from font units, a <use> per glyph. */
 export function outlineText(node: TextNode, measure: TextMeasurer, defs: GlyphDefs, aria: string, rotation = '', title = ''): string {
   const { glyphs, unitsPerEm } = measure.run(node.text, node.weight);
@@ -43,7 +50,7 @@ export function outlineText(node: TextNode, measure: TextMeasurer, defs: GlyphDe
     const id = defs.ref(g.codePoint, node.weight);
     return id ? [`<use href="#${id}"${g.x ? ` x="${fmt(g.x)}"` : ''}/>`] : [];
   });
-  const transform = `translate(${fmt(node.box.x)} ${fmt(node.y)}) scale(${Number(scale.toPrecision(6))} ${-Number(scale.toPrecision(6))})`;
+  const transform = `translate(${fmt(startX(node, measure))} ${fmt(node.y)}) scale(${Number(scale.toPrecision(6))} ${-Number(scale.toPrecision(6))})`;
   const glyphGroup = `<g${aria} fill="${node.fill}" transform="${transform}">${title}${uses.join('')}</g>`;
   return rotation ? `<g${rotation}>${glyphGroup}</g>` : glyphGroup;
 }

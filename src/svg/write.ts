@@ -69,7 +69,8 @@ function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined)
     case 'text':
       return mode.kind === 'live' ? liveText(node, cls) : outlineText(node, mode.measure, defs!, cls, rotation(node), fullTitle(node));
     case 'image':
-      return `<image${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" href="${escapeXml(node.href)}"${node.grid ? ' preserveAspectRatio="none" image-rendering="pixelated"' : ''}/>`;
+      // A data raster is drawn without smoothing: optimizeSpeed (SVG 1.1; CSS Images 3 treats it as crisp-edges) is what resvg honours, not `pixelated`.
+      return `<image${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" href="${escapeXml(node.href)}"${node.grid ? ' preserveAspectRatio="none" image-rendering="optimizeSpeed"' : ''}/>`;
   }
 }
 

@@ -79,6 +79,12 @@ describe('rules for the schedule intent', () => {
   it('a Gantt chart pinned under another intent (no start or end) is refused with a coded error, never a crash', async () => {
     const r = await renderRows({ intent: 'compare', form: 'gantt', keys: 'task', values: 'x' }, rows.map((x) => ({ ...x, x: 1 })));
     expect(codes(r)).not.toContain('render.internal');
+    expect(problem(r, 'choice.form-not-for-intent')).toMatchObject({ path: '/form' });
+    expect(r.diagnostics.find((d) => d.code === 'choice.form-not-for-intent')!.hint).toMatch(/intent: schedule/);
+  });
+
+  it('a Gantt chart with no start or end is refused with the options it needs', async () => {
+    const r = await renderRows({ intent: 'schedule', form: 'gantt', keys: 'task', values: 'x' }, rows.map((x) => ({ ...x, x: 1 })));
     expect(problem(r, 'choice.schedule-no-times')).toMatchObject({ path: '/start' });
   });
 });

@@ -129,8 +129,9 @@ describe('part-to-whole → normalized bars', () => {
 
 describe('pinned forms with the wrong keys are refused, never drawn from half the data', () => {
   it('stacked or normalized bars pinned with one key, and a donut pinned with two', async () => {
-    expect((await renderRows(one({ form: 'stacked-bar' }), kinds(3))).diagnostics).toMatchObject([{ code: 'choice.no-key', path: '/keys' }]);
-    expect((await renderRows({ intent: 'compare', keys: 'kind', values: 'n', ...unit, form: 'normalized-bar' }, kinds(3))).ok).toBe(true);
+    expect((await renderRows({ ...one({ form: 'stacked-bar' }), intent: 'composition' }, kinds(3))).diagnostics).toMatchObject([{ code: 'choice.no-key', path: '/keys' }]);
+    // Share bars answer part-to-whole; under compare the pin is refused, naming the intent it answers.
+    expect((await renderRows({ intent: 'compare', keys: 'kind', values: 'n', ...unit, form: 'normalized-bar' }, kinds(3))).diagnostics).toMatchObject([{ code: 'choice.form-not-for-intent', path: '/form' }]);
     expect((await renderRows(two('part-to-whole', { form: 'donut' }), visits.slice(0, 2))).diagnostics).toMatchObject([{ code: 'choice.too-many-keys', path: '/keys' }]);
   });
 });

@@ -1,3 +1,7 @@
+import { FORM_NAMES, INTENTS } from '../../src/brief/types.js';
+import { readBrief } from '../../src/brief/resolve.js';
+import { supportedIntents } from '../../src/choose/rules.js';
+import { FORMS } from '../../src/forms/registry.js';
 import { nodesOf } from '../../src/scene/walk.js';
 import type { BarPlan } from '../../src/forms/bar-plan.js';
 import { describe, expect, it } from 'vitest';
@@ -60,7 +64,8 @@ describe('rules for the compare intent', () => {
 
   it('chooses for a table of 200,000 rows and 100,000 keys without overflowing the stack', async () => {
     const rows = Array.from({ length: 200_000 }, (_, i) => ({ k: `k${i % 100_000}`, v: i % 997 }));
-    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v', fields: { v: { unit: 'units' } } }, rows);
+    // Pinned to bars: unpinned, 10,000 keys or more get a dense layout.
+    const r = await renderRows({ intent: 'compare', form: 'bar', keys: 'k', values: 'v', fields: { v: { unit: 'units' } } }, rows);
     expect(r.ok).toBe(true);
     expect(codes(r)).toContain('derive.others-folded');
   });
@@ -78,11 +83,17 @@ describe('rules for the compare intent', () => {
     expect(codes(r)).toContain('choice.lenient-fallback');
   });
 
-  it('every other intent answers that it is not supported yet', async () => {
-    for (const intent of ['matrix']) {
-      const r = await renderRows({ intent, keys: 'pier', values: 'n' }, piers);
-      expect(r.diagnostics).toMatchObject([{ code: 'choice.intent-not-supported', path: '/intent' }]);
-    }
+  it('every intent of the design is answered by a rule row, and every form of the design is drawn', () => {
+    expect(new Set(supportedIntents())).toEqual(new Set(INTENTS));
+    expect(new Set(FORMS.map((f) => f.name))).toEqual(new Set(FORM_NAMES));
+  });
+
+  it('a vocabulary without an intent or form says it is not supported yet, rather than "not an option"', () => {
+    const vocabulary = { intents: ['compare'] as const, forms: ['bar'] as const };
+    const intent = readBrief('intent: trend\nkeys: k\nvalues: v\nrows: [{ k: a, v: 1 }]\n', undefined, vocabulary);
+    expect(intent.diagnostics).toMatchObject([{ code: 'choice.intent-not-supported', path: '/intent' }]);
+    const form = readBrief('intent: compare\nform: heatmap\nkeys: k\nvalues: v\nrows: [{ k: a, v: 1 }]\n', undefined, vocabulary);
+    expect(form.diagnostics).toMatchObject([{ code: 'choice.form-not-supported', path: '/form' }]);
   });
 
   it('refuses two values on one bar axis, and three on any axis, and offers the alternatives', async () => {
@@ -109,9 +120,8 @@ describe('rules for the compare intent', () => {
     expect(codes(await renderRows({ intent: 'compare', keys: ['pier', 'a', 'b'], values: 'n' }, rows))).toContain('choice.too-many-keys');
   });
 
-  it('honours a pinned bar form and refuses forms not drawn yet', async () => {
+  it('honours a pinned bar form', async () => {
     expect((await renderRows({ intent: 'compare', keys: 'pier', values: 'n', form: 'bar' }, piers)).ok).toBe(true);
-    expect(codes(await renderRows({ intent: 'compare', keys: 'pier', values: 'n', form: 'heatmap' }, piers))).toEqual(['choice.form-not-supported']);
   });
 
   it('refuses cluster order for bars', async () => {

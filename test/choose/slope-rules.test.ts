@@ -76,7 +76,9 @@ describe('rules for the shift intent', () => {
   it('a slope chart pinned under another intent with one value is refused with a coded error, never a crash', async () => {
     const r = await renderRows({ intent: 'compare', form: 'slope', keys: 'hut', values: 'nights' }, rows);
     expect(codes(r)).not.toContain('render.internal');
-    expect(problem(r, 'choice.slope-shape')).toMatchObject({ path: '/values' });
+    expect(problem(r, 'choice.form-not-for-intent')).toMatchObject({ path: '/form' });
+    const shift = await renderRows({ intent: 'shift', form: 'slope', keys: 'hut', values: 'nights' }, rows);
+    expect(problem(shift, 'choice.slope-shape')).toMatchObject({ path: '/values' });
   });
 
   it('`order:` is refused for a slope chart rather than silently ignored', async () => {

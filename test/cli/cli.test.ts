@@ -176,7 +176,8 @@ describe('chartwright explain', () => {
 
   it('reports the brief\'s own rule problems together with data problems', async () => {
     const dir = workspace();
-    writeFileSync(join(dir, 'two.yaml'), 'data: piers.csv\nintent: compare\nkeys: pier\nvalues: crossing\nbaseline: fit\n');
+    // Pinned to bars: unpinned, a compare brief may get a dense layout (10,000+ keys), which has no baseline to refuse before the data are read.
+    writeFileSync(join(dir, 'two.yaml'), 'data: piers.csv\nintent: compare\nform: bar\nkeys: pier\nvalues: crossing\nbaseline: fit\n');
     const t = io(dir);
     expect(await runCli(['explain', 'two.yaml', '--json'], t.io)).toBe(EXIT.FAILED);
     expect(JSON.parse(t.out()).diagnostics.map((d: { code: string }) => d.code)).toEqual(['brief.unknown-column', 'choice.baseline-fit-refused']);

@@ -8,6 +8,11 @@ import { demoBriefs, renderDemo, renderRows, yaml } from '../helpers.js';
 const plainBars = (file: string) => { const b = yaml(readFileSync(file, 'utf8')); return typeof b.keys === 'string' && b.facet === undefined; };
 
 describe('perceptual contracts on every gallery chart', () => {
+  it('the gallery has bar charts to check', async () => {
+    const forms = await Promise.all(demoBriefs().filter(plainBars).map(async (f) => (await renderDemo(f)).result.choice?.form));
+    expect(forms.filter((f) => f === 'bar').length).toBeGreaterThanOrEqual(5);
+  });
+
   for (const file of demoBriefs().filter(plainBars)) {
     it(`${file.split('/').pop()} keeps the bar chart contracts`, async () => {
       const { result, dump } = await renderDemo(file);
