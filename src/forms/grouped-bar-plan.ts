@@ -1,5 +1,5 @@
 import type { Decision } from '../choose/types.js';
-import { diagnostic, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import { AGGREGATORS } from '../derive/aggregate.js';
 import type { GroupedBarQuery } from '../derive/grouped-bars.js';
 import { groupRows } from '../derive/group.js';
@@ -38,6 +38,11 @@ function tooManyGroups(group: Field, n: number): Diagnostic {
 
 /** The grouped bar form's plan: the bar plan for its first key (order, orientation, how rows combine), then the groups' one order and their colours, each decision with its rule. */
 export function planGroupedBar(input: PlanInput): Outcome<Planned<GroupedBarPlan>> {
+  if (input.fields.keys.length !== 2) {
+    return failure([diagnostic('choice.no-key', `grouped bars need two keys, the bars' key and the groups' key; the brief gives ${input.fields.keys.length}`, {
+      path: '/keys', found: `${input.fields.keys.length} key(s)`, expected: 'two key columns, e.g. `keys: [marina, kind]`', hint: 'add the column whose levels form the groups to `keys:`, or remove `form: grouped-bar` for plain bars',
+    })]);
+  }
   // The keys are planned as bars of their totals: a key's rows are its groups, not repeats to
   // warn about, and the frame stays the brief's.
   const bars = planBar({ ...input, brief: { ...input.brief, aggregateStated: true, sizeFixed: { width: true, height: true } } });
