@@ -19,7 +19,23 @@ const SI_UNITS = new Set([
 
 /** True when `unit` is one of the units SI prefixes are joined to. */
 export function isSiUnit(unit: string | undefined): boolean {
-  return unit !== undefined && SI_UNITS.has(unit.trim());
+  return siBase(unit) !== undefined;
+}
+
+/** SI prefixes a unit may already carry (BIPM SI Brochure, 9th ed., table 7; h for hPa, c for cm). */
+const PREFIX_FACTORS: Record<string, number> = { P: 1e15, T: 1e12, G: 1e9, M: 1e6, k: 1e3, h: 1e2, c: 1e-2, m: 1e-3, 'µ': 1e-6, u: 1e-6, n: 1e-9, p: 1e-12 };
+
+/**
+ * An SI unit with the prefix it carries: km is m × 1e3, MW is W × 1e6, GB is B × 1e9. A bare
+ * SI unit has factor 1; undefined for units that take no SI prefix (€, stays, "pH units").
+ */
+export function siBase(unit: string | undefined): { base: string; factor: number } | undefined {
+  const u = unit?.trim();
+  if (!u) return undefined;
+  if (SI_UNITS.has(u)) return { base: u, factor: 1 };
+  const prefix = u.charAt(0);
+  const base = u.slice(1);
+  return PREFIX_FACTORS[prefix] !== undefined && SI_UNITS.has(base) ? { base, factor: PREFIX_FACTORS[prefix] } : undefined;
 }
 
 /** The notation `auto` stands for with a unit: `si` for SI units, `words` for everything else. */

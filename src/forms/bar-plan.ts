@@ -174,7 +174,7 @@ function grownFrame(input: PlanInput, key: Field, value: Field | undefined, note
 }
 
 /** The bar form's plan: its order, orientation and how rows combine, each decision with its rule. */
-export function planBar(input: PlanInput): Outcome<Planned<BarPlan>> {
+export function planBar(input: PlanInput, opts: { totals?: boolean } = {}): Outcome<Planned<BarPlan>> {
   const { fields, brief } = input;
   const key = fields.keys[0]!;
   const value = fields.values[0];
@@ -182,14 +182,16 @@ export function planBar(input: PlanInput): Outcome<Planned<BarPlan>> {
   const decisions: Decision[] = [];
   const order = chooseOrder(input, key, problems, decisions);
   const grouped = barGroups(input.table, refOf(key), value && refOf(value), input);
-  const combined = repeatsOf(input, key, value, grouped);
+  // Planned as the totals of another form's bars (stacks, groups): several rows per key are that
+  // form's parts, not repeats, and the frame is the other form's to size.
+  const combined = opts.totals ? undefined : repeatsOf(input, key, value, grouped);
   problems.push(...checkCombining(input, key, value, combined));
   if (problems.some((p) => p.severity === 'error')) return failure(problems);
   const orientation = chooseOrientation(input, key, value);
   decisions.push(orientation.decision);
   const notes = barNotes({ key: refOf(key), value: value && refOf(value), order, aggregate: brief.aggregate, noData: grouped.noValue, ...(combined ? { combined } : {}) }, undefined, '', String);
   // Small multiples divide the frame among panels, which are measured by the facet layout.
-  const grown = orientation.vertical || key.type === 'temporal' || key.type === 'quantitative' || brief.facet ? {} : grownFrame(input, key, value, notes);
+  const grown = orientation.vertical || key.type === 'temporal' || key.type === 'quantitative' || brief.facet || opts.totals ? {} : grownFrame(input, key, value, notes);
   if (grown.decision) decisions.push(grown.decision);
   if (combined && value) decisions.push({ decision: `rows with the same ${key.label.toLowerCase()} ${AGGREGATORS[brief.aggregate].verb}`, rule: brief.aggregateStated ? 'the brief asks for it (`aggregate:`)' : 'sum is the default for rows sharing a key; the note and the axis title say so' });
   else if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });

@@ -45,7 +45,7 @@ export function planGroupedBar(input: PlanInput): Outcome<Planned<GroupedBarPlan
   }
   // The keys are planned as bars of their totals: a key's rows are its groups, not repeats to
   // warn about, and the frame stays the brief's.
-  const bars = planBar({ ...input, brief: { ...input.brief, aggregateStated: true, sizeFixed: { width: true, height: true } } });
+  const bars = planBar(input, { totals: true });
   if (!bars.ok) return bars;
   // Totals per key are what the bar plan saw; a grouped chart's combinations are its own.
   const barPlan: BarPlan = { ...bars.value.plan, combined: undefined, noData: [] };

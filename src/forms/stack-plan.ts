@@ -81,8 +81,7 @@ export function planStacks(input: PlanInput, normalized: boolean): Outcome<Plann
   if (refused.length) return failure(refused);
   // The groups are planned as bars of their totals: several rows per group are the parts, not
   // repeated keys to warn about, and the frame stays the brief's.
-  const asTotals = { ...brief, aggregateStated: true, sizeFixed: { width: true, height: true } };
-  const bars = planBar({ ...input, brief: asTotals, fields: { ...fields, keys: [group] } });
+  const bars = planBar({ ...input, fields: { ...fields, keys: [group] } }, { totals: true });
   if (!bars.ok) return failure(bars.diagnostics);
   const { plan: bar, decisions: [barOrder, ...barAll] } = bars.value;
   const barRest = barAll.filter((d) => !d.decision.startsWith('rows with the same'));

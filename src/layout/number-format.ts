@@ -1,6 +1,6 @@
 import { format as d3format, formatSpecifier } from 'd3-format';
 
-import { notationFor, type NumberStyle } from '../fields/notation.js';
+import { notationFor, siBase, type NumberStyle } from '../fields/notation.js';
 
 export type { NumberStyle };
 
@@ -134,6 +134,19 @@ function plainDigits(max: number): (n: number) => string {
   };
 }
 
+/**
+ * The SI unit numbers of this size are rewritten in, or undefined to keep them as written: bare
+ * SI units from ten thousand (or below a tenth), units already prefixed (km, MW) from a million,
+ * where "150m km" would read as metres or milli. The numbers are then rescaled to the bare unit
+ * and take the prefix that fits them: 149,600,000 km is 150 Gm, 4,500,000 MW is 4.5 TW.
+ */
+function siSpan(unit: string | undefined, maxAbs: number): { base: string; factor: number } | undefined {
+  const si = siBase(unit);
+  if (!si || maxAbs * si.factor >= 1e27) return undefined;
+  const from = si.factor === 1 ? 1e4 : 1e6;
+  return maxAbs >= from || (maxAbs > 0 && maxAbs < 0.1) ? si : undefined;
+}
+
 /** Digits for tick values divided by a step: exactly as many decimals as the ticks need. */
 function tickDigits(scaled: readonly number[]): (x: number) => string {
   return d3format(`,.${Math.min(6, decimalsNeeded(scaled))}~f`);
@@ -162,9 +175,11 @@ export function tickFormatter(ticks: readonly number[], style?: string | NumberS
   const notation = notationFor(styleOf(style));
   const maxAbs = maxAbsOf(ticks);
   const exact = (f: (n: number) => string) => new Set(ticks.map(f)).size === new Set(ticks).size;
-  if (notation === 'si' && unit && (maxAbs >= 1e4 || (maxAbs > 0 && maxAbs < 0.1)) && maxAbs < 1e27) {
-    const f = steppedTicks(ticks, SI_STEPS, joinUnit(unit.trim()));
-    if (f && exact(f)) return f;
+  const si = notation === 'si' ? siSpan(unit, maxAbs) : undefined;
+  if (si) {
+    const f = steppedTicks(ticks.map((t) => t * si.factor), SI_STEPS, joinUnit(si.base));
+    const g = f && ((n: number) => f(n * si.factor));
+    if (g && exact(g)) return g;
   }
   if (notation === 'words' && maxAbs >= WORDS_FROM && maxAbs < EXPONENT_FROM) {
     const f = steppedTicks(ticks, WORD_STEPS, joinWord);
@@ -192,8 +207,10 @@ export function valueFormatter(values: readonly number[], style?: string | Numbe
   const maxAbs = maxAbsOf(values);
   const plain = plainDigits(Math.min(2, decimalsNeeded(values)));
   const significant = (p: number) => d3format(`,.${p}~r`);
-  if (notation === 'si' && unit && (maxAbs >= 1e4 || (maxAbs > 0 && maxAbs < 0.1)) && maxAbs < 1e27) {
-    return firstDistinct(values, [3, 4, 5, 6].map((p) => stepped(SI_STEPS, significant(p), plain, joinUnit(unit.trim()))));
+  const si = notation === 'si' ? siSpan(unit, maxAbs) : undefined;
+  if (si) {
+    const f = firstDistinct(values.map((v) => v * si.factor), [3, 4, 5, 6].map((p) => stepped(SI_STEPS, significant(p), plain, joinUnit(si.base))));
+    return (n) => f(n * si.factor);
   }
   if (notation === 'digits' || maxAbs < WORDS_FROM) return plain;
   const words = firstDistinct(values.filter((v) => Math.abs(v) < EXPONENT_FROM), [3, 4, 5, 6].map((p) => stepped(WORD_STEPS, significant(p), plain, joinWord)));

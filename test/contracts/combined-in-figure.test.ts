@@ -38,3 +38,16 @@ describe('what was combined or left out is said in the figure', () => {
     expect(notes(many)).toMatch(/No data: School 3, School 4, School 5, School 6, School 7, School 8 and 21 more s/);
   });
 });
+
+describe('repeated keys are counted where they repeat', () => {
+  // Guards a false refusal found by a new user: grouped bars of a % value, one row per (region,
+  // crop), were refused as a sum of a non-additive value, because the bars' key repeats per group.
+  it('grouped bars of a % value with one row per pair are drawn, not refused', async () => {
+    const rows = [{ region: 'N', crop: 'Rye', chg: 5 }, { region: 'N', crop: 'Oat', chg: -3 }, { region: 'S', crop: 'Rye', chg: 2 }, { region: 'S', crop: 'Oat', chg: 4 }];
+    const r = await renderRows({ intent: 'compare', keys: ['region', 'crop'], values: 'chg', fields: { chg: { unit: '%' } } }, rows);
+    expect(r.ok).toBe(true);
+    expect(codes(r)).not.toContain('choice.sum-not-additive');
+    expect(codes(r)).not.toContain('choice.keys-repeat');
+    expect(r.scene!.axes.find((a) => a.scale === 'linear')!.title).not.toMatch(/^(Total|Mean) /);
+  });
+});

@@ -37,6 +37,19 @@ describe('number labels never lie', () => {
     expect(ticks.map(tickFormatter(ticks, { unit: 's' }))).toEqual(['0', '2 ms', '4 ms']);
   });
 
+  // Guards a defect a new user met: 149,600,000 km was labelled "150m" under "(km)", which reads as
+  // metres or milli. A unit that already carries an SI prefix is rescaled to its bare unit.
+  it('units that carry an SI prefix are rescaled, never given "m" for million (150 Gm, 4.5 TW, 4.5 PB)', () => {
+    expect(valueFormatter([149_600_000, 384_400], { unit: 'km' })(149_600_000)).toBe('150 Gm');
+    expect(valueFormatter([4_500_000], { unit: 'MW' })(4_500_000)).toBe('4.5 TW');
+    expect(valueFormatter([4_500_000], { unit: 'GB' })(4_500_000)).toBe('4.5 PB');
+    expect(valueFormatter([4_500_000, 20], { unit: 'ms' })(4_500_000)).toBe('4.5 ks');
+    // Below a million, prefixed units keep their numbers as written.
+    expect(valueFormatter([384_400, 344], { unit: 'km' })(384_400)).toBe('384,400');
+    const ticks = [0, 50e6, 100e6, 150e6];
+    expect(ticks.map(tickFormatter(ticks, { unit: 'km' }))).toEqual(['0', '50 Gm', '100 Gm', '150 Gm']);
+  });
+
   it('notation can be set: digits writes every digit, words overrides an SI unit', () => {
     expect(tickFormatter([0, 1e6, 2e6], { notation: 'digits' })(2e6)).toBe('2,000,000');
     expect(valueFormatter([3.5e9], { unit: 'W', notation: 'words' })(3.5e9)).toBe('3.5bn');
