@@ -103,6 +103,21 @@ function readPalettes(root: string): PaletteFile[] {
   return readdirSync(dir).filter((f) => f.endsWith('.json')).sort().map((f) => readJson<PaletteFile>(join(dir, f)));
 }
 
+/**
+ * The Source Sans 3 TTF files, for SVG that still has live text. The font package is a dev
+ * dependency (chartwright draws text from the glyph data in templates/fonts/), so an installed
+ * chartwright has none: then resvg gets no font files and draws no live text.
+ */
+function sourceSansFiles(require: NodeJS.Require): string[] {
+  let dir: string;
+  try {
+    dir = dirname(require.resolve('source-sans/package.json'));
+  } catch {
+    return [];
+  }
+  return [join(dir, 'TTF', 'SourceSans3-Regular.ttf'), join(dir, 'TTF', 'SourceSans3-Semibold.ttf')];
+}
+
 /** Options of a Node environment. */
 export interface NodeEnvOptions {
   /** The largest style file read, in bytes. Default: 256 KiB (`INPUT_LIMITS.style`). */
@@ -123,7 +138,6 @@ export function createNodeEnv(root: string = packageRoot(), options: NodeEnvOpti
   const styles = new Map<string, Outcome<Style>>();
   let outlines: OutlineSet | undefined;
   const require = createRequire(join(root, 'package.json'));
-  const ttf = (face: string) => join(dirname(require.resolve('source-sans/package.json')), 'TTF', face);
   const table = nodeTableEnv();
   return {
     measure,
@@ -141,6 +155,6 @@ export function createNodeEnv(root: string = packageRoot(), options: NodeEnvOpti
       };
       return outlines;
     },
-    fontFiles: () => [ttf('SourceSans3-Regular.ttf'), ttf('SourceSans3-Semibold.ttf')],
+    fontFiles: () => sourceSansFiles(require),
   };
 }

@@ -12,6 +12,6 @@ export interface RenderEnv {
   style(name: string, briefFile: string | undefined): Outcome<Style>;
   /** Glyph outlines for the raster path (read on first use). */
   outlines(): OutlineSet;
-  /** The TTF files, for SVG that still has live text. */
+  /** The TTF files, for SVG that still has live text ([] where the dev-only font package is not installed). */
   fontFiles(): string[];
 }
