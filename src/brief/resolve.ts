@@ -44,6 +44,7 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     order: (raw.order ?? 'auto') as ResolvedBrief['order'],
     baseline: (raw.baseline ?? 'zero') as ResolvedBrief['baseline'],
     notation: (raw.notation ?? 'auto') as ResolvedBrief['notation'],
+    accept: (raw.accept as string[] | undefined) ?? [],
     aggregate: (raw.aggregate ?? 'sum') as ResolvedBrief['aggregate'],
     aggregateStated: raw.aggregate !== undefined,
     style: (raw.style ?? 'report') as string,

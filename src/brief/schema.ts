@@ -1,4 +1,8 @@
+import { CATALOGUE } from '../diagnostics/catalogue.js';
 import { AGGREGATES, DISTANCE_NAMES, FIELD_TYPES, LINKAGE_NAMES, NOTATIONS, ORDERS, type BriefVocabulary } from './types.js';
+
+/** The codes a brief may accept: the warnings (errors cannot be accepted). */
+const ACCEPTABLE_CODES = Object.entries(CATALOGUE).filter(([, severity]) => severity === 'warning').map(([code]) => code);
 
 /** The subset of JSON Schema the brief schema uses, and `validateAgainstSchema` understands. */
 export interface SchemaNode {
@@ -69,6 +73,7 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
       form: { type: 'string', enum: FORM_NAMES, description: 'Pin a chart form; the hard rules still apply.' },
       order: { type: 'string', enum: ORDERS, default: 'auto', description: 'Order of bars or rows.' },
       baseline: { type: 'string', enum: ['zero', 'fit'], default: 'zero', description: 'Value-axis baseline; never fit for length-coded marks.' },
+      accept: { type: 'array', items: { type: 'string', enum: ACCEPTABLE_CODES }, description: 'Warnings this brief expects (diagnostic codes, e.g. derive.missing-values): reported as info, so check --strict passes. Only warnings can be accepted.' },
       notation: { type: 'string', enum: [...NOTATIONS], default: 'auto', description: 'How large and small numbers are written: words (k, m, bn, tn), si (SI prefix joined to an SI unit, 3.5 GWh), digits (every digit), or auto (si for SI units, words otherwise).' },
       aggregate: { type: 'string', enum: AGGREGATES, default: 'sum', description: 'How rows sharing a key are combined.' },
       style: { type: 'string', minLength: 1, default: 'report', description: 'Style preset name or path to a style file.' },

@@ -107,6 +107,12 @@ export interface ResolvedBrief {
   aggregateStated: boolean;
   /** Style preset name (from templates/styles) or a path to a style file. Default: 'report'. */
   style: string;
+  /**
+   * Warnings the brief expects and accepts (diagnostic codes, e.g. `derive.missing-values` for a
+   * chart that shows a known gap): reported as info, so `check --strict` passes. The figure's
+   * notes still say what they say. Only warnings can be accepted. Default: [].
+   */
+  accept: string[];
   /** Frame size in CSS pixels. Default: { width: 720, height: 440 }. */
   size: { width: number; height: number };
   /** Which sides of the frame the brief sets; a form may grow a side the brief leaves open (lying bars grow in height to name every bar). */

@@ -90,9 +90,10 @@ function stopwatch(clock: (() => number) | undefined) {
   };
 }
 
-function strictly(diagnostics: Diagnostic[], strict: boolean | undefined): Diagnostic[] {
-  if (!strict) return diagnostics;
-  return diagnostics.map((d) => (d.severity === 'warning' ? { ...d, severity: 'error', message: `${d.message} (a warning, raised to an error by --strict)` } : d));
+function strictly(diagnostics: Diagnostic[], strict: boolean | undefined, accepted: ReadonlySet<string> = new Set()): Diagnostic[] {
+  const seen = diagnostics.map((d) => (d.severity === 'warning' && accepted.has(d.code) ? { ...d, severity: 'info' as const, message: `${d.message} (accepted by the brief's \`accept:\`)` } : d));
+  if (!strict) return seen;
+  return seen.map((d) => (d.severity === 'warning' ? { ...d, severity: 'error', message: `${d.message} (a warning, raised to an error by --strict)` } : d));
 }
 
 function briefStage(req: RenderRequest) {
@@ -189,7 +190,7 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
   const finish = (result: Omit<RenderResult, 'ok' | 'timings'>): RenderResult => {
     // A failing brief reports at most MAX_BRIEF_PROBLEMS problems, however many it has (100,000
     // unknown columns); a brief that renders keeps all its warnings.
-    const all = strictly(result.diagnostics, req.strict);
+    const all = strictly(result.diagnostics, req.strict, new Set(result.brief?.accept ?? []));
     const diagnostics = hasErrors(all) ? capProblems(all) : all;
     return { ...result, ok: !hasErrors(diagnostics) && result.svg !== undefined, diagnostics, ...(req.clock ? { timings: watch.timings } : {}) };
   };
@@ -202,7 +203,7 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
     return finish({ brief: loaded.inputs.brief, rationale: [], diagnostics: [...loaded.diagnostics, diagnostic('render.internal', `chartwright failed unexpectedly while drawing: ${(e as Error).message}; this is a defect in chartwright`, { file: req.file, hint: 'please report it with the brief and data' })] });
   }
   const diagnostics = [...loaded.diagnostics, ...result.diagnostics];
-  if (!result.scene || hasErrors(strictly(diagnostics, req.strict))) return finish({ ...result, diagnostics });
+  if (!result.scene || hasErrors(strictly(diagnostics, req.strict, new Set(result.brief?.accept ?? [])))) return finish({ ...result, diagnostics });
   const svg = svgOf(result.scene, loaded.inputs.style.font.family, req.file);
   watch.lap('svg');
   return finish({ ...result, ...(svg.svg !== undefined ? { svg: svg.svg } : {}), diagnostics: [...diagnostics, ...svg.diagnostics] });
