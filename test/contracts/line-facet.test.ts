@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { dumpScene, type SceneDump } from '../../src/scene/dump.js';
 import { nodesOf } from '../../src/scene/walk.js';
-import { codes, renderRows } from '../helpers.js';
+import { codes, renderDemo, renderRows, root } from '../helpers.js';
 import { checkFacetContracts } from './facet-contracts.js';
 
 const fields = { riders: { unit: 'riders' } };
@@ -17,6 +17,16 @@ function linesIn(dump: SceneDump, p: SceneDump['panels'][number], role = 'line')
 }
 
 describe('small multiples of lines: perceptual contracts', () => {
+  it('the gallery\'s dock panels keep shared scales, outer tick labels, one line each and grey context', async () => {
+    const { dump } = await renderDemo(`${root}/demo-data/dock-rentals.yaml`);
+    checkFacetContracts(dump, 'dock');
+    expect(dump.panels).toHaveLength(10);
+    for (const p of dump.panels) {
+      expect(linesIn(dump, p).map((l) => l.series)).toEqual([{ dock: p.facet!.dock }]);
+      expect(linesIn(dump, p, 'context')).toHaveLength(9);
+    }
+  });
+
   it('`facet:` on the series key draws one line per panel on shared scales, with outer tick labels, panel titles and no direct labels', async () => {
     const r = await renderRows({ intent: 'trend', keys: ['month', 'route'], values: 'riders', facet: 'route', fields, size: { width: 720, height: 480 } }, monthly(6, routes(4)));
     expect(r.ok).toBe(true);
