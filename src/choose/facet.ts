@@ -19,7 +19,8 @@ function orderOf(brief: ResolvedBrief, field: Field, noun: string): { order: Fac
 /**
  * Small multiples for a brief: asked for by `facet:` (which wins) or by the form's plan. Refused
  * for a form that cannot be drawn in panels, and for a facet column the chart already shows as a
- * key or value (each panel would hold one mark). Each decision comes with its rule.
+ * key or value (each panel would hold one mark), except the key the form names as its panels'
+ * (`facets.keyIndex`: a line's series key, one line per panel). Each decision comes with its rule.
  */
 export function chooseFacet(fields: Fields, brief: ResolvedBrief, form: Candidate, request: FacetRequest | undefined): { facet?: ChosenFacet; decisions: Decision[]; problems: Diagnostic[] } {
   const by = brief.facet?.by ?? request?.by;
@@ -29,7 +30,8 @@ export function chooseFacet(fields: Fields, brief: ResolvedBrief, form: Candidat
       path: '/facet', found: by, expected: 'a form drawn on a left and a bottom axis', hint: 'remove `facet:` and write one brief per panel',
     })] };
   }
-  if (brief.keys.includes(by) || brief.values.includes(by)) {
+  const keyAt = brief.keys.indexOf(by);
+  if ((keyAt >= 0 && keyAt !== form.facets.keyIndex) || brief.values.includes(by)) {
     return { decisions: [], problems: [diagnostic('choice.facet-on-key', `\`${by}\` is already a key or value of the chart, so each panel would hold a single level of it`, {
       path: '/facet', found: by, expected: 'a column that is neither a key nor a value', hint: `facet by another column, or remove \`${by}\` from \`keys:\` and \`values:\``,
     })] };

@@ -87,6 +87,8 @@ export interface ChosenFacet {
 export interface FacetWords {
   /** What a panel is ranked by, e.g. "total" or "latest value". */
   noun: string;
+  /** The position in `keys:` of the one key the form may split into panels (a line's series key). Default: none. */
+  keyIndex?: number;
 }
 
 /** What the choice stage needs of a form: its name, its traits, and its plan. The registry's forms are passed in. */

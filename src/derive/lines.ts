@@ -16,6 +16,11 @@ export interface LineQuery {
   /** The value along y; undefined when rows are counted (`aggregate: count`). */
   value: FieldRef | undefined;
   aggregate: Aggregate;
+  /**
+   * Each series is drawn in a panel of its own (small multiples by the series key): the panel's
+   * title names it, so no direct label or legend is drawn. Default: false.
+   */
+  onePerPanel?: boolean;
 }
 
 /** One line's points in key order. */

@@ -21,7 +21,7 @@ export function planIndex(input: PlanInput): Outcome<Planned<IndexPlan>> {
   const { fields, brief } = input;
   const [key, series] = [fields.keys[0]!, fields.keys[1]];
   const value = fields.values[0];
-  const { decisions, problems } = lineDecisions(input, key, series, value);
+  const { decisions, problems, onePerPanel, facet } = lineDecisions(input, key, series, value);
   const base = baseOf(input);
   const as: IndexAs = brief.index?.as ?? 'index';
   const which = base.kind === 'first' ? 'the first key' : `\`${String(base.value)}\``;
@@ -31,5 +31,5 @@ export function planIndex(input: PlanInput): Outcome<Planned<IndexPlan>> {
   });
   decisions.push({ decision: `the value axis may leave zero out; a reference line marks the base at ${as === 'index' ? '100' : '0 %'}`, rule: 'an index is read against its base, not against zero, and a line carries it by position, not length, so a cut axis does not distort it' });
   if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });
-  return success({ plan: { key: refOf(key), series: series && refOf(series), value: value && refOf(value), aggregate: brief.aggregate, zero: false, base, as }, decisions }, problems);
+  return success({ plan: { key: refOf(key), series: series && refOf(series), value: value && refOf(value), aggregate: brief.aggregate, zero: false, base, as, ...(onePerPanel ? { onePerPanel } : {}) }, decisions, ...(facet ? { facet } : {}) }, problems);
 }

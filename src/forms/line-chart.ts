@@ -46,9 +46,9 @@ function keyChannel(derived: DerivedLines): Channel {
   return { ...base, kind: 'band', domain: key.levels };
 }
 
-/** Direct labels, a legend (when the names cannot be stacked in the plot's height), or neither (one line). */
+/** Direct labels, a legend (when the names cannot be stacked in the plot's height), or neither (one line, or one line per panel titled with its name). */
 function labelMode<D extends DerivedLines>(view: LineView<D>, derived: D, base: CartesianDomains, ctx: LayoutContext): 'direct' | 'legend' | 'none' {
-  if (derived.query.series === undefined) return 'none';
+  if (derived.query.series === undefined || derived.query.onePerPanel) return 'none';
   return memoized(ctx, 'line\u0000label-mode', () => {
     const probe = plotFor(base, view.notes?.(derived) ?? [], ctx).box.plot;
     return labelsFit(derived.series.length, probe.height, ctx) ? 'direct' : 'legend';
@@ -96,14 +96,24 @@ function layoutLines<D extends DerivedLines>(view: LineView<D>, derived: D, area
   return { marks, ends };
 }
 
+/** A panel's rank among small multiples: its latest value (the highest line end when a panel holds several series). */
+export function latestValue(derived: DerivedLines): number {
+  let latest = -Number.MAX_VALUE;
+  for (const s of derived.series) { const i = lastPresent(s); if (i !== undefined) latest = Math.max(latest, s.ys[i]!); }
+  return latest;
+}
+
 /**
  * A line chart on a left value axis and a bottom key axis, as a CartesianForm: the lines (gaps
  * kept, lone points as dots, dense runs reduced by M4), each series named at its end (dodged,
  * with leaders) or in a legend, and the view's own guides (an index chart's reference line).
+ * Drawn as small multiples too: panels ranked by their latest value, and the series key may be
+ * the facet (one line per panel, named by the panel's title).
  */
 export function lineChart<D extends DerivedLines>(name: string, view: LineView<D>): CartesianForm<D> {
   return {
     name,
+    facets: { noun: 'latest value', value: latestValue, keyIndex: 1 },
     domains: (derived, ctx) => domainsOf(view, derived, ctx),
     layout(derived, area, ctx) {
       const guides = view.guides?.(derived, area, ctx) ?? { marks: [], labels: [] };

@@ -13,4 +13,9 @@ export interface FacetHooks<D> {
    * contract (e.g. bars at least 3 px thick). Default: 1.
    */
   minBand?(derived: D): number;
+  /**
+   * The position in `keys:` of a key whose levels may become panels (a line's series key: each
+   * panel then holds one series). Faceting by any other key is refused. Default: none.
+   */
+  keyIndex?: number;
 }

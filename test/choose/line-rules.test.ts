@@ -23,13 +23,43 @@ describe('rules for trend and change', () => {
     expect(codes(pinned)).toContain('choice.line-on-categorical');
   });
 
-  it('draws more than 8 series with a warning that offers small multiples (facet)', async () => {
+  it('draws more than 8 series as small multiples by the series key, with the decision stated and a warning that says so', async () => {
     const names = Array.from({ length: 9 }, (_, k) => `R${k}`);
     const r = await renderRows({ intent: 'trend', keys: ['month', 'route'], values: 'riders', fields, size: { width: 720, height: 600 } }, monthly(4, names));
     expect(r.ok).toBe(true);
     const warning = r.diagnostics.find((d) => d.code === 'choice.too-many-series')!;
     expect(warning).toMatchObject({ severity: 'warning', path: '/keys', field: 'route' });
-    expect(warning.hint).toMatch(/facet: route/);
+    expect(warning.message).toMatch(/drawn as 9 panels/);
+    expect(r.choice!.facet).toMatchObject({ field: { name: 'route' }, context: false, order: 'value' });
+    expect(r.rationale.find((d) => d.rule.startsWith('facet.form:'))!.rule).toMatch(/route` has 9 series/);
+    expect(r.scene!.panels.map((p) => p.facet!.route).sort()).toEqual(names);
+  });
+
+  it('keeps 8 series in one panel with direct labels (MAX_SERIES is the limit, not one less)', async () => {
+    const r = await renderRows({ intent: 'trend', keys: ['month', 'route'], values: 'riders', fields, size: { width: 720, height: 600 } }, monthly(4, Array.from({ length: 8 }, (_, k) => `R${k}`)));
+    expect(r.choice!.facet).toBeUndefined();
+    expect(codes(r)).not.toContain('choice.too-many-series');
+    expect(r.scene!.panels).toHaveLength(1);
+  });
+
+  it('`facet:` on the series key draws one panel per series without the warning; faceting by the ordered x key is still refused', async () => {
+    const names = Array.from({ length: 10 }, (_, k) => `R${k}`);
+    const r = await renderRows({ intent: 'trend', keys: ['month', 'route'], values: 'riders', facet: { by: 'route', context: true }, fields, size: { width: 900, height: 700 } }, monthly(4, names));
+    expect(r.ok).toBe(true);
+    expect(codes(r)).not.toContain('choice.too-many-series');
+    expect(r.choice!.facet).toMatchObject({ field: { name: 'route' }, context: true });
+    expect(r.rationale.some((d) => d.rule.startsWith('facet.brief'))).toBe(true);
+    expect(r.scene!.panels).toHaveLength(10);
+    const onKey = await renderRows({ intent: 'trend', keys: ['month', 'route'], values: 'riders', facet: 'month', fields }, monthly(4, ['A', 'B']));
+    expect(onKey.diagnostics.map((d) => [d.code, d.path])).toEqual([['choice.facet-on-key', '/facet']]);
+  });
+
+  it('an index line chart of more than 8 series is drawn as panels too', async () => {
+    const names = Array.from({ length: 9 }, (_, k) => `R${k}`);
+    const r = await renderRows({ intent: 'change', keys: ['month', 'route'], values: 'riders', fields, size: { width: 900, height: 700 } }, monthly(4, names));
+    expect(r.choice!.form).toBe('index-line');
+    expect(r.choice!.facet).toMatchObject({ field: { name: 'route' } });
+    expect(r.scene!.panels).toHaveLength(9);
   });
 
   it('checks the shape of a trend: a key, at most two keys, a numeric value', async () => {
