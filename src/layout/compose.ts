@@ -70,12 +70,28 @@ function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], 
   return linearScale(vt, [rangeLeft, rangeRight]);
 }
 
-/** A bottom time axis, inset like a linear one so its end labels stay inside the plot's width. */
+/**
+ * A bottom time axis, inset like a linear one so its end labels stay inside the plot's width
+ * (the first may reach into the gap left of the plot, as a linear axis's may). The labels drawn
+ * can be wider than the probe's ("Jan 2024" where the probe had "2024"): the range is moved in
+ * until they fit, so the first never runs under the left axis's lowest label.
+ */
 function bottomTime(channel: TimeChannel, plot: Box, ctx: LayoutContext): TimeScale {
   const finest = finestTick(channel);
   const probe = timeScale(channel.extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'), finest);
-  const [rangeLeft, rangeRight] = bottomRange(plot, probe.labels, NO_ROOM, ctx);
-  return timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'), finest);
+  let [rangeLeft, rangeRight] = bottomRange(plot, probe.labels, NO_ROOM, ctx);
+  const { tick } = ctx.style.text;
+  const half = (l: string | undefined) => ctx.measure.width(l ?? '', tick.size, tick.weight) / 2;
+  let scale = timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'), finest);
+  for (let i = 0; i < 3; i++) {
+    const over = Math.max(0, plot.x - ctx.style.spacing.tickGap - (scale.map(scale.ticks[0] ?? 0) - half(scale.labels[0])));
+    const end = scale.ticks.length - 1;
+    const past = Math.max(0, scale.map(scale.ticks[end] ?? 0) + half(scale.labels[end]) - (plot.x + plot.width));
+    if (over <= 1e-9 && past <= 1e-9) break;
+    [rangeLeft, rangeRight] = [rangeLeft + over, rangeRight - past];
+    scale = timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'), finest);
+  }
+  return scale;
 }
 
 /** The finest tick grain for a time channel's data grain (seconds are ticked no finer than minutes). */
