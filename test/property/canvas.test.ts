@@ -28,6 +28,14 @@ const FORMS: Record<string, (labels: string[], values: number[]) => { brief: Rec
     brief: { intent: 'composition', keys: ['g', 'p'], values: 'v' },
     rows: labels.slice(0, 5).flatMap((g, j) => labels.slice(0, 3).map((p, i) => ({ g, p: `${p}${i}`, v: Math.abs(v[(j * 3 + i) % v.length]!) + 1 }))),
   }),
+  'faceted bar': (labels, v) => ({
+    brief: { intent: 'compare', keys: 'k', values: 'v', facet: { by: 's' } },
+    rows: labels.slice(0, 3).flatMap((s, j) => labels.slice(0, 5).map((k, i) => ({ s: `${s}${j}`, k: `${k}${i}`, v: Math.abs(v[(j * 5 + i) % v.length]!) }))),
+  }),
+  donut: (labels, v) => ({
+    brief: { intent: 'part-to-whole', keys: 'k', values: 'v', form: 'donut' },
+    rows: labels.slice(0, 3).map((k, i) => ({ k: `${k}${i}`, v: Math.abs(v[i % v.length]!) + 1 })),
+  }),
   heatmap: (labels, v) => ({
     brief: { intent: 'matrix', keys: ['r', 'c'], values: 'v' },
     rows: labels.slice(0, 6).flatMap((r, j) => labels.slice(0, 5).map((c, i) => ({ r, c: `${c}${i}`, v: v[(j * 5 + i) % v.length] }))),
@@ -63,7 +71,7 @@ describe('property: no text ever leaves the canvas', () => {
   for (const [form, build] of Object.entries(FORMS)) {
     it(`${form}: any frame from the schema minimum, labels of 1–120 characters and any title, subtitle and source render inside the canvas, or fail as frame-too-small`, async () => {
       const input = fc.record({
-        width: fc.integer({ min: 160, max: 1400 }), height: fc.integer({ min: 120, max: 1000 }),
+        width: fc.integer({ min: 160, max: 1400 }), height: fc.integer({ min: 160, max: 1000 }),
         labels: fc.array(label, { minLength: 6, maxLength: 24 }),
         values: fc.array(fc.integer({ min: -500, max: 5000 }), { minLength: 6, maxLength: 24 }),
         title: fc.option(text, { nil: undefined }), subtitle: fc.option(text, { nil: undefined }), source: fc.option(text, { nil: undefined }),
