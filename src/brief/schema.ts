@@ -83,7 +83,9 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
         description: 'Frame size in CSS pixels.',
         properties: {
           width: { type: 'integer', minimum: 160, maximum: 4000 },
-          height: { type: 'integer', minimum: 120, maximum: 4000 },
+          // A bare chart (no title, subtitle, notes or source) of one key needs about 150 px at 160 wide
+          // (test/layout/frame-minimum.test.ts); words need more, and layout.frame-too-small names the least frame.
+          height: { type: 'integer', minimum: 160, maximum: 4000, description: 'At least 160: the least frame in which a bare chart draws a readable plot; a title and a source need about 100 px more.' },
         },
       },
       output: {

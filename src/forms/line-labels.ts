@@ -1,6 +1,7 @@
 import type { LayoutContext } from '../layout/kit-types.js';
 import { dodge1d } from '../layout/place-labels.js';
-import { textBoxHeight, textNode } from '../layout/text.js';
+import { MAX_LABEL_SHARE } from '../layout/plot-box.js';
+import { capText, textBoxHeight, textNode, truncateText } from '../layout/text.js';
 import type { Box, SceneNode, TextNode } from '../scene/types.js';
 import { segment } from '../svg/path.js';
 
@@ -20,11 +21,21 @@ export interface LineEnd {
   stroke: string;
 }
 
-/** The room direct labels take right of the plot: the widest label, its gap, and a leader's run. */
+/** Widest a direct label may be, px: the share of the frame's inner width a label column may take; longer names are shortened. */
+function labelCap(ctx: LayoutContext): number {
+  return Math.max(0, MAX_LABEL_SHARE * (ctx.brief.size.width - 2 * ctx.style.spacing.padding));
+}
+
+/** A series name as its direct label shows it: shortened with "…" to the label column's cap. */
+function fittedName(text: string, ctx: LayoutContext): string {
+  return truncateText(ctx.measure, capText(text), ctx.style.text.label, labelCap(ctx));
+}
+
+/** The room direct labels take right of the plot: the widest label (at most the cap), its gap, and a leader's run. */
 export function labelGutter(texts: readonly string[], ctx: LayoutContext): number {
   const { label } = ctx.style.text;
   let widest = 0;
-  for (const t of texts) widest = Math.max(widest, ctx.measure.width(t, label.size, label.weight));
+  for (const t of texts) widest = Math.max(widest, ctx.measure.width(fittedName(t, ctx), label.size, label.weight));
   return widest + ctx.style.spacing.labelGap + LEADER_RUN;
 }
 
@@ -50,7 +61,9 @@ export function directLabels(ends: readonly LineEnd[], plot: Box, ctx: LayoutCon
   for (const p of placed) {
     const end = byId.get(p.id)!;
     const x = end.x + (p.moved ? LEADER_RUN : style.spacing.labelGap);
-    labels.push(textNode(measure, { id: ctx.id('label', end.text), role: 'label', text: end.text, style: style.text.label, x, top: p.at - h / 2 }));
+    const shown = fittedName(end.text, ctx);
+    const node = textNode(measure, { id: ctx.id('label', end.text), role: 'label', text: shown, style: style.text.label, x, top: p.at - h / 2 });
+    labels.push(shown === end.text ? node : { ...node, full: end.text });
     if (p.moved) {
       leaders.push({ kind: 'path', id: ctx.id('leader', end.text), role: 'leader', commands: segment(end.x + 2, end.y, x - 2, p.at), stroke: end.stroke, strokeWidth: 1 });
     }

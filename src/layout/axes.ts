@@ -6,7 +6,7 @@ import { thinningStep } from './axis.js';
 import type { BandChannel, Channel, LayoutContext, LinearChannel, TimeChannel } from './kit-types.js';
 import type { FittedBandLabels } from './plot-box.js';
 import type { BandScale, LinearScale, TimeScale } from './scales.js';
-import { capText, lineHeight, textBoxHeight, textNode } from './text.js';
+import { capText, lineHeight, textBoxHeight, textNode, truncateText } from './text.js';
 
 /** One axis, drawn: gridlines (under the marks), tick marks, tick labels and title (over them). */
 export interface DrawnAxis {
@@ -29,14 +29,25 @@ function thinned(field: string, k: number, total: number, shown: number): Diagno
   });
 }
 
-/** The title of a left axis sits above the plot at the body's left edge; a bottom axis's title is centred under its tick labels. */
+/**
+ * The title of a left axis sits above the plot at the body's left edge; a bottom axis's title is
+ * centred under its tick labels, moved in to stay within the body. A title wider than the body is
+ * shortened with "…" (the full text kept as the SVG title), so it never leaves the canvas.
+ */
 export function axisTitleNode(side: 'left' | 'bottom', channel: Channel, plot: Box, body: Box, ctx: LayoutContext): TextNode {
   const { style, measure } = ctx;
   const { tickGap, lineHeight: factor } = style.spacing;
-  const title = (x: number, top: number, anchor: TextNode['anchor']) => textNode(measure, { id: `axis-title-${channel.name}`, role: 'axis-title', text: channel.title, style: style.text.axisTitle, x, top, anchor });
-  if (side === 'left') return title(body.x, body.y, 'start');
+  const { axisTitle } = style.text;
+  const fitted = truncateText(measure, capText(channel.title), axisTitle, Math.max(0, body.width));
+  const width = measure.width(fitted, axisTitle.size, axisTitle.weight);
+  const node = (x: number, top: number, anchor: TextNode['anchor']) => {
+    const n = textNode(measure, { id: `axis-title-${channel.name}`, role: 'axis-title', text: fitted, style: axisTitle, x, top, anchor });
+    return fitted === channel.title ? n : { ...n, full: channel.title };
+  };
+  if (side === 'left') return node(body.x, body.y, 'start');
   const bottom = plot.y + plot.height;
-  return title(plot.x + plot.width / 2, bottom + tickGap + lineHeight(style.text.tick, factor) + tickGap, 'middle');
+  const centre = Math.min(Math.max(plot.x + plot.width / 2, body.x + width / 2), body.x + body.width - width / 2);
+  return node(centre, bottom + tickGap + lineHeight(style.text.tick, factor) + tickGap, 'middle');
 }
 
 /** A linear axis: a gridline across the plot at each tick (but zero, where a zero line is drawn instead), and each shown tick's label. */

@@ -10,11 +10,12 @@ import { layoutFrame } from './frame.js';
 import type { LegendLayout, LegendSpec } from './legend.js';
 import { layoutLegends } from './legends.js';
 import { placeFormLabels } from './place-labels.js';
-import { memoized, ticksFor, type CartesianDomains, type FormMarks, type FormWords, type LabelRoom, type LayoutContext, type LinearChannel, type PlotArea, type ScaleProbe, type TimeChannel } from './kit-types.js';
+import { memoized, ticksFor, type CartesianDomains, type FormMarks, type FormWords, type LabelRoom, type LayoutContext, type LinearChannel, type PlotArea, type ScaleProbe } from './kit-types.js';
 import { plotBox, tickCount, type PlotBox } from './plot-box.js';
 import { bandScale, linearScale, type BandScale, type LinearScale, type Scale } from './scales.js';
-import { timeScale, type TimeGrain, type TimeScale } from './time-scale.js';
+import { timeScale } from './time-scale.js';
 import type { FacetHooks } from './facet-types.js';
+import { NO_ROOM, bottomRange, bottomTime } from './bottom-axis.js';
 
 export { placeFormLabels };
 
@@ -30,8 +31,6 @@ export interface CartesianForm<D> {
   facets?: FacetHooks<D>;
 }
 
-const NO_ROOM: LabelRoom = { low: 0, high: 0, show: false };
-
 /** The left axis's linear scale: its range shortened at either end by the room the form's labels take. */
 function leftLinear(channel: LinearChannel, plot: Box, room: LabelRoom, ctx: LayoutContext): LinearScale {
   const [top, bottom] = [plot.y, plot.y + plot.height];
@@ -39,19 +38,6 @@ function leftLinear(channel: LinearChannel, plot: Box, room: LabelRoom, ctx: Lay
   const rangeTop = top + (room.show ? room.high : 0);
   const vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeBottom - rangeTop, 'vertical', channel);
   return linearScale(vt, [rangeBottom, rangeTop]);
-}
-
-/**
- * The pixel range of a bottom axis inside the plot's width: inset at each end by half its end
- * tick label (a gap's worth less at the left, where the left axis's labels end) or by the room
- * the form's labels take there, whichever is more.
- */
-function bottomRange(plot: Box, probeLabels: readonly string[], room: LabelRoom, ctx: LayoutContext): [number, number] {
-  const { tick } = ctx.style.text;
-  const half = (i: number) => (probeLabels.length ? ctx.measure.width(probeLabels[i]!, tick.size, tick.weight) / 2 : 0);
-  const rangeLeft = plot.x + Math.max(room.show ? room.low : 0, half(0) - ctx.style.spacing.tickGap);
-  const rangeRight = plot.x + plot.width - Math.max(room.show ? room.high : 0, half(probeLabels.length - 1));
-  return [rangeLeft, rangeRight];
 }
 
 /** The bottom axis's linear scale, inset so the end tick labels and the form's labels stay inside the plot's width. */
@@ -68,19 +54,6 @@ function bottomLinear(channel: LinearChannel, plot: Box, probeLabels: string[], 
     vt = ticksFor(ctx, channel.extent[0], channel.extent[1], rangeRight - rangeLeft, 'horizontal', channel);
   }
   return linearScale(vt, [rangeLeft, rangeRight]);
-}
-
-/** A bottom time axis, inset like a linear one so its end labels stay inside the plot's width. */
-function bottomTime(channel: TimeChannel, plot: Box, ctx: LayoutContext): TimeScale {
-  const finest = finestTick(channel);
-  const probe = timeScale(channel.extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'), finest);
-  const [rangeLeft, rangeRight] = bottomRange(plot, probe.labels, NO_ROOM, ctx);
-  return timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'), finest);
-}
-
-/** The finest tick grain for a time channel's data grain (seconds are ticked no finer than minutes). */
-function finestTick(channel: TimeChannel): TimeGrain {
-  return channel.grain === undefined || channel.grain === 'second' ? 'minute' : channel.grain;
 }
 
 /** Both scales of a plot and the room taken for the form's labels. */

@@ -19,6 +19,7 @@ import { readTable } from '../table/load.js';
 import type { Table } from '../table/types.js';
 import type { RenderEnv } from './env.js';
 import { renderFacets } from './facets.js';
+import { smallestFrame, withSmallestFrame, type FrameSize } from './smallest-frame.js';
 import { VOCABULARY } from './vocabulary.js';
 
 /** One render: a brief as text or value, where it lives, and how strict to be. */
@@ -131,6 +132,14 @@ export async function loadInputs(req: RenderRequest, env: RenderEnv, lap: (stage
  * diagnostic on the result.
  */
 export function renderInputs(inputs: RenderInputs, measure: TextMeasurer, opts: { lenient?: boolean } = {}, lap: (stage: string) => void = () => {}): Omit<RenderResult, 'ok' | 'timings'> {
+  const result = renderCore(inputs, measure, opts, lap);
+  if (!result.diagnostics.some((d) => d.code === 'layout.frame-too-small')) return result;
+  // A frame too small says which frame would do: found by rendering at larger sizes, as the user would set them.
+  const renders = (size: FrameSize) => !hasErrors(renderCore({ ...inputs, brief: { ...inputs.brief, size, sizeFixed: { width: true, height: true } } }, measure, opts, () => {}).diagnostics);
+  return { ...result, diagnostics: withSmallestFrame(result.diagnostics, smallestFrame(inputs.brief.size, renders)) };
+}
+
+function renderCore(inputs: RenderInputs, measure: TextMeasurer, opts: { lenient?: boolean }, lap: (stage: string) => void): Omit<RenderResult, 'ok' | 'timings'> {
   const { brief, parsed, style, table, file } = inputs;
   const all: Diagnostic[] = [];
   const locate = (ds: Diagnostic[]) => inFile(withPositions(ds, parsed), file);

@@ -56,7 +56,7 @@ describe('rules for the dense pixel layout', () => {
   });
 
   it('refuses more items than the plot has pixels, and says how to fit them', async () => {
-    const r = await renderRows({ ...compare, form: 'dense', size: { width: 160, height: 120 } }, items(20_000));
+    const r = await renderRows({ ...compare, form: 'dense', size: { width: 160, height: 160 } }, items(20_000));
     expect(r.diagnostics).toMatchObject([{ code: 'derive.too-many-items' }]);
     expect(r.diagnostics[0]!.hint).toMatch(/size:/);
   });

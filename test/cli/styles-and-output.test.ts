@@ -71,7 +71,7 @@ describe('style colours for every reader', () => {
 
 describe('layout refusals and warnings', () => {
   it('refuses a frame too small for its words, pointing at size', async () => {
-    const r = await renderBrief({ brief: brief({ size: { width: 160, height: 120 }, title: 'A title long enough to wrap over several lines here', subtitle: 'And a subtitle that wraps too', source: 'And a source line' }) }, env);
+    const r = await renderBrief({ brief: brief({ size: { width: 160, height: 160 }, title: 'A title long enough to wrap over several lines here', subtitle: 'And a subtitle that wraps too', source: 'And a source line' }) }, env);
     expect(r.ok).toBe(false);
     expect(r.diagnostics).toMatchObject([{ code: 'layout.frame-too-small', path: '/size' }]);
   });

@@ -127,7 +127,7 @@ describe('small multiples: perceptual contracts', () => {
   });
 
   it('a frame too small for even one panel is refused, not drawn', async () => {
-    const r = await renderRows(brief({ size: { width: 160, height: 120 }, title: 'A title that takes two lines here', subtitle: 'And a subtitle that takes two more' }), sites(2));
+    const r = await renderRows(brief({ size: { width: 160, height: 160 }, title: 'A title that takes two lines here', subtitle: 'And a subtitle that takes two more' }), sites(2));
     expect(r.ok).toBe(false);
     expect(codes(r)).toContain('layout.frame-too-small');
   });

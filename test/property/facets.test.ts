@@ -9,7 +9,7 @@ const label = fc.oneof(fc.string({ minLength: 1, maxLength: 12 }), fc.constantFr
 describe('property: small multiples render with their contracts or refuse clearly', () => {
   it('any facet of 1–40 levels, plain or grouped bars, at any frame size: shared scales, outer labels, every level drawn or named', async () => {
     const row = fc.record({ s: label, k: label, g: fc.constantFrom('x', 'y', 'z'), v: fc.integer({ min: -500, max: 5000 }) });
-    await fc.assert(fc.asyncProperty(fc.array(row, { minLength: 1, maxLength: 200 }), fc.boolean(), fc.boolean(), fc.integer({ min: 160, max: 1400 }), fc.integer({ min: 120, max: 1000 }), async (data, grouped, context, width, height) => {
+    await fc.assert(fc.asyncProperty(fc.array(row, { minLength: 1, maxLength: 200 }), fc.boolean(), fc.boolean(), fc.integer({ min: 160, max: 1400 }), fc.integer({ min: 160, max: 1000 }), async (data, grouped, context, width, height) => {
       const brief = { intent: 'compare', keys: grouped ? ['k', 'g'] : 'k', values: 'v', facet: { by: 's', context }, size: { width, height }, fields: { v: { unit: 'u' }, s: { type: 'categorical' }, k: { type: 'categorical' } } };
       const r = await renderRows(brief, data);
       if (!r.ok) {

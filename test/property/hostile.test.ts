@@ -64,7 +64,7 @@ const briefFor = (names: string[]) => fc.record({
   // Sizes from the smallest allowed; text that cannot fit gets layout.frame-too-small.
   order: fc.constantFrom('auto', 'value', 'label', 'data'),
   aggregate: fc.constantFrom('sum', 'mean', 'count', 'max', 'min'),
-  size: fc.record({ width: fc.integer({ min: 160, max: 2000 }), height: fc.integer({ min: 120, max: 1500 }) }),
+  size: fc.record({ width: fc.integer({ min: 160, max: 2000 }), height: fc.integer({ min: 160, max: 1500 }) }),
   fields: fc.oneof(
     { weight: 3, arbitrary: fc.constant({}) },
     { weight: 1, arbitrary: fc.dictionary(fc.constantFrom(...names), fc.record({ format, unit: text, label: text, type: fc.constantFrom('categorical', 'ordinal', 'quantitative', 'temporal', 'cyclic'), order: fc.array(text, { maxLength: 5 }) }, { requiredKeys: [] }), { maxKeys: 2 }) },

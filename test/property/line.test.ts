@@ -22,7 +22,7 @@ describe('property: a line over random ordered data never throws', () => {
       base: fc.constantFrom(undefined, 'first', 'previous'),
       fit: fc.boolean(),
       width: fc.integer({ min: 160, max: 1400 }),
-      height: fc.integer({ min: 120, max: 900 }),
+      height: fc.integer({ min: 160, max: 900 }),
     });
     await fc.assert(fc.asyncProperty(data, async (d) => {
       const levels = [...d.keys].sort((a, b) => a - b).map((k) => `L${k}`);

@@ -32,7 +32,7 @@ describe('property: any table renders or fails clearly', () => {
 
   it('any 1–500 rows with finite values give well-formed SVG with every coordinate finite and on the canvas', async () => {
     const rows = fc.array(fc.record({ k: label, v: fc.double({ min: -1e9, max: 1e9, noNaN: true, noDefaultInfinity: true }) }), { minLength: 1, maxLength: 500 });
-    await fc.assert(fc.asyncProperty(rows, fc.integer({ min: 160, max: 1600 }), fc.integer({ min: 120, max: 1200 }), async (data, width, height) => {
+    await fc.assert(fc.asyncProperty(rows, fc.integer({ min: 160, max: 1600 }), fc.integer({ min: 160, max: 1200 }), async (data, width, height) => {
       const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v', title: 'T <&>', size: { width, height } }, data);
       if (!r.ok) {
         // The acceptable refusals: a frame too small for its text, or no row with a key at all

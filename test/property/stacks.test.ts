@@ -11,7 +11,7 @@ const rows = fc.array(fc.record({ g: group, p: part, v: fc.double({ min: 0, max:
 describe('property: any non-negative table of groups and parts stacks honestly, or fails clearly', () => {
   for (const intent of ['composition', 'part-to-whole']) {
     it(`${intent}: every contract holds at any frame size, or the refusal is coded`, async () => {
-      await fc.assert(fc.asyncProperty(rows, fc.integer({ min: 160, max: 1400 }), fc.integer({ min: 120, max: 1000 }), async (data, width, height) => {
+      await fc.assert(fc.asyncProperty(rows, fc.integer({ min: 160, max: 1400 }), fc.integer({ min: 160, max: 1000 }), async (data, width, height) => {
         const r = await renderRows({ intent, keys: ['g', 'p'], values: 'v', fields: { v: { unit: 'units' } }, size: { width, height } }, data);
         if (!r.ok) {
           const errors = r.diagnostics.filter((d) => d.severity === 'error').map((d) => d.code);
