@@ -32,16 +32,23 @@ function patternGrain(pattern: string): DateGrain {
   return 'year';
 }
 
+/** The numbers written in a text, without leading zeros: "01/03/2026" and "1/3/2026" both give "1 3 2026". */
+function numbersOf(text: string): string {
+  return (text.match(/\d+/g) ?? []).map(Number).join(' ');
+}
+
 /**
  * A reader for a `fields.<col>.format` d3-time-format pattern ("%d/%m/%Y"), parsed in UTC
  * (utcParse, never the machine's zone) with English month and day names.
  */
 export function patternReader(pattern: string): DateReader {
-  const parse = englishLocale().utcParse(pattern);
+  const locale = englishLocale();
+  const [parse, format] = [locale.utcParse(pattern), locale.utcFormat(pattern)];
   const grain = patternGrain(pattern);
   return (text) => {
     const d = parse(text.trim());
-    return d === null || Number.isNaN(d.getTime()) ? undefined : { time: d.getTime(), grain };
+    // utcParse rolls over ("32/01" is 1 February): the numbers must survive writing the date back.
+    return d === null || Number.isNaN(d.getTime()) || numbersOf(format(d)) !== numbersOf(text) ? undefined : { time: d.getTime(), grain };
   };
 }
 
