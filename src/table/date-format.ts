@@ -5,7 +5,7 @@ import { MONTH_NAMES, parsePeriod } from './periods.js';
 import type { DateGrain } from './types.js';
 
 /** Reads a date cell's text as a UTC time at its grain, or undefined. */
-export type DateReader = (text: string) => { time: number; grain: DateGrain } | undefined;
+export type DateReader = (text: string) => { time: number; grain: DateGrain; quarter?: true } | undefined;
 
 /** The default date reader: ISO 8601, then the period spellings of periods.ts. */
 export const readDateText: DateReader = (text) => parseIsoDate(text) ?? parsePeriod(text);

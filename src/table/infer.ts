@@ -10,7 +10,7 @@ import type { Column, ColumnType, DateGrain, Table, TableOrigin } from './types.
 /** Share of readable cells that makes a column numeric despite a few stray texts (common practice). */
 const MOSTLY = 0.8;
 
-type Reading = { value: number | string | boolean; grain?: DateGrain } | null | undefined;
+type Reading = { value: number | string | boolean; grain?: DateGrain; quarter?: true } | null | undefined;
 
 /** Whether a cell means "no value": empty, a missing-value token, or a NaN or infinite number (YAML's `.nan`, `.inf`). */
 function isMissingCell(cell: RawCell): boolean {
@@ -27,7 +27,7 @@ function readAs(type: ColumnType, cell: RawCell, readNumber: NumberReader, readD
   }
   if (type === 'date') {
     const d = typeof cell === 'string' ? readDate(cell) : undefined;
-    return d === undefined ? undefined : { value: d.time, grain: d.grain };
+    return d === undefined ? undefined : { value: d.time, grain: d.grain, ...(d.quarter ? { quarter: d.quarter } : {}) };
   }
   if (type === 'boolean') {
     const b = typeof cell === 'boolean' ? cell : typeof cell === 'string' ? parseBooleanText(cell) : undefined;
@@ -90,6 +90,7 @@ function buildColumn(name: string, type: ColumnType, cells: RawCell[], readNumbe
   const unreadable: number[] = [];
   let grain: DateGrain | undefined;
   let unit: string | undefined;
+  let quarters: boolean | undefined;
   cells.forEach((cell, i) => {
     text.push(cell === null || (typeof cell === 'number' && !Number.isFinite(cell)) ? null : String(cell).trim());
     let r = readAs(type, cell, readNumber, readDate);
@@ -99,6 +100,7 @@ function buildColumn(name: string, type: ColumnType, cells: RawCell[], readNumbe
     const finite = r && (typeof r.value !== 'number' || Number.isFinite(r.value));
     if (r && finite) {
       values.push(r.value);
+      quarters = (quarters ?? true) && r.quarter === true;
       if (r.grain && (!grain || GRAIN_RANK.indexOf(r.grain) > GRAIN_RANK.indexOf(grain))) grain = r.grain;
     } else {
       values.push(null);
@@ -108,6 +110,7 @@ function buildColumn(name: string, type: ColumnType, cells: RawCell[], readNumbe
   });
   const column: Column = { name, type, values, text, missing };
   if (type === 'date') column.grain = grain ?? 'day';
+  if (type === 'date' && quarters) column.quarterly = true;
   if (unit !== undefined) column.unit = unit;
   return { column, unreadable };
 }

@@ -46,7 +46,7 @@ function isoWeek(year: number, week: number): number | undefined {
  * (`2026-W05`, its Monday; day grain, seven days apart) and day-month-year (`1 Mar 2026`,
  * chartwright's own tick format). Undefined for anything else.
  */
-export function parsePeriod(text: string): { time: number; grain: DateGrain } | undefined {
+export function parsePeriod(text: string): { time: number; grain: DateGrain; quarter?: true } | undefined {
   const t = text.trim();
   let m = MONTH_YEAR.exec(t);
   if (m) {
@@ -60,7 +60,7 @@ export function parsePeriod(text: string): { time: number; grain: DateGrain } | 
   }
   if ((m = YEAR_QUARTER.exec(t)) || (m = QUARTER_YEAR.exec(t))) {
     const [year, quarter] = m[1]!.length === 4 ? [Number(m[1]), Number(m[2])] : [Number(m[2]), Number(m[1])];
-    return { time: utcDate(year, quarter * 3 - 2, 1), grain: 'month' };
+    return { time: utcDate(year, quarter * 3 - 2, 1), grain: 'month', quarter: true };
   }
   if ((m = ISO_WEEK.exec(t))) {
     const time = isoWeek(Number(m[1]), Number(m[2]));

@@ -18,8 +18,8 @@ async function compare(keys: string[], brief: Record<string, unknown> = {}) {
 const SPELLINGS: Record<string, { write: (y: number, m: number) => string; label: (y: number, m: number) => string; step: number }> = {
   'month names': { write: (y, m) => `${LONG[m]} ${y}`, label: (y, m) => `${SHORT[m]} ${y}`, step: 1 },
   'month abbreviations': { write: (y, m) => `${m === 8 ? 'Sept' : SHORT[m]} ${y}`, label: (y, m) => `${SHORT[m]} ${y}`, step: 1 },
-  'year-quarter': { write: (y, m) => `${y}-Q${m / 3 + 1}`, label: (y, m) => `${SHORT[m]} ${y}`, step: 3 },
-  'quarter-year': { write: (y, m) => `Q${m / 3 + 1} ${y}`, label: (y, m) => `${SHORT[m]} ${y}`, step: 3 },
+  'year-quarter': { write: (y, m) => `${y}-Q${m / 3 + 1}`, label: (y, m) => `Q${m / 3 + 1} ${y}`, step: 3 },
+  'quarter-year': { write: (y, m) => `Q${m / 3 + 1} ${y}`, label: (y, m) => `Q${m / 3 + 1} ${y}`, step: 3 },
   'tick format': { write: (y, m) => `1 ${SHORT[m]} ${y}`, label: (y, m) => `1 ${SHORT[m]} ${y}`, step: 1 },
 };
 
@@ -35,6 +35,10 @@ describe('recognised periods are ordered keys', () => {
         expect(order).toEqual(periods.map(({ y, m }) => s.label(y, m)));
         expect(rules).not.toContain('a categorical key has no order of its own');
       }), { numRuns: runs(25) });
+  });
+
+  it('quarters are named as quarters ("Q1 2025"), not by their first month', async () => {
+    expect((await compare(['2025-Q2', '2025-Q1', '2024-Q4'])).order).toEqual(['Q4 2024', 'Q1 2025', 'Q2 2025']);
   });
 
   it('ISO weeks are drawn in week order', async () => {

@@ -20,10 +20,10 @@ describe('period spellings read as the UTC start of the period', () => {
   });
 
   it('quarters "2025-Q1", "2025 Q1" and "Q1 2026" start on the quarter\'s first month', () => {
-    expect(parsePeriod('2025-Q1')).toEqual({ time: utc(2025, 1), grain: 'month' });
-    expect(parsePeriod('2025 Q3')).toEqual({ time: utc(2025, 7), grain: 'month' });
-    expect(parsePeriod('Q1 2026')).toEqual({ time: utc(2026, 1), grain: 'month' });
-    expect(parsePeriod('Q4 2026')).toEqual({ time: utc(2026, 10), grain: 'month' });
+    expect(parsePeriod('2025-Q1')).toEqual({ time: utc(2025, 1), grain: 'month', quarter: true });
+    expect(parsePeriod('2025 Q3')).toEqual({ time: utc(2025, 7), grain: 'month', quarter: true });
+    expect(parsePeriod('Q1 2026')).toEqual({ time: utc(2026, 1), grain: 'month', quarter: true });
+    expect(parsePeriod('Q4 2026')).toEqual({ time: utc(2026, 10), grain: 'month', quarter: true });
     expect(parsePeriod('Q5 2026')).toBeUndefined();
   });
 
