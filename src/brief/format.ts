@@ -40,7 +40,8 @@ export function checkFormats(raw: Record<string, unknown>): Diagnostic[] {
   for (const [name, hint] of Object.entries(fields)) {
     if (hint === null || typeof hint !== 'object' || !Object.hasOwn(hint, 'format')) continue;
     const format: unknown = (hint as Record<string, unknown>).format;
-    if (typeof format !== 'string') continue;
+    // A temporal field's format is a d3-time-format pattern, read by the table stage.
+    if (typeof format !== 'string' || (hint as Record<string, unknown>).type === 'temporal') continue;
     const problem = formatProblem(format);
     if (problem === undefined) continue;
     problems.push(diagnostic('brief.bad-format', `\`fields.${name}.format\` is ${preview(format)}: ${problem}`, {

@@ -189,7 +189,7 @@ function unevenDates(bars: BarDatum[], keyOf: Map<string, number>, query: BarQue
   const gap = firstUnevenStep(bars.map((b) => keyOf.get(b.label)!), grain);
   if (!gap) return [];
   const after = bars.find((b) => keyOf.get(b.label) === gap.after)!.label;
-  return [diagnostic('derive.uneven-dates', `the dates of \`${query.key.name}\` are not evenly spaced: after ${after} comes a step of ${gap.step} ${GRAIN_WORD[grain]} where the others are ${gap.usual}; bars stand evenly apart, so the gap does not show`, {
+  return [diagnostic('derive.uneven-dates', `the dates of \`${query.key.name}\` are not evenly spaced: after ${after} comes a step of ${gap.step} ${GRAIN_WORD[gap.grain]} where the others are ${gap.usual}; bars stand evenly apart, so the gap does not show`, {
     field: query.key.name, hint: 'add rows for the missing dates (NA leaves a visible empty slot)',
   })];
 }

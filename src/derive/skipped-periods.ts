@@ -1,5 +1,5 @@
 import type { DateGrain } from '../table/types.js';
-import { units } from './dates.js';
+import { stepGrain, units } from './dates.js';
 import type { LineSeries } from './lines.js';
 
 /** A run of periods a regular series skips: the present keys either side of it. */
@@ -35,7 +35,8 @@ function onlyWeekend(from: number, to: number): boolean {
  * present), and is reported. Irregular series (survey dates, times of day) are left as they are,
  * and so are the weekends of a daily series of business days.
  */
-export function breakSkippedPeriods(s: LineSeries, grain: DateGrain): { series: LineSeries; skipped: SkippedPeriods[] } {
+export function breakSkippedPeriods(s: LineSeries, dataGrain: DateGrain): { series: LineSeries; skipped: SkippedPeriods[] } {
+  const grain = stepGrain(s.xs, dataGrain);
   if (grain !== 'year' && grain !== 'month' && grain !== 'day') return { series: s, skipped: [] };
   const u = s.xs.map((x) => units(x, grain));
   const steps = u.slice(1).map((v, i) => v - u[i]!);

@@ -91,6 +91,8 @@ export const CATALOGUE = {
   'derive.no-rows': 'error',
   'derive.too-many-ordered-bars': 'error',
   'derive.uneven-dates': 'warning',
+  'table.slash-dates': 'warning',
+  'fields.unrecognised-order': 'warning',
   'derive.not-finite': 'error',
   'derive.index-base-missing': 'error',
   'derive.index-base-not-positive': 'error',

@@ -5,6 +5,7 @@ import { suggestionHint } from '../diagnostics/suggest.js';
 import type { Column, Table } from '../table/types.js';
 import { cycleOrder } from './cyclic.js';
 import { isAdditiveUnit } from './notation.js';
+import { looksOrdered, orderedTextLevels } from './ordered-text.js';
 import type { Field, FieldRole, Fields } from './types.js';
 
 /** "crossings_per_day" → "Crossings per day". */
@@ -24,6 +25,7 @@ function typeOf(column: Column, hint: FieldHint | undefined): FieldType {
   if (column.type === 'number') return 'quantitative';
   if (column.type === 'date') return 'temporal';
   if (column.type === 'text' && cycleOrder(firstAppearance(column))) return 'cyclic';
+  if (column.type === 'text' && orderedTextLevels(firstAppearance(column))) return 'ordinal';
   return 'categorical';
 }
 
@@ -40,7 +42,7 @@ export function firstDuplicate(list: readonly string[]): string | undefined {
 function levelsOf(column: Column, type: FieldType, hint: FieldHint | undefined, problems: Diagnostic[]): string[] {
   if (type === 'quantitative' || type === 'temporal') return [];
   const present = firstAppearance(column);
-  if (!hint?.order) return type === 'cyclic' ? cycleOrder(present) ?? present : present;
+  if (!hint?.order) return type === 'cyclic' ? cycleOrder(present) ?? present : type === 'ordinal' ? orderedTextLevels(present)?.levels ?? present : present;
   const order = hint.order.map(String);
   const duplicate = firstDuplicate(order);
   if (duplicate !== undefined) {
@@ -58,6 +60,20 @@ function levelsOf(column: Column, type: FieldType, hint: FieldHint | undefined, 
   }
   const seen = new Set(present);
   return order.filter((v) => seen.has(v));
+}
+
+/**
+ * A categorical key whose every level looks ordered (`10-19 kg`, `3rd`, `2+ rooms`) but is none
+ * of the spellings read as ordered: it is about to be sorted by value, which scrambles an order
+ * the reader expects, so say how to declare it.
+ */
+function unrecognisedOrder(field: Field): Diagnostic[] {
+  if (field.type !== 'categorical' || field.column.type !== 'text' || !looksOrdered(field.levels)) return [];
+  const sample = field.levels.slice(0, 3).map((l) => JSON.stringify(l)).join(', ');
+  return [diagnostic('fields.unrecognised-order', `the key \`${field.name}\` looks ordered (${sample}) but its order is not one chartwright reads, so it is treated as categories and sorted by value`, {
+    path: `/fields/${field.name}`, field: field.name, found: sample, expected: 'a declared order',
+    hint: `list the levels in order with \`fields.${field.name}.order: [...]\`, or keep the data's order with \`fields.${field.name}.type: ordinal\``,
+  })];
 }
 
 function checkNames(names: readonly string[], basePath: string, table: Table, listed: boolean): Diagnostic[] {
@@ -92,6 +108,7 @@ export function inferFields(table: Table, brief: ResolvedBrief): Outcome<Fields>
     };
   });
   if (hasErrors(problems)) return failure(problems);
+  if (brief.order === 'auto') problems.push(...all.filter((f) => f.role === 'key').flatMap(unrecognisedOrder));
   const byName = (n: string) => all.find((f) => f.name === n)!;
   return success({ keys: brief.keys.map(byName), values: brief.values.map(byName), all }, problems);
 }

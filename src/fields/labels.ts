@@ -16,10 +16,17 @@ export function formatDate(time: number, grain: DateGrain): string {
   return grain === 'minute' ? `${day} ${clock}` : `${day} ${clock}:${pad(d.getUTCSeconds())}`;
 }
 
+/** Writes the quarter a UTC time falls in: "Q1 2025". */
+export function quarterName(time: number): string {
+  const d = new Date(time);
+  return `Q${Math.floor(d.getUTCMonth() / 3) + 1} ${d.getUTCFullYear()}`;
+}
+
 /** The label of a key cell as a reader sees it: dates written out, other values as in the data. */
 export function keyText(column: Column, row: number): string | null {
   const value = column.values[row];
   if (value === null || value === undefined) return null;
+  if (column.type === 'date' && column.quarterly) return quarterName(value as number);
   if (column.type === 'date') return formatDate(value as number, column.grain ?? 'day');
   return column.text[row] ?? String(value);
 }

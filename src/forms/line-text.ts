@@ -1,5 +1,5 @@
 import type { DerivedLines, LineQuery, LineSeries } from '../derive/lines.js';
-import { formatDate } from '../fields/labels.js';
+import { formatDate, quarterName } from '../fields/labels.js';
 import { axisTitle } from '../layout/axis.js';
 
 /** The value axis title of a line chart. */
@@ -14,7 +14,7 @@ export function lineValueTitle(query: LineQuery): string {
 export function keyName(derived: DerivedLines, x: number): string {
   const { key } = derived.query;
   const column = derived.keyColumn;
-  if (derived.quarterly) return `Q${Math.floor(new Date(x).getUTCMonth() / 3) + 1} ${new Date(x).getUTCFullYear()}`;
+  if (derived.quarterly) return quarterName(x);
   if (column.type === 'date') return formatDate(x, column.grain ?? 'day');
   if (key.type === 'ordinal' || key.type === 'cyclic' || key.type === 'categorical') return key.levels[x] ?? String(x);
   return String(x);

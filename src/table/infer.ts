@@ -1,7 +1,8 @@
 import type { FieldType } from '../brief/types.js';
 import { describeRows, diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { splitAffix } from './affix.js';
-import { isMissingText, parseBooleanText, parseIsoDate } from './cells.js';
+import { isMissingText, parseBooleanText } from './cells.js';
+import { patternReader, readDateText, slashDates, type DateReader } from './date-format.js';
 import { decimalMarkOf, eitherMark, numberReader, type NumberReader } from './decimal.js';
 import type { RawCell, RawTable } from './parse.js';
 import type { Column, ColumnType, DateGrain, Table, TableOrigin } from './types.js';
@@ -9,7 +10,7 @@ import type { Column, ColumnType, DateGrain, Table, TableOrigin } from './types.
 /** Share of readable cells that makes a column numeric despite a few stray texts (common practice). */
 const MOSTLY = 0.8;
 
-type Reading = { value: number | string | boolean; grain?: DateGrain } | null | undefined;
+type Reading = { value: number | string | boolean; grain?: DateGrain; quarter?: true } | null | undefined;
 
 /** Whether a cell means "no value": empty, a missing-value token, or a NaN or infinite number (YAML's `.nan`, `.inf`). */
 function isMissingCell(cell: RawCell): boolean {
@@ -18,15 +19,15 @@ function isMissingCell(cell: RawCell): boolean {
   return typeof cell === 'string' && isMissingText(cell);
 }
 
-function readAs(type: ColumnType, cell: RawCell, readNumber: NumberReader): Reading {
+function readAs(type: ColumnType, cell: RawCell, readNumber: NumberReader, readDate: DateReader = readDateText): Reading {
   if (isMissingCell(cell)) return null;
   if (type === 'number') {
     const n = typeof cell === 'number' ? cell : typeof cell === 'string' ? readNumber(cell) : undefined;
     return n === undefined ? undefined : { value: n };
   }
   if (type === 'date') {
-    const d = typeof cell === 'string' ? parseIsoDate(cell) : undefined;
-    return d === undefined ? undefined : { value: d.time, grain: d.grain };
+    const d = typeof cell === 'string' ? readDate(cell) : undefined;
+    return d === undefined ? undefined : { value: d.time, grain: d.grain, ...(d.quarter ? { quarter: d.quarter } : {}) };
   }
   if (type === 'boolean') {
     const b = typeof cell === 'boolean' ? cell : typeof cell === 'string' ? parseBooleanText(cell) : undefined;
@@ -82,22 +83,24 @@ function guessType(cells: RawCell[], readNumber: NumberReader): { type: ColumnTy
 
 const GRAIN_RANK: DateGrain[] = ['year', 'month', 'day', 'minute', 'second'];
 
-function buildColumn(name: string, type: ColumnType, cells: RawCell[], readNumber: NumberReader): { column: Column; unreadable: number[] } {
+function buildColumn(name: string, type: ColumnType, cells: RawCell[], readNumber: NumberReader, readDate: DateReader): { column: Column; unreadable: number[] } {
   const values: Column['values'] = [];
   const text: Column['text'] = [];
   const missing: number[] = [];
   const unreadable: number[] = [];
   let grain: DateGrain | undefined;
   let unit: string | undefined;
+  let quarters: boolean | undefined;
   cells.forEach((cell, i) => {
     text.push(cell === null || (typeof cell === 'number' && !Number.isFinite(cell)) ? null : String(cell).trim());
-    let r = readAs(type, cell, readNumber);
+    let r = readAs(type, cell, readNumber, readDate);
     // One column, one unit sign: "$640" beside "€4.2" is not a number to compare.
     const sign = type === 'number' && r && typeof cell === 'string' ? splitAffix(cell).unit : undefined;
     if (sign !== undefined && (unit ??= sign) !== sign) r = undefined;
     const finite = r && (typeof r.value !== 'number' || Number.isFinite(r.value));
     if (r && finite) {
       values.push(r.value);
+      quarters = (quarters ?? true) && r.quarter === true;
       if (r.grain && (!grain || GRAIN_RANK.indexOf(r.grain) > GRAIN_RANK.indexOf(grain))) grain = r.grain;
     } else {
       values.push(null);
@@ -107,6 +110,7 @@ function buildColumn(name: string, type: ColumnType, cells: RawCell[], readNumbe
   });
   const column: Column = { name, type, values, text, missing };
   if (type === 'date') column.grain = grain ?? 'day';
+  if (type === 'date' && quarters) column.quarterly = true;
   if (unit !== undefined) column.unit = unit;
   return { column, unreadable };
 }
@@ -130,6 +134,16 @@ function readerFor(raw: RawTable, cells: RawCell[], forced: ColumnType | undefin
   });
 }
 
+/** Slash dates read as text: 01/03/2026 is 1 March or 3 January, and only the brief can say which. */
+function slashDateWarning(name: string, column: Column, origin: TableOrigin): Diagnostic {
+  const sample = column.text.find((t) => t !== null && t !== '')!;
+  const yearFirst = /^\d{4}/.test(sample);
+  return diagnostic('table.slash-dates', `column \`${name}\` looks like dates written with slashes (${JSON.stringify(sample)}), whose order of day, month and year the data does not say; it is read as text, in no order of time`, {
+    file: origin.file, field: name, path: `/fields/${name}`, found: JSON.stringify(sample), expected: 'ISO 8601 dates, or a declared format',
+    hint: `declare it: \`fields: { ${name}: { type: temporal, format: "${yearFirst ? '%Y/%m/%d' : '%d/%m/%Y'}" } }\`${yearFirst ? '' : ' (or "%m/%d/%Y" for month first)'}`,
+  });
+}
+
 function unreadableProblem(name: string, column: Column, cells: RawCell[], unreadable: number[], raw: RawTable, origin: TableOrigin, declared: FieldType | undefined): Diagnostic {
   const rows = unreadable.map((i) => raw.positions[i]!);
   const sample = column.text[unreadable[0]!];
@@ -147,11 +161,12 @@ function unreadableProblem(name: string, column: Column, cells: RawCell[], unrea
 }
 
 /**
- * Types each column of a raw table: numbers, ISO 8601 dates, booleans or text. A field hint's
- * type wins. A column of mostly numbers keeps its numbers and warns about the rest by row. In a
+ * Types each column of a raw table: numbers, dates (ISO 8601 or a period spelling such as
+ * `Jan 2025`, `2025-Q1`; a temporal field's `format` pattern when given), booleans or text. A
+ * field hint's type wins. Slash dates stay text, with a warning, until a format says their order. A column of mostly numbers keeps its numbers and warns about the rest by row. In a
  * semicolon-separated file each numeric column's decimal mark is decided from its cells.
  */
-export function inferTable(raw: RawTable, origin: TableOrigin, hints: ReadonlyMap<string, FieldType | undefined>): { table: Table; diagnostics: Diagnostic[] } {
+export function inferTable(raw: RawTable, origin: TableOrigin, hints: ReadonlyMap<string, FieldType | undefined>, patterns: ReadonlyMap<string, string> = new Map()): { table: Table; diagnostics: Diagnostic[] } {
   const diagnostics: Diagnostic[] = [];
   const columns = raw.names.map((name, c) => {
     const cells = raw.rows.map((row) => row[c] ?? null);
@@ -160,7 +175,9 @@ export function inferTable(raw: RawTable, origin: TableOrigin, hints: ReadonlyMa
     if (typeof reader !== 'function') diagnostics.push(reader);
     const readNumber = typeof reader === 'function' ? reader : eitherMark;
     const guess = forced ? { type: forced, mixed: false } : guessType(cells, readNumber);
-    const { column, unreadable } = buildColumn(name, guess.type, cells, readNumber);
+    const pattern = patterns.get(name);
+    const { column, unreadable } = buildColumn(name, guess.type, cells, readNumber, pattern === undefined ? readDateText : patternReader(pattern));
+    if (!forced && column.type === 'text' && slashDates(column.text)) diagnostics.push(slashDateWarning(name, column, origin));
     if (unreadable.length) diagnostics.push(unreadableProblem(name, column, cells, unreadable, raw, origin, hints.get(name)));
     return column;
   });

@@ -1,6 +1,7 @@
 import { dirname, extname, isAbsolute, join } from 'node:path';
 import type { DataSource, FieldHint } from '../brief/types.js';
 import { diagnostic, failure, hasErrors, success, type Outcome } from '../diagnostics/diagnostic.js';
+import { datePatterns } from './date-format.js';
 import { decodeTable } from './decode.js';
 import { inferTable } from './infer.js';
 import { parseDelimited, parseJsonRows, parseNdjsonRows, rowsFromObjects, type RawTable } from './parse.js';
@@ -124,6 +125,6 @@ export async function readTable(source: DataSource, fields: Record<string, Field
     raw = parseTableText(read.value.text, origin);
   }
   if (!raw.ok) return failure(raw.diagnostics);
-  const { table, diagnostics } = inferTable(raw.value, origin, typeHints(fields));
+  const { table, diagnostics } = inferTable(raw.value, origin, typeHints(fields), datePatterns(fields));
   return hasErrors(diagnostics) ? failure(diagnostics) : success(table, diagnostics);
 }

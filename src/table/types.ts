@@ -18,6 +18,8 @@ export interface Column {
   unit?: string;
   /** For `date` columns: the finest grain any value is given at. */
   grain?: DateGrain;
+  /** For `date` columns whose every value is written as a quarter (`2025-Q1`, `Q1 2025`): named as quarters. */
+  quarterly?: true;
 }
 
 /** Where a table came from, for messages. */

@@ -3,6 +3,7 @@ import type { BarPlan } from '../../src/forms/bar-plan.js';
 import { describe, expect, it } from 'vitest';
 import { bars, checkBarContracts } from './bar-contracts.js';
 import { demoBriefs, renderDemo, renderRows, yaml } from '../helpers.js';
+import { readDateText } from '../../src/table/date-format.js';
 
 /** Gallery briefs drawn as one plain bar chart: one key, no panels (grouped bars and small multiples have contracts of their own). */
 const plainBars = (file: string) => { const b = yaml(readFileSync(file, 'utf8')); return typeof b.keys === 'string' && b.facet === undefined; };
@@ -23,6 +24,10 @@ describe('perceptual contracts on every gallery chart', () => {
       const values = bars(dump).map((b) => b.datum![plan.value!.name] as number);
       if (plan.order === 'value') {
         for (let i = 1; i < values.length; i++) expect(values[i]!).toBeLessThanOrEqual(values[i - 1]!);
+      } else if (plan.key.type === 'temporal') {
+        // A date key has no levels: its bars, labelled at the data's grain, run in time order.
+        const times = bars(dump).map((b) => readDateText(String(b.datum![plan.key.name]))!.time);
+        for (let i = 1; i < times.length; i++) expect(times[i]!).toBeGreaterThan(times[i - 1]!);
       } else {
         expect(bars(dump).map((b) => b.datum![plan.key.name])).toEqual(plan.key.levels.filter((l) => bars(dump).some((b) => b.datum![plan.key.name] === l)));
       }
