@@ -140,11 +140,30 @@ function describeValue(value: unknown): string {
   }
 }
 
+function isDate(value: unknown): value is Date {
+  // By tag, not instanceof: a Date made in another realm (a vm context, a worker) is still a Date.
+  return Object.prototype.toString.call(value) === '[object Date]';
+}
+
+/**
+ * A `Date` handed to the library as a cell, written as the ISO 8601 text the table reads as a
+ * date, in UTC: the day alone at midnight UTC (so its grain is the day), otherwise to the
+ * millisecond. An invalid Date is a missing cell, as NaN is.
+ */
+export function dateCell(value: Date): string | null {
+  const time = value.getTime();
+  if (!Number.isFinite(time)) return null;
+  const iso = value.toISOString();
+  // Years past 9999 or before 0 are written with a sign and six digits; they keep the full form.
+  return time % 86_400_000 === 0 && /^\d{4}-/.test(iso) ? iso.slice(0, 10) : iso.replace('.000Z', 'Z');
+}
+
 function scalarOrProblem(value: unknown, name: string, origin: TableOrigin, position: number, noun: 'line' | 'row'): RawCell | Diagnostic {
   if (value === null || value === undefined) return null;
   if (typeof value === 'string' || typeof value === 'boolean' || typeof value === 'number') return value;
   // A BigInt is a number the library was handed; beyond about 1.8e308 it reads as infinite, so missing.
   if (typeof value === 'bigint') return Number(value);
+  if (isDate(value)) return dateCell(value);
   const what = Array.isArray(value) ? 'a list' : typeof value === 'object' ? 'an object' : `a ${typeof value}`;
   return diagnostic('table.nested-value', `${noun} ${position}, column \`${name}\` holds ${what}`, {
     file: origin.file, ...(noun === 'line' ? { line: position } : {}), rows: [position], field: name, found: describeValue(value), expected: 'a number, string, boolean or null',
