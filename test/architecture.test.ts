@@ -16,8 +16,8 @@ function importsOf(file: string): string[] {
   return [...text.matchAll(/(?:from |import\()'(\.{1,2}\/[^']+)\.js'/g)].map((m) => relative(SRC, join(file, '..', m[1]!)).replaceAll('\\', '/'));
 }
 
-/** Modules anyone may import: diagnostics and the plain types of the early stages. */
-const SHARED = /^(diagnostics\/(diagnostic|catalogue)|(brief|table|fields|style|scene|choose)\/types)$/;
+/** Modules anyone may import: diagnostics (with their words) and the plain types of the early stages. */
+const SHARED = /^(diagnostics\/(diagnostic|catalogue|words)|(brief|table|fields|style|scene|choose)\/types)$/;
 
 /**
  * Which stage folders each folder may import from, beyond SHARED. The pipeline runs one way, so

@@ -1,6 +1,7 @@
 import { csvParseRows, dsvFormat, tsvParseRows } from 'd3-dsv';
 import { describeRows, diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import type { TableOrigin } from './types.js';
+import { agree, article, count } from '../diagnostics/words.js';
 
 /** A raw cell before typing: text from delimited files, or a JSON scalar. */
 export type RawCell = string | number | boolean | null;
@@ -114,8 +115,8 @@ export function parseDelimited(text: string, origin: TableOrigin): Outcome<RawTa
   const ragged = data.filter(({ r }) => r.length !== names.length);
   if (ragged.length) {
     const first = ragged[0]!;
-    return failure([diagnostic('table.ragged-row', `${describeRows(ragged.map((x) => x.line))} ha${ragged.length === 1 ? 's' : 've'} a different number of cells from the header`, {
-      file: origin.file, line: first.line, rows: ragged.map((x) => x.line), found: `${first.r.length} cells`, expected: `${names.length} cells, as in the header`,
+    return failure([diagnostic('table.ragged-row', `${describeRows(ragged.map((x) => x.line))} ${agree(ragged.length, 'has', 'have')} a different number of cells from the header`, {
+      file: origin.file, line: first.line, rows: ragged.map((x) => x.line), found: count(first.r.length, 'cell'), expected: `${count(names.length, 'cell')}, as in the header`,
       hint: origin.format === 'csv' ? 'quote cells that contain commas, e.g. "Smith, J."' : 'check for missing or extra tabs on these lines',
     })]);
   }
@@ -128,13 +129,13 @@ export function parseDelimited(text: string, origin: TableOrigin): Outcome<RawTa
  */
 function describeValue(value: unknown): string {
   try {
-    if (Array.isArray(value)) return `a list of ${value.length} item${value.length === 1 ? '' : 's'}`;
+    if (Array.isArray(value)) return `a list of ${count(value.length, 'item')}`;
     if (value !== null && typeof value === 'object') {
       const keys = Object.keys(value);
       return keys.length ? `an object with ${keys.slice(0, 3).map((k) => JSON.stringify(k.slice(0, 20))).join(', ')}${keys.length > 3 ? ', …' : ''}` : 'an empty object';
     }
     if (typeof value === 'string') return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
-    return typeof value === 'function' || typeof value === 'symbol' ? `a ${typeof value}` : String(value);
+    return typeof value === 'function' || typeof value === 'symbol' ? article(typeof value) : String(value);
   } catch {
     return 'a value that cannot be read'; // a getter or proxy that throws
   }
@@ -164,7 +165,7 @@ function scalarOrProblem(value: unknown, name: string, origin: TableOrigin, posi
   // A BigInt is a number the library was handed; beyond about 1.8e308 it reads as infinite, so missing.
   if (typeof value === 'bigint') return Number(value);
   if (isDate(value)) return dateCell(value);
-  const what = Array.isArray(value) ? 'a list' : typeof value === 'object' ? 'an object' : `a ${typeof value}`;
+  const what = Array.isArray(value) ? 'a list' : article(typeof value);
   return diagnostic('table.nested-value', `${noun} ${position}, column \`${name}\` holds ${what}`, {
     file: origin.file, ...(noun === 'line' ? { line: position } : {}), rows: [position], field: name, found: describeValue(value), expected: 'a number, string, boolean or null',
     hint: 'flatten nested values into their own columns before charting',
