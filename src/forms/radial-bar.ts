@@ -12,6 +12,7 @@ import { barValueTitle } from './bar-text.js';
 import { barGroups } from './bar-plan.js';
 import { planRadialBar, type RadialBarPlan } from './radial-bar-plan.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** Inner ring radius as a share of the outer: keeps the narrow inner ends of short bars apart (common practice). */
 export const INNER_RING_SHARE = 0.25;
@@ -136,10 +137,10 @@ export const RADIAL_BAR: FormDef<RadialBarPlan, DerivedBars<RadialBarPlan>> = {
     const valueTitle = barValueTitle(derived.query);
     const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format);
     const n = derived.bars.length;
-    const what = `Radial bar chart of ${valueTitle.toLowerCase()} by ${derived.query.key.label.toLowerCase()}, ${n} bar${n === 1 ? '' : 's'} around a circle in cycle order`;
+    const what = `Radial bar chart of ${inSentence(valueTitle)} by ${inSentence(derived.query.key.label)}, ${n} bar${n === 1 ? '' : 's'} around a circle in cycle order`;
     const top = derived.bars.reduce<BarDatum | undefined>((a, b) => (a === undefined || b.value > a.value ? b : a), undefined);
     const low = derived.bars.reduce<BarDatum | undefined>((a, b) => (a === undefined || b.value < a.value ? b : a), undefined);
     const description = top && low && top !== low ? `${what}: largest ${top.label} (${fmt(top.value)}), smallest ${low.label} (${fmt(low.value)}).` : `${what}.`;
-    return { title: `${valueTitle} by ${derived.query.key.label.toLowerCase()}`, description, notes: [] };
+    return { title: `${valueTitle} by ${inSentence(derived.query.key.label)}`, description, notes: [] };
   },
 };
