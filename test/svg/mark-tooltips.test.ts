@@ -27,6 +27,15 @@ describe('per-mark tooltips', () => {
     expect(titles(svg, 'rect')).toHaveLength(4);
     for (const t of titles(svg, 'rect')) expect(t).toMatch(/^Shop: (North|South), Year: (Last|This), Sales \(units\): \d{1,2}(,\d{3}|k|\.\d+k)?/);
   });
+
+  it('a stacked segment names its group, its part and its value by their labels', async () => {
+    const brief = { intent: 'composition', keys: ['shop', 'kind'], values: 'sales', fields: { sales: { unit: 'units' } } };
+    const rows = [{ shop: 'North', kind: 'Tea', sales: 1_200 }, { shop: 'North', kind: 'Cake', sales: 800 }, { shop: 'South', kind: 'Tea', sales: 900 }, { shop: 'South', kind: 'Cake', sales: 700 }];
+    const { svg } = await render(brief, rows, { env });
+    const segments = [...svg.matchAll(/<rect class="segment"[^>]*><title>([^<]*)<\/title>/g)].map((m) => m[1]!);
+    expect(segments).toHaveLength(4);
+    for (const t of segments) expect(t).toMatch(/^Shop: (North|South), Kind: (Tea|Cake), [^:]+: [\d,.k%]+$/);
+  });
 });
 
 describe('generated descriptions keep the case of labels', () => {
