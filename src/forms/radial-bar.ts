@@ -2,13 +2,13 @@ import { max } from 'd3-array';
 import { deriveBars, type BarDatum, type DerivedBars } from '../derive/bars.js';
 import { cycleAngles, radialBarRadius } from '../derive/radial.js';
 import type { ValueTicks } from '../layout/axis.js';
-import { ticksFor, type LayoutContext } from '../layout/kit-types.js';
+import { memoized, ticksFor, type LayoutContext } from '../layout/kit-types.js';
 import { valueFormatter } from '../layout/number-format.js';
 import { polarPoint, ringCommands, sectorCommands } from '../layout/polar.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { BodyMarks } from '../layout/chart.js';
 import type { Box, SceneNode, TextNode } from '../scene/types.js';
-import { barValueTitle } from './bar-text.js';
+import { barValueTitle, tooltipText } from './bar-text.js';
 import { barGroups } from './bar-plan.js';
 import { planRadialBar, type RadialBarPlan } from './radial-bar-plan.js';
 import type { FormDef } from './types.js';
@@ -92,9 +92,15 @@ function sectorOf(derived: DerivedBars<RadialBarPlan>, bar: BarDatum, angle: num
   return { from: angle - half, to: angle + half, inner, outer: radialBarRadius(bar.value, top, inner, c.outer) };
 }
 
+/** A bar's tooltip: the key and value by their labels, the value in the chart's number format (formatter made once per chart). */
+function radialTooltip(derived: DerivedBars<RadialBarPlan>, bar: BarDatum, ctx: LayoutContext): string {
+  const fmt = memoized(ctx, 'radial-bar\u0000format', () => valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format));
+  return tooltipText([[derived.query.key.label, bar.label], [barValueTitle(derived.query), fmt(bar.value)]]);
+}
+
 function radialBar(derived: DerivedBars<RadialBarPlan>, bar: BarDatum, angle: number, s: Sector, c: Circle, ctx: LayoutContext): SceneNode {
   return {
-    kind: 'path', id: ctx.id('bar', bar.label), role: 'bar', datum: { [derived.query.key.name]: bar.label, [derived.valueName]: bar.value },
+    kind: 'path', id: ctx.id('bar', bar.label), role: 'bar', datum: { [derived.query.key.name]: bar.label, [derived.valueName]: bar.value }, tooltip: radialTooltip(derived, bar, ctx),
     commands: sectorCommands(c.cx, c.cy, s.inner, s.outer, s.from, s.to), fill: ctx.style.palette.primary, angle, radius: s.outer,
   };
 }

@@ -36,6 +36,15 @@ describe('per-mark tooltips', () => {
     expect(segments).toHaveLength(4);
     for (const t of segments) expect(t).toMatch(/^Shop: (North|South), Kind: (Tea|Cake), [^:]+: [\d,.k%]+$/);
   });
+
+  it('a radial bar names its key and value by their labels', async () => {
+    const months = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+    const brief = { intent: 'cycle', keys: 'month', values: 'rain_mm', fields: { rain_mm: { label: 'Rain', unit: 'mm' } } };
+    const { svg } = await render(brief, months.map((month, i) => ({ month, rain_mm: 40 + i * 1.5 })), { env });
+    const bars = [...svg.matchAll(/<path class="bar"[^>]*><title>([^<]*)<\/title>/g)].map((m) => m[1]!);
+    expect(bars).toHaveLength(12);
+    for (const t of bars) expect(t).toMatch(/^Month: [A-Z][a-z]{2}, Rain \(mm\): \d+(\.\d)?$/);
+  });
 });
 
 describe('generated descriptions keep the case of labels', () => {
