@@ -16,8 +16,8 @@ function importsOf(file: string): string[] {
   return [...text.matchAll(/(?:from |import\()'(\.{1,2}\/[^']+)\.js'/g)].map((m) => relative(SRC, join(file, '..', m[1]!)).replaceAll('\\', '/'));
 }
 
-/** Modules anyone may import: diagnostics and the plain types of the early stages. */
-const SHARED = /^(diagnostics\/(diagnostic|catalogue)|(brief|table|fields|style|scene|choose)\/types)$/;
+/** Modules anyone may import: diagnostics (with their words) and the plain types of the early stages. */
+const SHARED = /^(diagnostics\/(diagnostic|catalogue|words)|(brief|table|fields|style|scene|choose)\/types)$/;
 
 /**
  * Which stage folders each folder may import from, beyond SHARED. The pipeline runs one way, so
@@ -36,7 +36,7 @@ const ALLOWED: Record<string, RegExp> = {
   derive: /^(derive|fields\/labels)/,
   scene: /^(scene|svg\/path)/,
   svg: /^(svg|scene\/ids|font\/measurer|font\/metrics)/,
-  layout: /^(layout|svg\/path|scene\/(ids|walk)|font\/measurer|fields\/notation$|color\/wcag$|raster\/png-encode$)/,
+  layout: /^(layout|svg\/path|scene\/(ids|walk)|font\/measurer|fields\/(notation|labels)$|color\/wcag$|raster\/png-encode$)/,
   // A form: the layout kit, the scene, derive operations, field helpers and types.
   forms: /^(forms\/|layout\/|scene\/|derive\/|svg\/path$|fields\/(labels|notation)$|color\/wcag$)/,
   raster: /^raster\//,

@@ -2,6 +2,7 @@ import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome 
 import { checkFormats } from './format.js';
 import { parseBriefText, type ParsedBrief } from './parse.js';
 import { briefSchema } from './schema.js';
+import { tableLike, TABLE_AS_BRIEF_HINT } from './table-like.js';
 import { FORM_NAMES, INTENTS, type BriefVocabulary, type DataSource, type FieldHint, type ResolvedBrief } from './types.js';
 import { validateAgainstSchema } from './validate.js';
 
@@ -131,8 +132,10 @@ export function readBrief(text: string, parsedBrief?: ParsedBrief, vocabulary: B
 export function checkBriefValue(value: unknown, parsed?: ParsedBrief, vocabulary: BriefVocabulary = BRIEF_LANGUAGE): Outcome<{ brief: ResolvedBrief; parsed: ParsedBrief }> {
   const located: ParsedBrief = parsed ?? { value, locate: () => undefined };
   if (value === null || typeof value !== 'object' || Array.isArray(value)) {
-    return failure([diagnostic('brief.not-an-object', 'a brief must be a mapping of options', {
-      path: '', found: Array.isArray(value) ? 'a list' : String(value), expected: 'a mapping such as `intent: compare`', hint: 'start the brief with `data:` and `intent:` lines',
+    const table = tableLike(value);
+    return failure([diagnostic('brief.not-an-object', `a brief must be a mapping of options${table ? '; this looks like a table' : ''}`, {
+      path: '', found: Array.isArray(value) ? (table ? 'a list of row objects' : 'a list') : String(value), expected: 'a mapping such as `intent: compare`',
+      hint: table ? TABLE_AS_BRIEF_HINT : 'start the brief with `data:` and `intent:` lines',
     })]);
   }
   const raw = value as Record<string, unknown>;

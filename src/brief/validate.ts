@@ -2,6 +2,7 @@ import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { suggestionHint } from '../diagnostics/suggest.js';
 import { preview } from './preview.js';
 import type { SchemaNode } from './schema.js';
+import { article, count } from '../diagnostics/words.js';
 
 /** Most problems reported for one brief; the rest are counted in one more line (common practice in compilers). */
 export const MAX_BRIEF_PROBLEMS = 50;
@@ -40,7 +41,7 @@ function describeExpected(schema: SchemaNode): string {
   if (schema.anyOf) return schema.anyOf.map(describeExpected).join(' or ');
   if (schema.enum) return `one of ${schema.enum.map((e) => JSON.stringify(e)).join(', ')}`;
   if (schema.type === 'array' && schema.items?.type) return `a list of ${schema.items.type}s`;
-  return schema.type ? `a ${schema.type}` : 'a value';
+  return schema.type ? article(schema.type) : 'a value';
 }
 
 /**
@@ -57,7 +58,7 @@ export function validateAgainstSchema(value: unknown, schema: SchemaNode, path =
 export function capProblems(problems: Diagnostic[]): Diagnostic[] {
   if (problems.length <= MAX_BRIEF_PROBLEMS) return problems;
   const hidden = problems.length - MAX_BRIEF_PROBLEMS;
-  return [...problems.slice(0, MAX_BRIEF_PROBLEMS), diagnostic('brief.too-many-problems', `the brief has ${hidden} more problem${hidden === 1 ? '' : 's'}, not shown`, {
+  return [...problems.slice(0, MAX_BRIEF_PROBLEMS), diagnostic('brief.too-many-problems', `the brief has ${count(hidden, 'more problem', 'more problems')}, not shown`, {
     found: `${problems.length} problems`, expected: `at most ${MAX_BRIEF_PROBLEMS} shown`, hint: 'fix the problems shown and check the brief again',
   })];
 }
@@ -107,7 +108,7 @@ function checkRange(value: number, schema: SchemaNode, path: string): Diagnostic
 function checkArray(value: unknown[], schema: SchemaNode, path: string): Diagnostic[] {
   const problems: Diagnostic[] = [];
   if (schema.minItems !== undefined && value.length < schema.minItems) {
-    problems.push(diagnostic('brief.bad-value', `${path} is an empty list`, { path, found: '[]', expected: `at least ${schema.minItems} item(s)`, hint: 'list at least one item or remove the option' }));
+    problems.push(diagnostic('brief.bad-value', `${path} is an empty list`, { path, found: '[]', expected: `at least ${count(schema.minItems ?? 1, 'item')}`, hint: 'list at least one item or remove the option' }));
   }
   if (schema.items) value.forEach((item, i) => problems.push(...validateNode(item, schema.items!, pointer(path, i))));
   return problems;

@@ -10,6 +10,7 @@ import { chooseFacet } from './facet.js';
 import { applyHardRules } from './hard-rules.js';
 import { matchRule } from './rules.js';
 import type { Candidate, Choice, Decision } from './types.js';
+import { count } from '../diagnostics/words.js';
 
 /** What the rules may look at beyond fields and brief. */
 export interface ChooseContext {
@@ -37,7 +38,7 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext,
   const form = ctx.forms.find((f) => f.name === (brief.form ?? rule?.form));
   if (!form) {
     return failure([...problems, diagnostic('choice.no-rule', `no form is drawn for intent ${brief.intent} with this data`, {
-      path: '/intent', found: `${fields.keys.length} key(s), ${fields.values.length} value(s)`, hint: 'check `keys:` and `values:`, or choose another intent',
+      path: '/intent', found: `${count(fields.keys.length, 'key')}, ${count(fields.values.length, 'value')}`, hint: 'check `keys:` and `values:`, or choose another intent',
     })]);
   }
   const hard = applyHardRules({ traits: form.traits, form: form.noun, brief, fields, maxColours: ctx.style.palette.categorical.length }, ctx.lenient);

@@ -2,6 +2,7 @@ import type { ResolvedBrief } from '../brief/types.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { isOrdered, refOf, type Field, type Fields } from '../fields/types.js';
 import type { Candidate, ChosenFacet, Decision, FacetOrder, FacetRequest } from './types.js';
+import { article } from '../diagnostics/words.js';
 
 /** The rule behind small multiples asked for by the brief. */
 const BRIEF_RULE = 'facet.brief: the brief asks for small multiples (`facet:`); panels on one shared x and y scale can be compared at a glance, with one set of axis titles for all (Tufte 1983, small multiples)';
@@ -26,7 +27,7 @@ export function chooseFacet(fields: Fields, brief: ResolvedBrief, form: Candidat
   const by = brief.facet?.by ?? request?.by;
   if (by === undefined) return { decisions: [], problems: [] };
   if (!form.facets) {
-    return { decisions: [], problems: [diagnostic('choice.facet-not-supported', `a ${form.noun} is not drawn as small multiples`, {
+    return { decisions: [], problems: [diagnostic('choice.facet-not-supported', `${article(form.noun)} is not drawn as small multiples`, {
       path: '/facet', found: by, expected: 'a form drawn on a left and a bottom axis', hint: 'remove `facet:` and write one brief per panel',
     })] };
   }

@@ -3,6 +3,7 @@ import { supportedIntents } from './rules.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { isOrdered, type Field, type Fields } from '../fields/types.js';
 import type { Decision, FormTraits } from './types.js';
+import { article, count } from '../diagnostics/words.js';
 
 /** Most categories that colour alone may tell apart (the default categorical palette holds 8). */
 export const MAX_CATEGORICAL_COLOURS = 8;
@@ -63,8 +64,8 @@ const fewParts = (c: RuleContext) => firstKey(c)!.levels.length >= MIN_WHOLE_PAR
 /** A donut of too many (or too few) parts, refused with the normalized bar offered. */
 function tooManyParts(c: RuleContext): Diagnostic {
   const n = firstKey(c)!.levels.length;
-  return diagnostic('choice.donut-too-many-parts', `a donut of ${n} part${n === 1 ? '' : 's'} of \`${firstKey(c)!.name}\`: angles and areas are read less accurately than aligned lengths (Cleveland & McGill 1984), so a donut is drawn only for ${MIN_WHOLE_PARTS} or ${MAX_WHOLE_PARTS} parts`, {
-    path: '/form', field: firstKey(c)!.name, found: `${n} part${n === 1 ? '' : 's'}`, expected: `${MIN_WHOLE_PARTS} or ${MAX_WHOLE_PARTS} parts`,
+  return diagnostic('choice.donut-too-many-parts', `a donut of ${count(n, 'part')} of \`${firstKey(c)!.name}\`: angles and areas are read less accurately than aligned lengths (Cleveland & McGill 1984), so a donut is drawn only for ${MIN_WHOLE_PARTS} or ${MAX_WHOLE_PARTS} parts`, {
+    path: '/form', field: firstKey(c)!.name, found: count(n, 'part'), expected: `${MIN_WHOLE_PARTS} or ${MAX_WHOLE_PARTS} parts`,
     hint: 'remove `form: donut` to draw the shares as bars on a percent axis (form: normalized-bar)',
   });
 }
@@ -77,7 +78,7 @@ export const HARD_RULES: readonly HardRule[] = [
     binds: (c) => c.traits.lengthCoded,
     decision: () => ({ decision: 'the value axis starts at zero', rule: 'hard rule: length-coded marks start at zero; a bar read from a cut axis exaggerates differences (Correll, Bertini & Franconeri, CHI 2020)' }),
     broken: (c) => c.brief.baseline === 'fit',
-    refusal: (c) => diagnostic('choice.baseline-fit-refused', `\`baseline: fit\` is refused for a ${c.form}: its marks encode values by their length, so an axis that does not start at zero makes small differences look large`, {
+    refusal: (c) => diagnostic('choice.baseline-fit-refused', `\`baseline: fit\` is refused for ${article(c.form)}: its marks encode values by their length, so an axis that does not start at zero makes small differences look large`, {
       path: '/baseline', found: 'fit', expected: 'zero', hint: `remove \`baseline: fit\`${offer('trend', '; to show change over time from a non-zero base, use a line (intent: trend)')}`,
     }),
     lenientFix: { message: '`baseline: fit` was not honoured: length-coded marks encode values by their length, so they are drawn from zero instead', hint: () => `remove \`baseline: fit\`${offer('trend', ', or use intent trend for a line that may leave zero out')}`, path: '/baseline' },

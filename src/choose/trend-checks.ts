@@ -1,6 +1,7 @@
 import type { ResolvedBrief } from '../brief/types.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
+import { article } from '../diagnostics/words.js';
 
 /**
  * Checks the brief's data shape against what a trend (or change) can show: one ordered key
@@ -11,18 +12,18 @@ export function checkTrendShape(fields: Fields, brief: ResolvedBrief): Diagnosti
   const problems: Diagnostic[] = [];
   if (fields.keys.length === 0) {
     const candidate = fields.all.find((f) => f.type === 'temporal' || f.type === 'ordinal')?.name;
-    problems.push(diagnostic('choice.no-key', `a ${brief.intent} needs a key: the ordered column (time, numbers or ordered levels) along which the value changes`, {
+    problems.push(diagnostic('choice.no-key', `${article(brief.intent)} needs a key: the ordered column (time, numbers or ordered levels) along which the value changes`, {
       path: '/keys', expected: 'one column name, and optionally a second naming the series', hint: candidate ? `add \`keys: ${candidate}\`` : 'add `keys:` naming a date column',
     }));
   }
   if (fields.keys.length > 2) {
-    problems.push(diagnostic('choice.too-many-keys', `a ${brief.intent} takes at most two keys (the ordered key and the series), not ${fields.keys.length}`, {
+    problems.push(diagnostic('choice.too-many-keys', `${article(brief.intent)} takes at most two keys (the ordered key and the series), not ${fields.keys.length}`, {
       path: '/keys', found: fields.keys.map((k) => k.name).join(', '), expected: 'one or two key columns', hint: 'keep the ordered key and one series key, e.g. `keys: [week, route]`',
     }));
   }
   if (fields.values.length === 0 && brief.aggregate !== 'count') {
     const numeric = fields.all.filter((f) => f.type === 'quantitative' && !brief.keys.includes(f.name)).map((f) => f.name);
-    problems.push(diagnostic('choice.no-value', `a ${brief.intent} needs a value: the column whose change the line shows`, {
+    problems.push(diagnostic('choice.no-value', `${article(brief.intent)} needs a value: the column whose change the line shows`, {
       path: '/values', expected: 'one numeric column', hint: numeric.length ? `add \`values: ${numeric[0]}\`` : 'add `values:`, or `aggregate: count` to count rows',
     }));
   }

@@ -8,6 +8,7 @@ import { firstUnevenStep } from './dates.js';
 import { groupRows, type Grouped, type RowGroup } from './group.js';
 import type { Combined } from './group.js';
 import { compareNatural, compareText } from './order.js';
+import { agree, count } from '../diagnostics/words.js';
 
 /** What the bar derivation needs from the plan. */
 export interface BarQuery {
@@ -199,7 +200,7 @@ export function combineGroups(groups: RowGroup[], query: BarQuery, problems: Dia
   const aggregator = AGGREGATORS[query.aggregate];
   const combined = groups.filter((g) => g.values.length > 1);
   if (combined.length && query.value && query.aggregateStated !== false) {
-    problems.push(diagnostic('derive.aggregated', `${combined.length} key${combined.length === 1 ? '' : 's'} ha${combined.length === 1 ? 's' : 've'} several rows (first: ${JSON.stringify(combined[0]!.labels[0])}, ${combined[0]!.values.length} rows); their values are ${aggregator.verb} (aggregate: ${query.aggregate})`, {
+    problems.push(diagnostic('derive.aggregated', `${count(combined.length, 'key')} ${agree(combined.length, 'has', 'have')} several rows (first: ${JSON.stringify(combined[0]!.labels[0])}, ${count(combined[0]!.values.length, 'row')}); their values are ${aggregator.verb} (aggregate: ${query.aggregate})`, {
       field: query.key.name, hint: 'set `aggregate:` to sum, mean, count, max or min',
     }));
   }

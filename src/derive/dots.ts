@@ -5,6 +5,7 @@ import type { Table } from '../table/types.js';
 import { AGGREGATORS } from './aggregate.js';
 import { groupRows } from './group.js';
 import { compareNatural, compareText } from './order.js';
+import { agree, count } from '../diagnostics/words.js';
 
 /** What the dot derivation needs: the key, one or two values (a dumbbell's two ends), the order and how rows combine. */
 export interface DotQuery {
@@ -50,7 +51,7 @@ export function deriveDotRows(table: Table, query: DotQuery): { rows: DotRow[]; 
   }
   const several = grouped[0]!.groups.filter((g) => g.values.length > 1).length;
   if (several && query.aggregate !== 'count') {
-    diagnostics.push(diagnostic('derive.aggregated', `${several} key${several === 1 ? ' has' : 's have'} several rows; their values are ${AGGREGATORS[query.aggregate].verb} (aggregate: ${query.aggregate})`, {
+    diagnostics.push(diagnostic('derive.aggregated', `${count(several, 'key')} ${agree(several, 'has', 'have')} several rows; their values are ${AGGREGATORS[query.aggregate].verb} (aggregate: ${query.aggregate})`, {
       field: query.key.name, hint: 'set `aggregate:` to sum, mean, count, max or min',
     }));
   }

@@ -6,6 +6,7 @@ import { columnOf, type Column, type Table } from '../table/types.js';
 import { AGGREGATORS } from './aggregate.js';
 import { compareText } from './order.js';
 import { breakSkippedPeriods, type SkippedPeriods } from './skipped-periods.js';
+import { agree, count } from '../diagnostics/words.js';
 
 /** What the line derivation needs from the plan. */
 export interface LineQuery {
@@ -168,7 +169,7 @@ function rowProblems(table: Table, query: LineQuery, noKey: number[], noValue: n
   if (noValue.length) problems.push(gapWarning(noValue, table, query, keyColumn));
   if (noKey.length) {
     const rows = noKey.map((r) => table.rowPositions[r]!);
-    problems.push(diagnostic('derive.missing-values', `${describeRows(rows, table.positionNoun)} ha${rows.length === 1 ? 's' : 've'} no usable key and ${rows.length === 1 ? 'is' : 'are'} left out`, {
+    problems.push(diagnostic('derive.missing-values', `${describeRows(rows, table.positionNoun)} ${agree(rows.length, 'has', 'have')} no usable key and ${agree(rows.length, 'is', 'are')} left out`, {
       file: table.origin.file, field: query.key.name, rows, hint: 'give every row a key',
     }));
   }
@@ -200,7 +201,7 @@ export function deriveLines<Q extends LineQuery>(table: Table, query: Q): Outcom
     problems.push(diagnostic('derive.no-rows', 'no row has both a key and a usable value, so there is nothing to draw', { file: table.origin.file, hint: 'check that the key and value columns are the ones you meant', expected: 'at least one complete row' }));
     return failure(problems);
   }
-  if (combined) problems.push(diagnostic('derive.aggregated', `${combined} point${combined === 1 ? '' : 's'} had several rows; their values are ${AGGREGATORS[query.aggregate].verb} (aggregate: ${query.aggregate})`, { field: query.key.name, hint: 'set `aggregate:` to sum, mean, count, max or min' }));
+  if (combined) problems.push(diagnostic('derive.aggregated', `${count(combined, 'point')} had several rows; their values are ${AGGREGATORS[query.aggregate].verb} (aggregate: ${query.aggregate})`, { field: query.key.name, hint: 'set `aggregate:` to sum, mean, count, max or min' }));
   const overflow = series.find((s) => s.ys.some((y) => y === Infinity || y === -Infinity));
   if (overflow) {
     problems.push(diagnostic('derive.not-finite', `a combined \`${query.value?.name ?? 'count'}\`${overflow.label === undefined ? '' : ` of ${JSON.stringify(overflow.label)}`} is beyond the range of numbers`, { field: query.key.name, expected: 'a finite number', hint: 'rescale the values (e.g. to thousands or millions) before charting' }));

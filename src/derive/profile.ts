@@ -2,6 +2,7 @@ import { describeRows, diagnostic, type Diagnostic } from '../diagnostics/diagno
 import { keyText } from '../fields/labels.js';
 import type { FieldRef } from '../fields/types.js';
 import { columnOf, type Table } from '../table/types.js';
+import { agree } from '../diagnostics/words.js';
 
 /** One item of a profile: its label and its value of each attribute, in the attributes' order. */
 export interface ProfileItem {
@@ -26,7 +27,7 @@ export function profileItems(table: Table, attributes: readonly FieldRef[], key:
     if (!values.every((v): v is number => typeof v === 'number' && Number.isFinite(v))) { missing.push(table.rowPositions[i]!); continue; }
     items.push({ label: (keyColumn && keyText(keyColumn, i)) ?? `${table.positionNoun} ${table.rowPositions[i]}`, values, row: i });
   }
-  const diagnostics = missing.length ? [diagnostic('derive.missing-values', `${describeRows(missing, table.positionNoun)} ${missing.length === 1 ? 'lacks' : 'lack'} a value of some attribute and ${missing.length === 1 ? 'is' : 'are'} left out, not drawn as zero`, {
+  const diagnostics = missing.length ? [diagnostic('derive.missing-values', `${describeRows(missing, table.positionNoun)} ${agree(missing.length, 'lacks', 'lack')} a value of some attribute and ${agree(missing.length, 'is', 'are')} left out, not drawn as zero`, {
     file: table.origin.file, rows: missing, hint: 'fill in the values, or remove those rows if they are not data',
   })] : [];
   return { items, diagnostics };

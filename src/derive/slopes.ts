@@ -5,6 +5,7 @@ import type { Table } from '../table/types.js';
 import { AGGREGATORS } from './aggregate.js';
 import { groupRows, type RowGroup } from './group.js';
 import { compareText } from './order.js';
+import { agree, count } from '../diagnostics/words.js';
 
 /** Which way an item moved between its two points. */
 export type Direction = 'up' | 'down' | 'unchanged';
@@ -58,7 +59,7 @@ function combined(groups: readonly RowGroup[], aggregate: Aggregate, labelOf: (g
   const { combine, verb } = AGGREGATORS[aggregate];
   const repeated = groups.filter((g) => g.values.length > 1);
   if (repeated.length) {
-    problems.push(diagnostic('derive.aggregated', `${repeated.length} point${repeated.length === 1 ? ' has' : 's have'} several rows (first: ${JSON.stringify(repeated[0]!.labels.join(' at '))}); their values are ${verb} (aggregate: ${aggregate})`, {
+    problems.push(diagnostic('derive.aggregated', `${count(repeated.length, 'point')} ${agree(repeated.length, 'has', 'have')} several rows (first: ${JSON.stringify(repeated[0]!.labels.join(' at '))}); their values are ${verb} (aggregate: ${aggregate})`, {
       hint: 'set `aggregate:` to sum, mean, count, max or min',
     }));
   }
@@ -117,7 +118,7 @@ export function deriveSlopes(table: Table, query: SlopeQuery): Outcome<DerivedSl
     items.push({ label, before: a.value, after: b.value, direction: direction(a.value, b.value), ...(width !== undefined ? { width } : {}), rows: [...a.rows, ...b.rows].sort((x, y) => x - y) });
   }
   if (incomplete.length) {
-    problems.push(diagnostic('derive.slope-incomplete', `${incomplete.length} item${incomplete.length === 1 ? ' has' : 's have'} a value at only one of ${ends[0]} and ${ends[1]} and ${incomplete.length === 1 ? 'is' : 'are'} left out (${incomplete.slice(0, 3).join(', ')}${incomplete.length > 3 ? ', …' : ''})`, {
+    problems.push(diagnostic('derive.slope-incomplete', `${count(incomplete.length, 'item')} ${agree(incomplete.length, 'has', 'have')} a value at only one of ${ends[0]} and ${ends[1]} and ${agree(incomplete.length, 'is', 'are')} left out (${incomplete.slice(0, 3).join(', ')}${incomplete.length > 3 ? ', …' : ''})`, {
       field: query.item.name, found: incomplete.slice(0, 3).join(', '), hint: 'give every item a value at both points',
     }));
   }

@@ -7,6 +7,7 @@ import { foldParts } from './fold-parts.js';
 import { fitStacks, type StackCapacity } from './stack-fit.js';
 import { groupRows } from './group.js';
 import { cellsOf, normalizeStacks, orderStacks, partOrder, stackCells, type GroupOrder, type Stack, type StackCell } from './stack.js';
+import { agree, count } from '../diagnostics/words.js';
 
 /** What the stack derivation needs from the plan. */
 export interface StackQuery {
@@ -81,7 +82,7 @@ function splitEmpty(stacks: Stack[], query: StackQuery): { kept: Stack[]; empty:
   return {
     kept: stacks.filter((s) => s.total !== 0),
     empty,
-    diagnostics: [diagnostic('derive.zero-total', `${empty.length} group${empty.length === 1 ? '' : 's'} (${empty.map((g) => JSON.stringify(g)).join(', ')}) ha${empty.length === 1 ? 's' : 've'} parts summing to zero, so no share can be drawn; left out`, {
+    diagnostics: [diagnostic('derive.zero-total', `${count(empty.length, 'group')} (${empty.map((g) => JSON.stringify(g)).join(', ')}) ${agree(empty.length, 'has', 'have')} parts summing to zero, so no share can be drawn; left out`, {
       field: query.group.name, hint: 'check the values of those groups, or remove them from the table',
     })],
   };

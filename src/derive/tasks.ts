@@ -3,6 +3,7 @@ import { keyText } from '../fields/labels.js';
 import type { FieldRef } from '../fields/types.js';
 import { columnOf, type Table } from '../table/types.js';
 import { compareNatural, compareText } from './order.js';
+import { agree } from '../diagnostics/words.js';
 
 /** One task of a schedule: its name, when it starts and ends (epoch ms or plain numbers), its group and predecessor. */
 export interface Task {
@@ -72,7 +73,7 @@ function readTasks(table: Table, query: TaskQuery, problems: Diagnostic[]): Task
     tasks.push({ label, start: s, end: e, ...(g !== null ? { group: g } : {}), ...(a !== null && a !== '' ? { after: a } : {}), row });
   }
   if (missing.length) {
-    problems.push(diagnostic('derive.missing-values', `${describeRows(missing, table.positionNoun)} ha${missing.length === 1 ? 's' : 've'} no task name, start or end and ${missing.length === 1 ? 'is' : 'are'} left out`, {
+    problems.push(diagnostic('derive.missing-values', `${describeRows(missing, table.positionNoun)} ${agree(missing.length, 'has', 'have')} no task name, start or end and ${agree(missing.length, 'is', 'are')} left out`, {
       file: table.origin.file, field: query.task.name, rows: missing, hint: 'give every task a name, a start and an end',
     }));
   }

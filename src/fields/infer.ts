@@ -4,15 +4,13 @@ import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome 
 import { suggestionHint } from '../diagnostics/suggest.js';
 import type { Column, Table } from '../table/types.js';
 import { cycleOrder } from './cyclic.js';
+import { readableName } from './labels.js';
 import { isAdditiveUnit } from './notation.js';
 import { looksOrdered, orderedTextLevels } from './ordered-text.js';
 import type { Field, FieldRole, Fields } from './types.js';
 
-/** "crossings_per_day" → "Crossings per day". */
-export function readableName(name: string): string {
-  const spaced = name.replace(/[_\-]+/g, ' ').replace(/([a-z])([A-Z])/g, '$1 $2').replace(/\s+/g, ' ').trim();
-  return spaced.charAt(0).toUpperCase() + spaced.slice(1).toLowerCase();
-}
+/** Re-exported: the readable name of a column lives with the other words of fields. */
+export { readableName } from './labels.js';
 
 function firstAppearance(column: Column): string[] {
   const seen = new Set<string>();

@@ -30,3 +30,37 @@ export function keyText(column: Column, row: number): string | null {
   if (column.type === 'date') return formatDate(value as number, column.grain ?? 'day');
   return column.text[row] ?? String(value);
 }
+
+// Month and weekday names keep their capital inside a sentence.
+const PROPER = /^(January|February|March|April|May|June|July|August|September|October|November|December|Jan|Feb|Mar|Apr|Jun|Jul|Aug|Sep|Sept|Oct|Nov|Dec|Monday|Tuesday|Wednesday|Thursday|Friday|Saturday|Sunday)$/;
+
+/**
+ * A label as it reads inside a sentence ("Bar chart of crossings per day"): only a first word
+ * written with a capital and then lower-case letters ("Crossings") loses its capital; every
+ * other letter keeps its case, so "pH", "GDP", "CO2", "Q1 2023", "°C" and "May" are kept.
+ */
+export function inSentence(label: string): string {
+  const first = /^\p{L}+/u.exec(label)?.[0] ?? '';
+  if (!/^\p{Lu}\p{Ll}+$/u.test(first) || PROPER.test(first)) return label;
+  return `${first.charAt(0).toLowerCase()}${label.slice(1)}`;
+}
+
+/**
+ * A column name as a reader sees it: underscores and dashes become spaces, camelCase is split
+ * ("fuelPerDay" → "Fuel per day"), and no letter written in capitals is lowered ("GDP", "pH",
+ * "CO2", "totalGDP" → "Total GDP"). The first word gets a capital when it is all lower-case
+ * letters ("rain_mm" → "Rain mm"); a name of one short word of letters ("sku", "hut") is kept as
+ * written, since it may be an abbreviation that a capital would mangle ("Sku").
+ */
+export function readableName(name: string): string {
+  const spaced = name
+    .replace(/[_\-]+/g, ' ')
+    // A capital after two lower-case letters starts a camelCase word ("loanCount"), but not in "iPhone".
+    .replace(/(?<=\p{Ll}{2})(\p{Lu}\p{Ll})/gu, (b: string) => ` ${b.toLowerCase()}`)
+    .replace(/(\p{Ll})(\p{Lu}{2,})/gu, '$1 $2')
+    .replace(/\s+/g, ' ')
+    .trim();
+  if (/^\p{Ll}{1,3}$/u.test(spaced)) return spaced;
+  const first = /^\S+/.exec(spaced)?.[0] ?? '';
+  return /^\p{Ll}+$/u.test(first) ? spaced.charAt(0).toUpperCase() + spaced.slice(1) : spaced;
+}

@@ -13,6 +13,7 @@ import { idMaker } from '../scene/ids.js';
 import type { Table } from '../table/types.js';
 import { barNotes } from './bar-text.js';
 import type { Planned, PlanInput } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** How bars are laid out and ordered. */
 export interface BarPlan {
@@ -58,7 +59,7 @@ function repeatsOf(input: PlanInput, key: Field, value: Field | undefined, group
 function checkCombining(input: PlanInput, key: Field, value: Field | undefined, combined: Combined | undefined): Diagnostic[] {
   const { brief } = input;
   if (!combined || !value) return [];
-  const rows = `${combined.keys} ${key.label.toLowerCase()} value${combined.keys === 1 ? ' has' : 's have'} several rows (up to ${combined.most})`;
+  const rows = `${combined.keys} ${inSentence(key.label)} value${combined.keys === 1 ? ' has' : 's have'} several rows (up to ${combined.most})`;
   if (brief.aggregate === 'sum' && !value.additive) {
     return [diagnostic('choice.sum-not-additive', `${rows}, and \`${value.name}\`${value.unit ? ` in ${value.unit}` : ''} does not add up: a sum of it means nothing`, {
       path: brief.aggregateStated ? '/aggregate' : `/fields/${value.name}`, field: value.name, found: 'aggregate: sum', expected: 'mean, max or min',
@@ -193,7 +194,7 @@ export function planBar(input: PlanInput, opts: { totals?: boolean } = {}): Outc
   // Small multiples divide the frame among panels, which are measured by the facet layout.
   const grown = orientation.vertical || key.type === 'temporal' || key.type === 'quantitative' || brief.facet || opts.totals ? {} : grownFrame(input, key, value, notes);
   if (grown.decision) decisions.push(grown.decision);
-  if (combined && value) decisions.push({ decision: `rows with the same ${key.label.toLowerCase()} ${AGGREGATORS[brief.aggregate].verb}`, rule: brief.aggregateStated ? 'the brief asks for it (`aggregate:`)' : 'sum is the default for rows sharing a key; the note and the axis title say so' });
+  if (combined && value) decisions.push({ decision: `rows with the same ${inSentence(key.label)} ${AGGREGATORS[brief.aggregate].verb}`, rule: brief.aggregateStated ? 'the brief asks for it (`aggregate:`)' : 'sum is the default for rows sharing a key; the note and the axis title say so' });
   else if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });
   return success({
     plan: { key: refOf(key), value: value && refOf(value), orientation: orientation.vertical ? 'vertical' : 'horizontal', order, aggregate: brief.aggregate, aggregateStated: brief.aggregateStated, noData: grouped.noValue, ...(combined ? { combined } : {}) },

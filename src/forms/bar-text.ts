@@ -3,13 +3,14 @@ import { AGGREGATORS } from '../derive/aggregate.js';
 import { capText } from '../layout/text.js';
 import { summaryOf, type BarQuery, type DerivedBars, type FoldSummary } from '../derive/bars.js';
 import { axisTitle } from '../layout/axis.js';
+import { inSentence } from '../fields/labels.js';
 
 /** The value axis title of a bar chart. */
 export function barValueTitle(query: BarQuery): string {
   const { value, aggregate } = query;
   if (!value) return 'Number of rows';
   const title = axisTitle(value, value.label);
-  const lower = `${title.charAt(0).toLowerCase()}${title.slice(1)}`;
+  const lower = inSentence(title);
   if (aggregate === 'mean') return `Mean ${lower}`;
   // Only a combination that happened is named: one row per key is its own value.
   if (!query.combined) return title;
@@ -26,7 +27,7 @@ export function barNotes(query: BarQuery, fold: FoldSummary | undefined, valueTi
 function combineNote(query: BarQuery): string[] {
   const { combined, value, aggregate } = query;
   if (!combined || !value) return [];
-  const key = query.key.label.toLowerCase();
+  const key = inSentence(query.key.label);
   const verb = AGGREGATORS[aggregate].verb;
   return [combined.every ? `${combined.most} rows per ${key} were ${verb}.` : `Rows sharing a ${key} were ${verb} (${combined.keys} ${key} values had several rows, up to ${combined.most}).`];
 }
@@ -37,15 +38,15 @@ function noDataNote(query: BarQuery): string[] {
   if (names.length === 0) return [];
   const shown = names.slice(0, NO_DATA_NAMES).map((n) => capText(n, 40));
   const more = names.length - shown.length;
-  return [`No data: ${shown.join(', ')}${more > 0 ? ` and ${more} more ${query.key.label.toLowerCase()} values` : ''}.`];
+  return [`No data: ${shown.join(', ')}${more > 0 ? ` and ${more} more ${inSentence(query.key.label)} values` : ''}.`];
 }
 
 /** The note printed under a folded chart, saying what "Others" holds or what was left out. */
 export function foldNote(query: BarQuery, fold: FoldSummary | undefined, valueTitle: string, fmt: (n: number) => string): string[] {
   if (!fold) return [];
   const n = format(',d')(fold.count);
-  const key = query.key.label.toLowerCase();
-  const value = valueTitle.toLowerCase();
+  const key = inSentence(query.key.label);
+  const value = inSentence(valueTitle);
   // With negative values, the keys folded are those closest to zero, not the smallest.
   const which = fold.nearZero ? `${value} closest to zero` : `smallest ${value}`;
   if (fold.mode === 'others') return [`"Others (${n})" is the total of the ${n} ${key} values with the ${which}.`];
@@ -64,10 +65,15 @@ export function foldOf(derived: DerivedBars): FoldSummary | undefined {
 export function barDescription(derived: DerivedBars, valueTitle: string, fmt: (n: number) => string): string {
   const bars = derived.bars.filter((b) => b.folds === undefined);
   const count = `${derived.bars.length} bar${derived.bars.length === 1 ? '' : 's'}`;
-  const what = `Bar chart of ${valueTitle.toLowerCase()} by ${derived.query.key.label.toLowerCase()}, ${count}`;
+  const what = `Bar chart of ${inSentence(valueTitle)} by ${inSentence(derived.query.key.label)}, ${count}`;
   if (bars.length === 0) return `${what}.`;
   const top = bars.reduce((a, b) => (b.value > a.value ? b : a));
   const low = bars.reduce((a, b) => (b.value < a.value ? b : a));
   if (top === low) return `${what}: ${top.label} ${fmt(top.value)}.`;
   return `${what}: largest ${top.label} (${fmt(top.value)}), smallest ${low.label} (${fmt(low.value)}).`;
+}
+
+/** A mark's tooltip from (label, text) pairs: "Pier: North, Crossings (per day): 212". */
+export function tooltipText(pairs: ReadonlyArray<readonly [string, string]>): string {
+  return pairs.map(([label, text]) => `${label}: ${text}`).join(', ');
 }

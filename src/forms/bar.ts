@@ -9,9 +9,10 @@ import { MAX_LABEL_SHARE } from '../layout/plot-box.js';
 import { asBand, asLinear, type BandScale, type LinearScale } from '../layout/scales.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
-import { barDescription, barNotes, barValueTitle, foldOf } from './bar-text.js';
+import { barDescription, barNotes, barValueTitle, foldOf, tooltipText } from './bar-text.js';
 import { barGroups, planBar, readableBand, type BarPlan } from './bar-plan.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** The narrowest bar band drawn, in px; more bars than fit at this step are folded. */
 export const MIN_BAND_PX = 3;
@@ -110,9 +111,10 @@ function barRect(derived: DerivedBars<BarPlan>, bar: BarDatum, area: PlotArea, c
   const fill = bar.folds !== undefined ? palette.others : bar.value < 0 ? palette.negative : palette.primary;
   const id = ctx.id('bar', bar.label);
   const datum = barDatum(derived, bar);
+  const tooltip = tooltipText([[derived.query.key.label, bar.label], [barValueTitle(derived.query), valueTexts(derived, ctx).get(bar)!]]);
   return vertical
-    ? { kind: 'rect', id, role: 'bar', datum, x: b0, y: low, width: thickness, height: length, fill }
-    : { kind: 'rect', id, role: 'bar', datum, x: low, y: b0, width: length, height: thickness, fill };
+    ? { kind: 'rect', id, role: 'bar', datum, tooltip, x: b0, y: low, width: thickness, height: length, fill }
+    : { kind: 'rect', id, role: 'bar', datum, tooltip, x: low, y: b0, width: length, height: thickness, fill };
 }
 
 /** A bar's value label just beyond its end: above or below upright bars, right or left of lying ones. */
@@ -156,7 +158,7 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
     const valueTitle = barValueTitle(derived.query);
     const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value);
     return {
-      title: `${valueTitle} by ${derived.query.key.label.toLowerCase()}`,
+      title: `${valueTitle} by ${inSentence(derived.query.key.label)}`,
       description: barDescription(derived, valueTitle, fmt),
       notes: barNotes(derived.query, foldOf(derived), valueTitle, valueFormatter([derived.foldedTotal ?? 0, ...(derived.foldedRange ?? [])], derived.query.value)),
     };

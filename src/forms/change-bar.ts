@@ -9,6 +9,7 @@ import type { SceneNode } from '../scene/types.js';
 import { lineDecisions, type LinePlan } from './line-plan.js';
 import { keyName } from './line-text.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** The narrowest bar drawn, px (as for the bar chart). */
 const MIN_BAND_PX = 3;
@@ -81,7 +82,7 @@ export const CHANGE_BAR: FormDef<LinePlan, DerivedChanges> = {
   words(d) {
     const fmt = valueFormatter(d.changes.map((c) => c.change));
     const last = d.changes[d.changes.length - 1];
-    const description = `Bar chart of ${title(d).toLowerCase()}, ${d.changes.length} bars${last ? `; the last, ${last.label}, ${fmt(last.change)} %` : ''}.`;
+    const description = `Bar chart of ${inSentence(title(d))}, ${d.changes.length} bars${last ? `; the last, ${last.label}, ${fmt(last.change)} %` : ''}.`;
     return { title: title(d), description, notes: [] };
   },
 };

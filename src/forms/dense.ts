@@ -12,6 +12,7 @@ import type { Table } from '../table/types.js';
 import { denseItems, planDense, type DensePlan } from './dense-plan.js';
 import { classLegend } from './colour-classes.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** A dense layout's items in drawing order, and the grid they fill. */
 export interface DerivedDense {
@@ -25,8 +26,8 @@ export interface DerivedDense {
 const legendOf = (d: Pick<DerivedDense, 'query'>): LegendSpec => classLegend(d.query.value, d.query.classes);
 
 function countNote(plan: DensePlan, n: number): string {
-  const what = plan.key ? `${plan.key.label.toLowerCase()} values` : 'rows';
-  const order = plan.order === 'value' ? 'in value order, largest first' : plan.order === 'key' ? `in ${plan.key!.label.toLowerCase()} order` : plan.order === 'label' ? 'in label order' : 'in data order';
+  const what = plan.key ? `${inSentence(plan.key.label)} values` : 'rows';
+  const order = plan.order === 'value' ? 'in value order, largest first' : plan.order === 'key' ? `in ${inSentence(plan.key!.label)} order` : plan.order === 'label' ? 'in label order' : 'in data order';
   return `${format(',')(n)} ${what}, one square cell each, ${order}, read left to right in rows from the top.`;
 }
 
@@ -67,8 +68,8 @@ export const DENSE: FormDef<DensePlan, DerivedDense> = {
     let [lo, hi] = [0, 0];
     for (let i = 1; i < n; i++) { if (d.values[i]! < d.values[lo]!) lo = i; if (d.values[i]! > d.values[hi]!) hi = i; }
     return {
-      title: `${value} of ${format(',')(n)} ${d.query.key ? d.query.key.label.toLowerCase() : 'items'}`,
-      description: `Dense pixel layout of ${value.toLowerCase()} for ${format(',')(n)} items, one cell each, from ${fmt(d.values[lo]!)} to ${fmt(d.values[hi]!)}, coloured in ${d.query.classes.classes.length} classes.`,
+      title: `${value} of ${format(',')(n)} ${d.query.key ? inSentence(d.query.key.label) : 'items'}`,
+      description: `Dense pixel layout of ${inSentence(value)} for ${format(',')(n)} items, one cell each, from ${fmt(d.values[lo]!)} to ${fmt(d.values[hi]!)}, coloured in ${d.query.classes.classes.length} classes.`,
       notes: [countNote(d.query, n)],
     };
   },

@@ -10,6 +10,7 @@ import type { BarPlan } from './bar-plan.js';
 import { deriveShares, planShares, type ShareBars } from './share-bars.js';
 import { percentText } from './stack-text.js';
 import type { FormDef, Planned, PlanInput } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** The hole's radius as a share of the outer radius (common practice: a ring thin enough to read as arcs, thick enough to hold a label). */
 const HOLE = 0.58;
@@ -85,7 +86,7 @@ export const DONUT: FormDef<BarPlan, ShareBars> = {
   legend,
   layoutBody: layoutDonut,
   words(derived) {
-    const name = derived.query.key.label.toLowerCase();
+    const name = inSentence(derived.query.key.label);
     const parts = derived.bars.map((b) => `${b.label} ${percentText(b.value)}`).join(', ');
     return { title: `${derived.query.value!.label} by ${name}`, description: `Donut chart of the ${derived.bars.length} parts of the whole by ${name}: ${parts}.`, notes: [] };
   },

@@ -10,6 +10,7 @@ import type { Datum, SceneNode } from '../scene/types.js';
 import type { Table } from '../table/types.js';
 import { planDot, type DotPlan } from './dot-plan.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** Radius of a dot, px (common practice for dot plots: a clear dot, well inside its row). */
 export const DOT_RADIUS = 4;
@@ -100,10 +101,10 @@ export const DOT: FormDef<DotPlan, DerivedDots> = {
   words(derived) {
     const { plan, rows } = derived;
     const fmt = valueFormatter(rows.flatMap((r) => r.values), plan.values[0]!.format);
-    const what = `${plan.values.length === 2 ? 'Dumbbell' : 'Dot'} plot of ${valueTitle(plan).toLowerCase()} by ${plan.key.label.toLowerCase()}, ${rows.length} key${rows.length === 1 ? '' : 's'}`;
+    const what = `${plan.values.length === 2 ? 'Dumbbell' : 'Dot'} plot of ${inSentence(valueTitle(plan))} by ${inSentence(plan.key.label)}, ${rows.length} key${rows.length === 1 ? '' : 's'}`;
     const top = rows[0]!;
     return {
-      title: `${valueTitle(plan)} by ${plan.key.label.toLowerCase()}`,
+      title: `${valueTitle(plan)} by ${inSentence(plan.key.label)}`,
       description: `${what}; first ${top.label} (${top.values.map(fmt).join(' to ')}).`,
       notes: [],
     };

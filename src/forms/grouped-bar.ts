@@ -6,9 +6,10 @@ import { valueFormatter } from '../layout/number-format.js';
 import { asBand, asLinear } from '../layout/scales.js';
 import type { SceneNode } from '../scene/types.js';
 import { MIN_BAND_PX } from './bar.js';
-import { barValueTitle } from './bar-text.js';
+import { barValueTitle, tooltipText } from './bar-text.js';
 import { planGroupedBar, type GroupedBarPlan } from './grouped-bar-plan.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 type Derived = DerivedGroupedBars<GroupedBarPlan>;
 
@@ -34,7 +35,7 @@ function capacity(plan: GroupedBarPlan, keys: string[], ctx: LayoutContext): num
 }
 
 /** One bar from zero to its value, in its group's slot of its key's band. */
-function barRect(derived: Derived, bar: GroupedBar, area: PlotArea, ctx: LayoutContext): SceneNode {
+function barRect(derived: Derived, bar: GroupedBar, area: PlotArea, ctx: LayoutContext, fmt: (n: number) => string): SceneNode {
   const plan = derived.query;
   const vertical = plan.orientation === 'vertical';
   const [band, value] = vertical ? [asBand(area.x), asLinear(area.y)] : [asBand(area.y), asLinear(area.x)];
@@ -46,16 +47,17 @@ function barRect(derived: Derived, bar: GroupedBar, area: PlotArea, ctx: LayoutC
   const id = ctx.id('bar', `${bar.key} ${bar.group}`);
   const datum = { [plan.key.name]: bar.key, [plan.group.name]: bar.group, [derived.valueName]: bar.value };
   const fill = plan.colours[slot]!;
+  const tooltip = tooltipText([[plan.key.label, bar.key], [plan.group.label, bar.group], [barValueTitle(plan), fmt(bar.value)]]);
   return vertical
-    ? { kind: 'rect', id, role: 'bar', datum, x: b0, y: low, width: thickness, height: length, fill }
-    : { kind: 'rect', id, role: 'bar', datum, x: low, y: b0, width: length, height: thickness, fill };
+    ? { kind: 'rect', id, role: 'bar', datum, tooltip, x: b0, y: low, width: thickness, height: length, fill }
+    : { kind: 'rect', id, role: 'bar', datum, tooltip, x: low, y: b0, width: length, height: thickness, fill };
 }
 
 /** One sentence for screen readers: what is compared, how many keys and groups, and the largest bar. */
 function describe(derived: Derived): string {
   const plan = derived.query;
   const fmt = valueFormatter(derived.bars.map((b) => b.value), plan.value?.format);
-  const what = `Grouped bar chart of ${barValueTitle(plan).toLowerCase()} by ${plan.key.label.toLowerCase()} and ${plan.group.label.toLowerCase()}, ${derived.keys.length} keys × ${plan.groups.length} groups`;
+  const what = `Grouped bar chart of ${inSentence(barValueTitle(plan))} by ${inSentence(plan.key.label)} and ${inSentence(plan.group.label)}, ${derived.keys.length} keys × ${plan.groups.length} groups`;
   const top = derived.bars.reduce<GroupedBar | undefined>((a, b) => (!a || b.value > a.value ? b : a), undefined);
   return top ? `${what}: largest ${top.key}, ${top.group} (${fmt(top.value)}).` : `${what}.`;
 }
@@ -74,10 +76,11 @@ export const GROUPED_BAR: FormDef<GroupedBarPlan, Derived> = {
   domains: (derived) => domainsOf(derived.query, derived.keys, extentOf(derived.bars)),
   facets: { noun: 'total', value: (derived) => fsum(derived.bars, (b) => b.value), minBand: (derived) => derived.query.groups.length * MIN_BAND_PX },
   layout(derived, area, ctx) {
-    return { marks: derived.bars.map((bar) => barRect(derived, bar, area, ctx)), labels: [], diagnostics: [] };
+    const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format);
+    return { marks: derived.bars.map((bar) => barRect(derived, bar, area, ctx, fmt)), labels: [], diagnostics: [] };
   },
   words(derived) {
     const plan = derived.query;
-    return { title: `${barValueTitle(plan)} by ${plan.key.label.toLowerCase()} and ${plan.group.label.toLowerCase()}`, description: describe(derived), notes: [] };
+    return { title: `${barValueTitle(plan)} by ${inSentence(plan.key.label)} and ${inSentence(plan.group.label)}`, description: describe(derived), notes: [] };
   },
 };

@@ -12,6 +12,7 @@ import type { Decision } from '../choose/types.js';
 import type { SceneNode } from '../scene/types.js';
 import { planGroups, type GroupsPlan } from './distribution-plan.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** The numbers a strip or box chart draws: each group's sorted values and box numbers, in order. */
 export interface DerivedGroups {
@@ -61,10 +62,10 @@ export function groupWords(d: DerivedGroups, noun: string, how: string): FormWor
   const unit = value.unit ? ` ${value.unit}` : '';
   const byMedian = [...d.groups].sort((a, b) => b.stats.median - a.stats.median);
   const [top, low] = [byMedian[0]!, byMedian[byMedian.length - 1]!];
-  const what = `${noun} of ${value.label.toLowerCase()} by ${key.label.toLowerCase()}: ${d.groups.length} group${d.groups.length === 1 ? '' : 's'}, ${count(d.n)} values`;
+  const what = `${noun} of ${inSentence(value.label)} by ${inSentence(key.label)}: ${d.groups.length} group${d.groups.length === 1 ? '' : 's'}, ${count(d.n)} values`;
   const extremes = top === low ? `median ${fmt(top.stats.median)}${unit}` : `highest median ${top.label} (${fmt(top.stats.median)}${unit}), lowest ${low.label} (${fmt(low.stats.median)}${unit})`;
   const notes = [how, ...(d.missing ? [`${count(d.missing)} row${d.missing === 1 ? '' : 's'} with a missing key or a missing or non-finite value ${d.missing === 1 ? 'is' : 'are'} not drawn.`] : [])];
-  return { title: `${value.label} by ${key.label.toLowerCase()}`, description: `${what}; ${extremes}.`, notes };
+  return { title: `${value.label} by ${inSentence(key.label)}`, description: `${what}; ${extremes}.`, notes };
 }
 
 /** What sets one chart of a value by group apart: its names, its marks per group, and how to read them. */

@@ -14,6 +14,7 @@ import { dendrogramPaths, rasterCells, vectorCells } from './heatmap-marks.js';
 import { matrixOf, planHeatmap, type HeatmapPlan } from './heatmap-plan.js';
 import { classLegend } from './colour-classes.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 const byCodePoint = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
 
@@ -85,8 +86,8 @@ export const HEATMAP: FormDef<HeatmapPlan, DerivedHeatmap> = {
     const [nr, nc] = [d.matrix.rows.length, d.matrix.columns.length];
     const how = d.rowTree && d.columnTree ? 'rows and columns clustered by similarity' : d.rowTree ? 'rows clustered by similarity' : d.columnTree ? 'columns clustered by similarity' : `rows and columns in ${d.query.order === 'cluster' ? 'their keys\'' : d.query.order} order`;
     return {
-      title: `${value} by ${d.query.rows.label.toLowerCase()} and ${d.query.columns.label.toLowerCase()}`,
-      description: `Heat map of ${value.toLowerCase()}: ${nr} ${d.query.rows.label.toLowerCase()} rows by ${nc} ${d.query.columns.label.toLowerCase()} columns, ${how}, coloured in ${d.query.classes.classes.length} classes.`,
+      title: `${value} by ${inSentence(d.query.rows.label)} and ${inSentence(d.query.columns.label)}`,
+      description: `Heat map of ${inSentence(value)}: ${nr} ${inSentence(d.query.rows.label)} rows by ${nc} ${inSentence(d.query.columns.label)} columns, ${how}, coloured in ${d.query.classes.classes.length} classes.`,
       notes: layoutOf(d, ctx).notes,
     };
   },

@@ -9,6 +9,7 @@ import { asLinear } from '../layout/scales.js';
 import type { SceneNode } from '../scene/types.js';
 import { histogramBins, histogramValues, planHistogram, type HistogramPlan } from './histogram-plan.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** The numbers a histogram draws: its bins, how many values they hold, and how many were left out. */
 export interface DerivedHistogram {
@@ -46,7 +47,7 @@ function missingWarnings(diagnostics: readonly Diagnostic[], missing: number, n:
 
 function words(d: DerivedHistogram): FormWords {
   const value = d.query.value;
-  const label = value.label.toLowerCase();
+  const label = inSentence(value.label);
   const fmt = valueFormatter([d.bins.width, ...d.bins.edges], value.format);
   const { edges, counts } = d.bins;
   const top = counts.indexOf(max(counts) ?? 0);

@@ -1,5 +1,5 @@
 import type { DerivedLines } from '../derive/lines.js';
-import { keyText } from '../fields/labels.js';
+import { keyText, inSentence } from '../fields/labels.js';
 import type { CartesianForm } from '../layout/compose.js';
 import { plotFor } from '../layout/compose.js';
 import { memoized, type CartesianDomains, type Channel, type FormWords, type LayoutContext, type PlotArea } from '../layout/kit-types.js';
@@ -125,7 +125,7 @@ export function lineChart<D extends DerivedLines>(name: string, view: LineView<D
     words(derived): FormWords {
       const title = view.valueTitle(derived);
       const fmt = valueFormatter(derived.series.flatMap((s) => { const i = lastPresent(s); return i === undefined ? [] : [s.ys[i]!]; }), derived.query.value?.format);
-      return { title: `${title} by ${derived.query.key.label.toLowerCase()}`, description: lineDescription(derived, view.noun, title, fmt), notes: view.notes?.(derived) ?? [] };
+      return { title: `${title} by ${inSentence(derived.query.key.label)}`, description: lineDescription(derived, view.noun, title, fmt), notes: view.notes?.(derived) ?? [] };
     },
   };
 }

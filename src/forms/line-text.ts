@@ -1,5 +1,5 @@
 import type { DerivedLines, LineQuery, LineSeries } from '../derive/lines.js';
-import { formatDate, quarterName } from '../fields/labels.js';
+import { formatDate, inSentence, quarterName } from '../fields/labels.js';
 import { axisTitle } from '../layout/axis.js';
 
 /** The value axis title of a line chart. */
@@ -7,7 +7,7 @@ export function lineValueTitle(query: LineQuery): string {
   const { value, aggregate } = query;
   if (!value) return 'Number of rows';
   const title = axisTitle(value, value.label);
-  return aggregate === 'mean' ? `Mean ${title.charAt(0).toLowerCase()}${title.slice(1)}` : title;
+  return aggregate === 'mean' ? `Mean ${inSentence(title)}` : title;
 }
 
 /** A key position as a reader names it: a date at the data's grain, a number, or the ordinal level. */
@@ -29,7 +29,7 @@ export function lastPresent(s: LineSeries): number | undefined {
 /** One or two sentences for screen readers: what is traced over what, its span, and where each line ends. */
 export function lineDescription(derived: DerivedLines, noun: string, valueTitle: string, fmt: (n: number) => string): string {
   const [from, to] = derived.keyExtent;
-  const what = `${noun} of ${valueTitle.toLowerCase()} by ${derived.query.key.label.toLowerCase()}, ${keyName(derived, from)} to ${keyName(derived, to)}`;
+  const what = `${noun} of ${inSentence(valueTitle)} by ${inSentence(derived.query.key.label)}, ${keyName(derived, from)} to ${keyName(derived, to)}`;
   const ends = derived.series.flatMap((s) => {
     const i = lastPresent(s);
     return i === undefined ? [] : [`${s.label === undefined ? '' : `${s.label} `}${fmt(s.ys[i]!)} at ${keyName(derived, s.xs[i]!)}`];

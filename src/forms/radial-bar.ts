@@ -2,16 +2,17 @@ import { max } from 'd3-array';
 import { deriveBars, type BarDatum, type DerivedBars } from '../derive/bars.js';
 import { cycleAngles, radialBarRadius } from '../derive/radial.js';
 import type { ValueTicks } from '../layout/axis.js';
-import { ticksFor, type LayoutContext } from '../layout/kit-types.js';
+import { memoized, ticksFor, type LayoutContext } from '../layout/kit-types.js';
 import { valueFormatter } from '../layout/number-format.js';
 import { polarPoint, ringCommands, sectorCommands } from '../layout/polar.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { BodyMarks } from '../layout/chart.js';
 import type { Box, SceneNode, TextNode } from '../scene/types.js';
-import { barValueTitle } from './bar-text.js';
+import { barValueTitle, tooltipText } from './bar-text.js';
 import { barGroups } from './bar-plan.js';
 import { planRadialBar, type RadialBarPlan } from './radial-bar-plan.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** Inner ring radius as a share of the outer: keeps the narrow inner ends of short bars apart (common practice). */
 export const INNER_RING_SHARE = 0.25;
@@ -91,9 +92,15 @@ function sectorOf(derived: DerivedBars<RadialBarPlan>, bar: BarDatum, angle: num
   return { from: angle - half, to: angle + half, inner, outer: radialBarRadius(bar.value, top, inner, c.outer) };
 }
 
+/** A bar's tooltip: the key and value by their labels, the value in the chart's number format (formatter made once per chart). */
+function radialTooltip(derived: DerivedBars<RadialBarPlan>, bar: BarDatum, ctx: LayoutContext): string {
+  const fmt = memoized(ctx, 'radial-bar\u0000format', () => valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format));
+  return tooltipText([[derived.query.key.label, bar.label], [barValueTitle(derived.query), fmt(bar.value)]]);
+}
+
 function radialBar(derived: DerivedBars<RadialBarPlan>, bar: BarDatum, angle: number, s: Sector, c: Circle, ctx: LayoutContext): SceneNode {
   return {
-    kind: 'path', id: ctx.id('bar', bar.label), role: 'bar', datum: { [derived.query.key.name]: bar.label, [derived.valueName]: bar.value },
+    kind: 'path', id: ctx.id('bar', bar.label), role: 'bar', datum: { [derived.query.key.name]: bar.label, [derived.valueName]: bar.value }, tooltip: radialTooltip(derived, bar, ctx),
     commands: sectorCommands(c.cx, c.cy, s.inner, s.outer, s.from, s.to), fill: ctx.style.palette.primary, angle, radius: s.outer,
   };
 }
@@ -136,10 +143,10 @@ export const RADIAL_BAR: FormDef<RadialBarPlan, DerivedBars<RadialBarPlan>> = {
     const valueTitle = barValueTitle(derived.query);
     const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format);
     const n = derived.bars.length;
-    const what = `Radial bar chart of ${valueTitle.toLowerCase()} by ${derived.query.key.label.toLowerCase()}, ${n} bar${n === 1 ? '' : 's'} around a circle in cycle order`;
+    const what = `Radial bar chart of ${inSentence(valueTitle)} by ${inSentence(derived.query.key.label)}, ${n} bar${n === 1 ? '' : 's'} around a circle in cycle order`;
     const top = derived.bars.reduce<BarDatum | undefined>((a, b) => (a === undefined || b.value > a.value ? b : a), undefined);
     const low = derived.bars.reduce<BarDatum | undefined>((a, b) => (a === undefined || b.value < a.value ? b : a), undefined);
     const description = top && low && top !== low ? `${what}: largest ${top.label} (${fmt(top.value)}), smallest ${low.label} (${fmt(low.value)}).` : `${what}.`;
-    return { title: `${valueTitle} by ${derived.query.key.label.toLowerCase()}`, description, notes: [] };
+    return { title: `${valueTitle} by ${inSentence(derived.query.key.label)}`, description, notes: [] };
   },
 };

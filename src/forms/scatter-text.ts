@@ -2,6 +2,7 @@ import { format } from 'd3-format';
 import { axisTitle } from '../layout/axis.js';
 import type { FormWords } from '../layout/kit-types.js';
 import type { DerivedScatter } from './scatter-derive.js';
+import { inSentence } from '../fields/labels.js';
 
 const count = format(',d');
 
@@ -14,7 +15,7 @@ export function rText(r: number): string {
 function notes(derived: DerivedScatter): string[] {
   const { plan, fit } = derived;
   const out: string[] = [];
-  if (fit) out.push(`Line: least-squares fit of ${plan.y.label.toLowerCase()} on ${plan.x.label.toLowerCase()}; Pearson ${rText(fit.r)}, n = ${count(fit.n)}.`);
+  if (fit) out.push(`Line: least-squares fit of ${inSentence(plan.y.label)} on ${inSentence(plan.x.label)}; Pearson ${rText(fit.r)}, n = ${count(fit.n)}.`);
   if (derived.bins) out.push(`${count(derived.points.length)} points are binned into hexagons, each coloured by how many points fall in it.`);
   if (derived.leftOut > 0) out.push(`${count(derived.leftOut)} row${derived.leftOut === 1 ? ' is' : 's are'} left out for missing values.`);
   return out;
@@ -24,13 +25,13 @@ function notes(derived: DerivedScatter): string[] {
 export function scatterWords(derived: DerivedScatter): FormWords {
   const { plan, fit } = derived;
   const [x, y] = [axisTitle(plan.x, plan.x.label), axisTitle(plan.y, plan.y.label)];
-  const coded = [plan.color && `coloured by ${plan.color.label.toLowerCase()}`, plan.shape && `shaped by ${plan.shape.label.toLowerCase()}`, plan.area && `circle area shows ${plan.area.label.toLowerCase()}`].filter(Boolean);
+  const coded = [plan.color && `coloured by ${inSentence(plan.color.label)}`, plan.shape && `shaped by ${inSentence(plan.shape.label)}`, plan.area && `circle area shows ${inSentence(plan.area.label)}`].filter(Boolean);
   const what = derived.bins ? `Binned density of ${count(derived.points.length)} points` : `Scatter plot of ${count(derived.points.length)} points`;
   const codings = coded.length && !derived.bins ? `, ${coded.join(', ')}` : '';
   const line = fit ? `; least-squares line, ${rText(fit.r)}` : '';
   return {
-    title: `${plan.y.label} against ${plan.x.label.toLowerCase()}`,
-    description: `${what}: ${y.toLowerCase()} against ${x.toLowerCase()}${codings}${line}.`,
+    title: `${plan.y.label} against ${inSentence(plan.x.label)}`,
+    description: `${what}: ${inSentence(y)} against ${inSentence(x)}${codings}${line}.`,
     notes: notes(derived),
   };
 }

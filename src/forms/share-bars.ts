@@ -9,6 +9,7 @@ import type { Table } from '../table/types.js';
 import { BAR } from './bar.js';
 import type { BarPlan } from './bar-plan.js';
 import type { FormCore, Planned, PlanInput } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 /** The bar form as drawn on a left and a bottom axis (what the share bars reuse). */
 export const BARS: FormCore<BarPlan, DerivedBars<BarPlan>> & CartesianForm<DerivedBars<BarPlan>> = (() => {
@@ -65,7 +66,7 @@ export function deriveShares(table: Table, plan: BarPlan, ctx: LayoutContext): O
     return failure([...derived.diagnostics, diagnostic('derive.whole-is-zero', `the values sum to ${total}, so no share of the whole can be drawn`, { field: plan.value?.name ?? 'count', hint: 'check the value column' })]);
   }
   const value = plan.value ?? { name: 'count', label: 'Rows', type: 'quantitative' as const, unit: undefined, format: undefined, levels: [] };
-  const name = value.label.charAt(0).toLowerCase() + value.label.slice(1);
+  const name = inSentence(value.label);
   const query: BarPlan = { ...plan, value: { ...value, name: 'share', label: `Share of ${name}`, unit: '%', format: '.0%' } };
   return success({
     ...bars, query, valueName: 'share', total, sourceName: plan.value?.name ?? 'count',

@@ -3,6 +3,7 @@ import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../
 import type { SlopeQuery } from '../derive/slopes.js';
 import { isOrdered, refOf, type Field } from '../fields/types.js';
 import type { Planned, PlanInput } from './types.js';
+import { count } from '../diagnostics/words.js';
 
 /** Items beyond which a slope chart becomes a tangle of crossing lines (common practice: "dozens at most"). */
 export const MAX_SLOPE_ITEMS = 40;
@@ -58,8 +59,8 @@ function unfit(input: PlanInput): Diagnostic | undefined {
   }
   const fits = keys.length === 2 ? values.length >= 1 && values.length <= 2 : keys.length === 1 && values.length >= 2 && values.length <= 3;
   if (fits) return undefined;
-  return diagnostic('choice.slope-shape', `a slope chart needs items measured at two points, but the brief gives ${keys.length} key(s) and ${values.length} value(s)`, {
-    path: '/values', found: `${keys.length} key(s), ${values.length} value(s)`, expected: 'keys: [item, period] with one value, or keys: item with values: [before, after]',
+  return diagnostic('choice.slope-shape', `a slope chart needs items measured at two points, but the brief gives ${count(keys.length, 'key')} and ${count(values.length, 'value')}`, {
+    path: '/values', found: `${count(keys.length, 'key')}, ${count(values.length, 'value')}`, expected: 'keys: [item, period] with one value, or keys: item with values: [before, after]',
     hint: 'use `intent: shift` with `keys: [item, period]`, or `values: [before, after]`',
   });
 }

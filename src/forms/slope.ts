@@ -10,6 +10,7 @@ import { endLabels, type EndSpec } from './slope-labels.js';
 import { planSlope, type SlopePlan } from './slope-plan.js';
 import type { FormDef } from './types.js';
 import { withPlan } from './with-plan.js';
+import { inSentence } from '../fields/labels.js';
 
 /** What a slope chart draws: its items, the names of its two ends, and its plan. */
 export interface DerivedSlope {
@@ -41,7 +42,7 @@ function colourOf(direction: Direction, ctx: LayoutContext): string {
 /** The shared axis's title: the value (period key), or both columns, with the unit they share. */
 function valueTitle(q: SlopeQuery): string {
   const value = valueField(q);
-  const label = q.source.kind === 'periods' ? value.label : `${q.source.before.label} and ${q.source.after.label.toLowerCase()}`;
+  const label = q.source.kind === 'periods' ? value.label : `${q.source.before.label} and ${inSentence(q.source.after.label)}`;
   return axisTitle({ ...value, label }, label);
 }
 
@@ -119,11 +120,11 @@ function words(d: DerivedSlope) {
   if (q.width) {
     const fmt = valueFormatter(d.items.map((i) => i.width ?? 0), q.width.format);
     const unit = q.width.unit ? ` ${q.width.unit}` : '';
-    notes.push(`Line width shows ${q.width.label.toLowerCase()}: the thickest line is ${fmt(max(d.items, (i) => i.width ?? 0) ?? 0)}${unit}.`);
+    notes.push(`Line width shows ${inSentence(q.width.label)}: the thickest line is ${fmt(max(d.items, (i) => i.width ?? 0) ?? 0)}${unit}.`);
   }
   return {
     title: `${valueTitle(q)}: ${d.ends[0]} and ${d.ends[1]}`,
-    description: `Slope chart of ${d.items.length} items (${q.item.label.toLowerCase()}) from ${d.ends[0]} to ${d.ends[1]}: ${count('up')} went up, ${count('down')} went down and ${count('unchanged')} stayed the same.`,
+    description: `Slope chart of ${d.items.length} items (${inSentence(q.item.label)}) from ${d.ends[0]} to ${d.ends[1]}: ${count('up')} went up, ${count('down')} went down and ${count('unchanged')} stayed the same.`,
     notes,
   };
 }

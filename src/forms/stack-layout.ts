@@ -4,9 +4,11 @@ import { plotFor } from '../layout/compose.js';
 import { inkOn } from '../layout/ink.js';
 import { memoized, ticksFor, type BandChannel, type CartesianDomains, type FormMarks, type LayoutContext, type LinearChannel, type PlotArea } from '../layout/kit-types.js';
 import type { LegendSpec } from '../layout/legend.js';
+import { valueFormatter } from '../layout/number-format.js';
 import { asBand, asLinear, bandScale } from '../layout/scales.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Datum, RectNode, SceneNode, TextNode } from '../scene/types.js';
+import { tooltipText } from './bar-text.js';
 import { percentText, stackValueTitle, stackWords, type StackDerived } from './stack-text.js';
 
 /** Room kept between a label inside a segment and the segment's edges, px. */
@@ -91,8 +93,16 @@ function segmentDatum(derived: StackDerived, stack: Stack, seg: Segment): Datum 
   return datum;
 }
 
+/** A segment's tooltip: its group and part by their labels, and its value as the chart prints it (a percent on normalized stacks). */
+function segmentTooltip(derived: StackDerived): (stack: Stack, seg: Segment) => string {
+  const { query } = derived;
+  const fmt = valueFormatter(derived.stacks.flatMap((s) => s.segments.map((g) => g.value)), query.value?.format);
+  const title = stackValueTitle(derived);
+  return (stack, seg) => tooltipText([[query.group.label, stack.group], [query.part.label, seg.part], [title, query.normalized ? percentText(seg.share) : fmt(seg.value)]]);
+}
+
 /** One segment from its start to its end along the value scale, across its group's band. */
-function segmentRect(derived: StackDerived, stack: Stack, seg: Segment, area: PlotArea, fill: string, ctx: LayoutContext): RectNode {
+function segmentRect(derived: StackDerived, stack: Stack, seg: Segment, area: PlotArea, fill: string, ctx: LayoutContext, tooltip: string): RectNode {
   const vertical = derived.query.orientation === 'vertical';
   const [band, value] = vertical ? [asBand(area.x), asLinear(area.y)] : [asBand(area.y), asLinear(area.x)];
   const [a, b] = [value.map(seg.start), value.map(seg.end)];
@@ -102,8 +112,8 @@ function segmentRect(derived: StackDerived, stack: Stack, seg: Segment, area: Pl
   // No stroke between segments: a stroke in the page colour would eat into thin segments; neighbouring parts differ in colour.
   const paint = { fill };
   return vertical
-    ? { kind: 'rect', id, role: 'segment', datum, x: band.start(stack.group), y: low, width: band.bandwidth, height: length, ...paint }
-    : { kind: 'rect', id, role: 'segment', datum, x: low, y: band.start(stack.group), width: length, height: band.bandwidth, ...paint };
+    ? { kind: 'rect', id, role: 'segment', datum, tooltip, x: band.start(stack.group), y: low, width: band.bandwidth, height: length, ...paint }
+    : { kind: 'rect', id, role: 'segment', datum, tooltip, x: low, y: band.start(stack.group), width: length, height: band.bandwidth, ...paint };
 }
 
 /** A label centred in its segment, in the ink that reads best on the segment's fill; none where it does not fit. */
@@ -123,10 +133,11 @@ export function layoutStacks(derived: StackDerived, area: PlotArea, ctx: LayoutC
   const named = derived.query.normalized ? undefined : namedSegments(derived);
   const marks: SceneNode[] = [];
   const labels: TextNode[] = [];
+  const tooltip = segmentTooltip(derived);
   for (const stack of derived.stacks) {
     for (const seg of stack.segments) {
       if (seg.value === 0) continue;
-      const rect = segmentRect(derived, stack, seg, area, fills.get(seg.part)!, ctx);
+      const rect = segmentRect(derived, stack, seg, area, fills.get(seg.part)!, ctx, tooltip(stack, seg));
       marks.push(rect);
       if (named && !named.has(seg)) continue;
       const label = segmentLabel(derived, rect, labelText(derived, seg), ctx);

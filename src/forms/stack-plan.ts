@@ -8,6 +8,7 @@ import type { StackQuery } from '../derive/stacks.js';
 import { isOrdered, refOf, type Field } from '../fields/types.js';
 import { planBar, type BarPlan } from './bar-plan.js';
 import type { Planned, PlanInput } from './types.js';
+import { article } from '../diagnostics/words.js';
 
 /** How a stacked or normalized bar chart is laid out: the stack query, and upright or lying bars. */
 export interface StackPlan extends StackQuery {
@@ -22,7 +23,7 @@ function additiveOnly(input: PlanInput, normalized: boolean) {
   const { aggregate } = input.brief;
   if (AGGREGATORS[aggregate].additive) return [];
   const form = normalized ? 'normalized bar' : 'stacked bar';
-  return [diagnostic('choice.aggregate-not-additive', `a ${form} adds its parts into a whole, but \`aggregate: ${aggregate}\` gives values that do not add up`, {
+  return [diagnostic('choice.aggregate-not-additive', `${article(form)} adds its parts into a whole, but \`aggregate: ${aggregate}\` gives values that do not add up`, {
     path: '/aggregate', found: aggregate, expected: 'sum or count', hint: `use \`aggregate: sum\` (or count), or compare the ${aggregate} values as bars (intent: compare)`,
   })];
 }

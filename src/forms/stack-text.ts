@@ -3,6 +3,7 @@ import { axisTitle } from '../layout/axis.js';
 import type { FormWords } from '../layout/kit-types.js';
 import { valueFormatter } from '../layout/number-format.js';
 import type { StackPlan } from './stack-plan.js';
+import { inSentence } from '../fields/labels.js';
 
 /** The numbers a stacked or normalized bar chart draws, with its plan. */
 export type StackDerived = DerivedStacks<StackPlan>;
@@ -13,7 +14,7 @@ export function stackValueTitle(derived: StackDerived): string {
   const title = value ? axisTitle(value, value.label) : 'Number of rows';
   if (!derived.query.normalized) return title;
   const name = value ? value.label : 'rows';
-  return `Share of ${name.charAt(0).toLowerCase()}${name.slice(1)} (%)`;
+  return `Share of ${inSentence(name)} (%)`;
 }
 
 /** A share as a label: whole percents, "<1%" for a sliver that would round to nothing. */
@@ -31,8 +32,8 @@ function stackNotes(derived: StackDerived): string[] {
     notes.push(`"${other}" holds the ${folded.length} smallest parts overall: ${shown}${folded.length > 6 ? ', …' : ''}.`);
   }
   const { dropped } = derived;
-  if (dropped.length) notes.push(`Not drawn: the ${dropped.length} ${derived.query.group.label.toLowerCase()} value${dropped.length === 1 ? '' : 's'} with the smallest totals (${dropped.slice(0, 3).join(', ')}${dropped.length > 3 ? ', …' : ''}); the plot holds no more bars.`);
-  if (empty.length) notes.push(`Not drawn: ${empty.length} ${derived.query.group.label.toLowerCase()} value${empty.length === 1 ? '' : 's'} whose parts sum to zero (${empty.slice(0, 3).join(', ')}${empty.length > 3 ? ', …' : ''}).`);
+  if (dropped.length) notes.push(`Not drawn: the ${dropped.length} ${inSentence(derived.query.group.label)} value${dropped.length === 1 ? '' : 's'} with the smallest totals (${dropped.slice(0, 3).join(', ')}${dropped.length > 3 ? ', …' : ''}); the plot holds no more bars.`);
+  if (empty.length) notes.push(`Not drawn: ${empty.length} ${inSentence(derived.query.group.label)} value${empty.length === 1 ? '' : 's'} whose parts sum to zero (${empty.slice(0, 3).join(', ')}${empty.length > 3 ? ', …' : ''}).`);
   return notes;
 }
 
@@ -40,7 +41,7 @@ function stackNotes(derived: StackDerived): string[] {
 function stackDescription(derived: StackDerived): string {
   const { stacks, parts, query } = derived;
   const kind = query.normalized ? 'Normalized stacked bar chart' : 'Stacked bar chart';
-  const what = `${kind} of ${stackValueTitle(derived).toLowerCase()} by ${query.group.label.toLowerCase()} and ${query.part.label.toLowerCase()}, ${stacks.length} bar${stacks.length === 1 ? '' : 's'} of ${parts.length} part${parts.length === 1 ? '' : 's'}`;
+  const what = `${kind} of ${inSentence(stackValueTitle(derived))} by ${inSentence(query.group.label)} and ${inSentence(query.part.label)}, ${stacks.length} bar${stacks.length === 1 ? '' : 's'} of ${parts.length} part${parts.length === 1 ? '' : 's'}`;
   const first = stacks[0];
   if (!first) return `${what}.`;
   if (query.normalized) {
@@ -55,7 +56,7 @@ function stackDescription(derived: StackDerived): string {
 export function stackWords(derived: StackDerived): FormWords {
   const { query } = derived;
   return {
-    title: `${stackValueTitle(derived)} by ${query.group.label.toLowerCase()} and ${query.part.label.toLowerCase()}`,
+    title: `${stackValueTitle(derived)} by ${inSentence(query.group.label)} and ${inSentence(query.part.label)}`,
     description: stackDescription(derived),
     notes: stackNotes(derived),
   };

@@ -13,6 +13,7 @@ import { layerCommands, streamBoundaries } from './stream-geometry.js';
 import { layerLabels } from './stream-labels.js';
 import { planStream, streamGroups, type StreamPlan } from './stream-plan.js';
 import type { FormDef } from './types.js';
+import { inSentence } from '../fields/labels.js';
 
 type Derived = DerivedStream<StreamPlan>;
 
@@ -107,10 +108,10 @@ export const STREAM: FormDef<StreamPlan, Derived> = {
     const totals = derived.layers.map((l) => ({ name: l.name, total: l.values.reduce((a, b) => a + b, 0) }));
     const top = totals.reduce((a, b) => (b.total > a.total ? b : a));
     const [first, last] = [derived.keys[0]!.label, derived.keys[derived.keys.length - 1]!.label];
-    const notes = derived.emptyCells ? [`${derived.emptyCells} pair${derived.emptyCells === 1 ? '' : 's'} of ${time.label.toLowerCase()} and ${series.label.toLowerCase()} with no row ${derived.emptyCells === 1 ? 'is' : 'are'} drawn as zero thickness.`] : [];
+    const notes = derived.emptyCells ? [`${derived.emptyCells} pair${derived.emptyCells === 1 ? '' : 's'} of ${inSentence(time.label)} and ${inSentence(series.label)} with no row ${derived.emptyCells === 1 ? 'is' : 'are'} drawn as zero thickness.`] : [];
     return {
-      title: `${valueTitle} by ${series.label.toLowerCase()} over ${time.label.toLowerCase()}`,
-      description: `Streamgraph of ${valueTitle.toLowerCase()} for ${n} series of ${series.label.toLowerCase()}, from ${first} to ${last}; the largest in total is ${top.name}.`,
+      title: `${valueTitle} by ${inSentence(series.label)} over ${inSentence(time.label)}`,
+      description: `Streamgraph of ${inSentence(valueTitle)} for ${n} series of ${inSentence(series.label)}, from ${first} to ${last}; the largest in total is ${top.name}.`,
       notes,
     };
   },

@@ -1,6 +1,7 @@
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Box, SceneNode, TextNode } from '../scene/types.js';
+import { agree, count } from '../diagnostics/words.js';
 
 /** Smallest plot, in px either way, in which marks and ticks can still be read. */
 export const MIN_PLOT_PX = 40;
@@ -22,7 +23,7 @@ export function missingGlyphs(nodes: readonly SceneNode[], measure: TextMeasurer
   for (const n of nodes) if (n.kind === 'text') for (const ch of measure.missing(n.text, n.weight)) missing.add(ch);
   if (missing.size === 0) return [];
   const list = [...missing].slice(0, 8).map((ch) => `U+${ch.codePointAt(0)!.toString(16).toUpperCase().padStart(4, '0')}`).join(', ');
-  return [diagnostic('layout.missing-glyphs', `the bundled font cannot draw ${missing.size} character${missing.size === 1 ? '' : 's'} in the chart's text (${list}); ${missing.size === 1 ? 'it is' : 'they are'} drawn as empty boxes`, {
+  return [diagnostic('layout.missing-glyphs', `the bundled font cannot draw ${count(missing.size, 'character')} in the chart's text (${list}); ${agree(missing.size, 'it is', 'they are')} drawn as empty boxes`, {
     hint: 'use Latin, Greek or Cyrillic text, or transliterate those labels',
   })];
 }
@@ -73,14 +74,14 @@ export function checkScene(nodes: readonly SceneNode[], plot: Box, size: { width
   if (tooSmall.length) return problems;
   const off = textsOffCanvas(texts, size);
   if (off.length) {
-    problems.push(diagnostic('layout.text-off-canvas', `${off.length} text${off.length === 1 ? '' : 's'} would reach past the edge of the chart (first: ${JSON.stringify(off[0]!.text)})`, {
+    problems.push(diagnostic('layout.text-off-canvas', `${count(off.length, 'text')} would reach past the edge of the chart (first: ${JSON.stringify(off[0]!.text)})`, {
       found: off[0]!.text, hint: 'make `size:` larger, or shorten the title and labels',
     }));
   }
   const overlaps = overlappingTexts(texts);
   if (overlaps.length) {
     const [a, b] = overlaps[0]!;
-    problems.push(diagnostic('layout.text-overlap', `${overlaps.length} pair${overlaps.length === 1 ? '' : 's'} of texts overlap (first: ${JSON.stringify(a.text)} and ${JSON.stringify(b.text)})`, {
+    problems.push(diagnostic('layout.text-overlap', `${count(overlaps.length, 'pair')} of texts overlap (first: ${JSON.stringify(a.text)} and ${JSON.stringify(b.text)})`, {
       found: `${a.role} and ${b.role}`, hint: 'make `size:` larger, or shorten the labels',
     }));
   }

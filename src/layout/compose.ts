@@ -16,6 +16,7 @@ import { bandScale, linearScale, type BandScale, type LinearScale, type Scale } 
 import { timeScale } from './time-scale.js';
 import type { FacetHooks } from './facet-types.js';
 import { NO_ROOM, bottomRange, bottomTime } from './bottom-axis.js';
+import { agree, count } from '../diagnostics/words.js';
 
 export { placeFormLabels };
 
@@ -255,7 +256,7 @@ export function withUnplacedNote(composition: Composition, ctx: LayoutContext): 
   const note = `${n} label${n === 1 ? ' is' : 's are'} left out where ${n === 1 ? 'it' : 'they'} would overlap other text (${first.dropped.slice(0, 3).map((l) => l.text).join(', ')}${n > 3 ? ', …' : ''}).`;
   const second = composition({ ...ctx, id: idMaker() }, [note], new Set(first.dropped.map((l) => l.id)));
   const m = second.dropped.length;
-  const unplaced = diagnostic('layout.labels-unplaced', `${m} label${m === 1 ? '' : 's'} would overlap other text and ${m === 1 ? 'is' : 'are'} left out; the chart's note names ${n === m ? 'them' : `${n} of them`}`, {
+  const unplaced = diagnostic('layout.labels-unplaced', `${count(m, 'label')} would overlap other text and ${agree(m, 'is', 'are')} left out; the chart's note names ${n === m ? 'them' : `${n} of them`}`, {
     found: first.dropped[0]!.text, hint: 'make the chart larger with `size:`, or use fewer or shorter labels',
   });
   return { scene: second.scene, diagnostics: [...second.diagnostics, unplaced] };

@@ -2,6 +2,7 @@ import type { Box, SceneNode, TextNode } from '../scene/types.js';
 import type { CartesianForm } from './compose.js';
 import type { FormWords, LayoutContext } from './kit-types.js';
 import { textNode, truncateText } from './text.js';
+import { inSentence } from '../fields/labels.js';
 
 /** How strongly the grey context of other panels shows (common practice: light enough to read as background). */
 const CONTEXT_OPACITY = 0.35;
@@ -21,7 +22,7 @@ export function facetWords<D>(form: CartesianForm<D>, whole: D, panels: readonly
   const notes = [...new Set(panels.flatMap((p) => form.words(p.derived, { ...ctx, memo: p.memo }).notes))];
   const levels = panels.map((p) => p.level);
   const list = `${levels.slice(0, 6).join(', ')}${levels.length > 6 ? ', …' : ''}`;
-  const description = `${words.description} Drawn as ${levels.length} panel${levels.length === 1 ? '' : 's'}, one per ${spec.label.toLowerCase()}: ${list}.`;
+  const description = `${words.description} Drawn as ${levels.length} panel${levels.length === 1 ? '' : 's'}, one per ${inSentence(spec.label)}: ${list}.`;
   return { title: words.title, description, notes };
 }
 

@@ -38,6 +38,8 @@ interface NodeBase {
   id: string;
   role: Role;
   datum?: Datum;
+  /** The mark's tooltip as a reader reads it: field labels and numbers formatted as the chart prints them. Default: the datum as `column: value` pairs. */
+  tooltip?: string;
 }
 
 /** A box in pixels: top-left corner and size. */

@@ -11,7 +11,8 @@ export type TextMode = { kind: 'live'; family: string } | { kind: 'outlines'; se
 
 const WEIGHT_NUMBER = { regular: 400, semibold: 600 } as const;
 
-function datumTitle(datum: Datum | undefined): string {
+function datumTitle(datum: Datum | undefined, tooltip: string | undefined): string {
+  if (tooltip !== undefined) return `<title>${escapeXml(tooltip)}</title>`;
   if (!datum) return '';
   let text = '';
   for (const key of Object.keys(datum)) text += `${text ? ', ' : ''}${key}: ${datum[key]}`;
@@ -44,9 +45,9 @@ function liveText(node: TextNode, cls: string): string {
   return `<text${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" font-size="${fmt(node.size)}"${weight}${anchor} fill="${node.fill}"${rotation(node)}>${fullTitle(node)}${escapeXml(node.text)}</text>`;
 }
 
-/** An element with the datum it draws as its tooltip, or self-closed without one. */
-function withDatum(open: string, tag: string, datum: Datum | undefined): string {
-  return datum ? `${open}>${datumTitle(datum)}</${tag}>` : `${open}/>`;
+/** An element with its tooltip (or the datum it draws) as its title, or self-closed without one. */
+function withDatum(open: string, tag: string, node: { datum?: Datum; tooltip?: string }): string {
+  return node.datum || node.tooltip !== undefined ? `${open}>${datumTitle(node.datum, node.tooltip)}</${tag}>` : `${open}/>`;
 }
 
 function writeNodes(nodes: readonly SceneNode[], mode: TextMode, defs: GlyphDefs | undefined): string {
@@ -61,11 +62,11 @@ function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined)
     case 'group':
       return `<g${cls}>${writeNodes(node.children, mode, defs)}</g>`;
     case 'rect':
-      return withDatum(`<rect${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" fill="${node.fill}"${paintAttributes(node)}`, 'rect', node.datum);
+      return withDatum(`<rect${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" fill="${node.fill}"${paintAttributes(node)}`, 'rect', node);
     case 'path':
-      return withDatum(`<path${cls} d="${pathData(node.commands)}" fill="${node.fill ?? 'none'}"${paintAttributes(node)}`, 'path', node.datum);
+      return withDatum(`<path${cls} d="${pathData(node.commands)}" fill="${node.fill ?? 'none'}"${paintAttributes(node)}`, 'path', node);
     case 'circle':
-      return withDatum(`<circle${cls} cx="${fmt(node.cx)}" cy="${fmt(node.cy)}" r="${fmt(node.r)}" fill="${node.fill}"${paintAttributes(node)}`, 'circle', node.datum);
+      return withDatum(`<circle${cls} cx="${fmt(node.cx)}" cy="${fmt(node.cy)}" r="${fmt(node.r)}" fill="${node.fill}"${paintAttributes(node)}`, 'circle', node);
     case 'text':
       return mode.kind === 'live' ? liveText(node, cls) : outlineText(node, mode.measure, defs!, cls, rotation(node), fullTitle(node));
     case 'image':

@@ -6,6 +6,7 @@ import { patternReader, readDateText, slashDates, type DateReader } from './date
 import { decimalMarkOf, eitherMark, numberReader, type NumberReader } from './decimal.js';
 import type { RawCell, RawTable } from './parse.js';
 import type { Column, ColumnType, DateGrain, Table, TableOrigin } from './types.js';
+import { agree } from '../diagnostics/words.js';
 
 /** Share of readable cells that makes a column numeric despite a few stray texts (common practice). */
 const MOSTLY = 0.8;
@@ -154,7 +155,7 @@ function unreadableProblem(name: string, column: Column, cells: RawCell[], unrea
       hint: `remove \`fields.${name}.type\` or fix the data`,
     });
   }
-  return diagnostic('table.mixed-column', `column \`${name}\` holds ${typeWord(column.type)}, but ${describeRows(rows, raw.positionNoun)} hold${rows.length === 1 ? 's' : ''} other text (first: ${JSON.stringify(sample)}); ${rows.length === 1 ? 'that cell is' : 'those cells are'} treated as missing`, {
+  return diagnostic('table.mixed-column', `column \`${name}\` holds ${typeWord(column.type)}, but ${describeRows(rows, raw.positionNoun)} ${agree(rows.length, 'holds', 'hold')} other text (first: ${JSON.stringify(sample)}); ${agree(rows.length, 'that cell is', 'those cells are')} treated as missing`, {
     file: origin.file, field: name, rows, found: JSON.stringify(sample), expected: typeWord(column.type),
     hint: 'fix those cells, or write NA for a missing value',
   });

@@ -1,6 +1,7 @@
 import { csvParseRows, dsvFormat, tsvParseRows } from 'd3-dsv';
 import { describeRows, diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import type { TableOrigin } from './types.js';
+import { agree, article, count } from '../diagnostics/words.js';
 
 /** A raw cell before typing: text from delimited files, or a JSON scalar. */
 export type RawCell = string | number | boolean | null;
@@ -114,8 +115,8 @@ export function parseDelimited(text: string, origin: TableOrigin): Outcome<RawTa
   const ragged = data.filter(({ r }) => r.length !== names.length);
   if (ragged.length) {
     const first = ragged[0]!;
-    return failure([diagnostic('table.ragged-row', `${describeRows(ragged.map((x) => x.line))} ha${ragged.length === 1 ? 's' : 've'} a different number of cells from the header`, {
-      file: origin.file, line: first.line, rows: ragged.map((x) => x.line), found: `${first.r.length} cells`, expected: `${names.length} cells, as in the header`,
+    return failure([diagnostic('table.ragged-row', `${describeRows(ragged.map((x) => x.line))} ${agree(ragged.length, 'has', 'have')} a different number of cells from the header`, {
+      file: origin.file, line: first.line, rows: ragged.map((x) => x.line), found: count(first.r.length, 'cell'), expected: `${count(names.length, 'cell')}, as in the header`,
       hint: origin.format === 'csv' ? 'quote cells that contain commas, e.g. "Smith, J."' : 'check for missing or extra tabs on these lines',
     })]);
   }
@@ -128,16 +129,34 @@ export function parseDelimited(text: string, origin: TableOrigin): Outcome<RawTa
  */
 function describeValue(value: unknown): string {
   try {
-    if (Array.isArray(value)) return `a list of ${value.length} item${value.length === 1 ? '' : 's'}`;
+    if (Array.isArray(value)) return `a list of ${count(value.length, 'item')}`;
     if (value !== null && typeof value === 'object') {
       const keys = Object.keys(value);
       return keys.length ? `an object with ${keys.slice(0, 3).map((k) => JSON.stringify(k.slice(0, 20))).join(', ')}${keys.length > 3 ? ', …' : ''}` : 'an empty object';
     }
     if (typeof value === 'string') return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
-    return typeof value === 'function' || typeof value === 'symbol' ? `a ${typeof value}` : String(value);
+    return typeof value === 'function' || typeof value === 'symbol' ? article(typeof value) : String(value);
   } catch {
     return 'a value that cannot be read'; // a getter or proxy that throws
   }
+}
+
+function isDate(value: unknown): value is Date {
+  // By tag, not instanceof: a Date made in another realm (a vm context, a worker) is still a Date.
+  return Object.prototype.toString.call(value) === '[object Date]';
+}
+
+/**
+ * A `Date` handed to the library as a cell, written as the ISO 8601 text the table reads as a
+ * date, in UTC: the day alone at midnight UTC (so its grain is the day), otherwise to the
+ * millisecond. An invalid Date is a missing cell, as NaN is.
+ */
+export function dateCell(value: Date): string | null {
+  const time = value.getTime();
+  if (!Number.isFinite(time)) return null;
+  const iso = value.toISOString();
+  // Years past 9999 or before 0 are written with a sign and six digits; they keep the full form.
+  return time % 86_400_000 === 0 && /^\d{4}-/.test(iso) ? iso.slice(0, 10) : iso.replace('.000Z', 'Z');
 }
 
 function scalarOrProblem(value: unknown, name: string, origin: TableOrigin, position: number, noun: 'line' | 'row'): RawCell | Diagnostic {
@@ -145,7 +164,8 @@ function scalarOrProblem(value: unknown, name: string, origin: TableOrigin, posi
   if (typeof value === 'string' || typeof value === 'boolean' || typeof value === 'number') return value;
   // A BigInt is a number the library was handed; beyond about 1.8e308 it reads as infinite, so missing.
   if (typeof value === 'bigint') return Number(value);
-  const what = Array.isArray(value) ? 'a list' : typeof value === 'object' ? 'an object' : `a ${typeof value}`;
+  if (isDate(value)) return dateCell(value);
+  const what = Array.isArray(value) ? 'a list' : article(typeof value);
   return diagnostic('table.nested-value', `${noun} ${position}, column \`${name}\` holds ${what}`, {
     file: origin.file, ...(noun === 'line' ? { line: position } : {}), rows: [position], field: name, found: describeValue(value), expected: 'a number, string, boolean or null',
     hint: 'flatten nested values into their own columns before charting',

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { editDistance, nearestName } from '../../src/diagnostics/suggest.js';
+import { readBrief } from '../../src/brief/resolve.js';
 
 describe('near-miss suggestions', () => {
   const intents = ['compare', 'part-to-whole', 'composition', 'trend', 'change', 'distribution'];
@@ -41,5 +42,21 @@ describe('typos of swapped letters', () => {
   it('suggest the option or column a swap misspelt', () => {
     expect(nearestName('titel', ['title', 'subtitle', 'source'])).toBe('title');
     expect(nearestName('cuont', ['species', 'count'])).toBe('count');
+  });
+});
+
+// Issue 6: unknown brief options, options of a field and enum values each get a did-you-mean.
+describe('did-you-mean in a brief', () => {
+  it.each([
+    ['a top-level option', 'titel: x\n', '/titel', 'brief.unknown-option', '`title`'],
+    ['an option of a field', 'fields:\n  crossings: { unti: trips }\n', '/fields/crossings/unti', 'brief.unknown-option', '`unit`'],
+    ['an enum value', 'order: valeu\n', '/order', 'brief.bad-value', '`value`'],
+    ['an enum value of a field', 'fields:\n  crossings: { type: quantitive }\n', '/fields/crossings/type', 'brief.bad-value', '`quantitative`'],
+  ])('%s', (_, extra, path, code, near) => {
+    const r = readBrief(`data: t.csv\nintent: compare\nkeys: pier\nvalues: crossings\n${extra}`);
+    expect(r.ok).toBe(false);
+    const d = r.diagnostics.find((x) => x.path === path);
+    expect(d?.code).toBe(code);
+    expect(d?.hint).toBe(`did you mean ${near}?`);
   });
 });

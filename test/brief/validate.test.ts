@@ -52,7 +52,7 @@ describe('brief stage', () => {
 
   it('reports wrong types with what was found and expected', () => {
     const [d] = problems('data: t.csv\nintent: compare\nsize: { width: wide }\n');
-    expect(d).toMatchObject({ code: 'brief.wrong-type', path: '/size/width', found: 'string "wide"', expected: 'a integer' });
+    expect(d).toMatchObject({ code: 'brief.wrong-type', path: '/size/width', found: 'string "wide"', expected: 'an integer' });
   });
 
   it('reports sizes out of range', () => {
