@@ -19,7 +19,7 @@ export function barNotes(query: BarQuery, fold: FoldSummary | undefined, valueTi
 }
 
 /** "No data: A, B." naming the keys that have no value, shortened to a count beyond a few names. */
-function noDataNote(query: BarQuery): string[] {
+export function noDataNote(query: Pick<BarQuery, 'key' | 'noData'>): string[] {
   const names = query.noData ?? [];
   if (names.length === 0) return [];
   const shown = names.slice(0, NO_DATA_NAMES).map((n) => capText(n, 40));
