@@ -6,7 +6,7 @@ import { valueFormatter } from '../layout/number-format.js';
 import { asBand, asLinear } from '../layout/scales.js';
 import type { SceneNode } from '../scene/types.js';
 import { MIN_BAND_PX } from './bar.js';
-import { barValueTitle } from './bar-text.js';
+import { barValueTitle, noDataNote } from './bar-text.js';
 import { planGroupedBar, type GroupedBarPlan } from './grouped-bar-plan.js';
 import type { FormDef } from './types.js';
 
@@ -78,6 +78,6 @@ export const GROUPED_BAR: FormDef<GroupedBarPlan, Derived> = {
   },
   words(derived) {
     const plan = derived.query;
-    return { title: `${barValueTitle(plan)} by ${plan.key.label.toLowerCase()} and ${plan.group.label.toLowerCase()}`, description: describe(derived), notes: [] };
+    return { title: `${barValueTitle(plan)} by ${plan.key.label.toLowerCase()} and ${plan.group.label.toLowerCase()}`, description: describe(derived), notes: noDataNote({ key: { ...plan.key, label: `${plan.key.label} and ${plan.group.label}` }, noData: derived.noData }) };
   },
 };
