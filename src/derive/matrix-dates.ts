@@ -35,7 +35,7 @@ function timesOf(table: Table, key: FieldRef): { grain: DateGrain; time: Map<str
  * periods. Undefined when nothing is skipped, the key is not dates, or the filled key would be
  * more than twice as long (then the gap is only warned about).
  */
-function filledLabels(labels: readonly string[], table: Table, key: FieldRef): { labels: string[]; inserted: string[] } | undefined {
+export function filledLabels(labels: readonly string[], table: Table, key: FieldRef): { labels: string[]; at: number[]; inserted: string[] } | undefined {
   const dates = key.type === 'temporal' && labels.length >= 3 ? timesOf(table, key) : undefined;
   if (!dates) return undefined;
   const times = labels.map((l) => dates.time.get(l));
@@ -45,15 +45,22 @@ function filledLabels(labels: readonly string[], table: Table, key: FieldRef): {
   const step = regularStep(steps);
   if (step === undefined) return undefined;
   const out: string[] = [];
+  const at: number[] = [];
   const inserted: string[] = [];
   labels.forEach((label, i) => {
     out.push(label);
+    at.push(times[i]!);
     const d = steps[i];
     if (d === undefined || d <= step || d % step !== 0) return;
     if (dates.grain === 'day' && step === 1 && onlyWeekend(times[i]!, times[i + 1]!)) return;
-    for (let k = u[i]! + step; k < u[i + 1]!; k += step) { const l = formatDate(timeOf(k, dates.grain), dates.grain); out.push(l); inserted.push(l); }
+    for (let k = u[i]! + step; k < u[i + 1]!; k += step) {
+      const t = timeOf(k, dates.grain);
+      out.push(formatDate(t, dates.grain));
+      at.push(t);
+      inserted.push(out[out.length - 1]!);
+    }
   });
-  return inserted.length && out.length <= 2 * labels.length ? { labels: out, inserted } : undefined;
+  return inserted.length && out.length <= 2 * labels.length ? { labels: out, at, inserted } : undefined;
 }
 
 /** The matrix's cells laid out for new row and column labels, NaN where a label is new. */
