@@ -2,7 +2,7 @@ import { min } from 'd3-array';
 import type { Decision } from '../choose/types.js';
 import { diagnostic, failure, success, type Outcome } from '../diagnostics/diagnostic.js';
 import { AGGREGATORS } from '../derive/aggregate.js';
-import { wholeCycle } from '../fields/cyclic.js';
+import { wholeCycle } from '../fields/labels.js';
 import { refOf, type Field } from '../fields/types.js';
 import type { BarQuery } from '../derive/bars.js';
 import { barGroups } from './bar-plan.js';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { dumpScene } from '../../src/scene/dump.js';
-import { wholeCycle } from '../../src/fields/cyclic.js';
+import { wholeCycle } from '../../src/fields/labels.js';
 import { renderRows } from '../helpers.js';
 
 const notes = (r: Awaited<ReturnType<typeof renderRows>>) => dumpScene(r.scene!).texts.filter((t) => t.role === 'note').map((t) => t.text).join(' ');
