@@ -3,7 +3,7 @@ import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { FieldRef } from '../fields/types.js';
 import type { Table } from '../table/types.js';
 import { AGGREGATORS } from './aggregate.js';
-import { groupRows } from './group.js';
+import { groupRows, type Grouped } from './group.js';
 import { compareNatural, compareText } from './order.js';
 import { agree, count } from '../diagnostics/words.js';
 
@@ -24,36 +24,56 @@ export interface DotRow {
   sortKey: number;
 }
 
+/** A key drawn with only some of its values (a dumbbell with one end): which values it lacks. */
+export interface PartialRow {
+  label: string;
+  missing: string[];
+}
+
+/** The value a row sorts by: its last known value. */
+const lastKnown = (r: DotRow) => [...r.values].reverse().find((v) => !Number.isNaN(v)) ?? 0;
+
 function sortRows(rows: DotRow[], order: DotQuery['order']): DotRow[] {
-  const last = (r: DotRow) => r.values[r.values.length - 1]!;
-  if (order === 'value') return [...rows].sort((a, b) => last(b) - last(a) || compareText(a.label, b.label));
+  if (order === 'value') return [...rows].sort((a, b) => lastKnown(b) - lastKnown(a) || compareText(a.label, b.label));
   if (order === 'label') return [...rows].sort((a, b) => compareNatural(a.label, b.label));
   if (order === 'key') return [...rows].sort((a, b) => a.sortKey - b.sortKey || compareText(a.label, b.label));
   return rows;
 }
 
+/** Every key that any value's rows name, in order of first appearance, with its place in the key's own order. */
+function keysOf(grouped: Grouped[]): Map<string, number> {
+  const keys = new Map<string, number>();
+  for (const g of grouped) for (const group of g.groups) if (!keys.has(group.labels[0]!)) keys.set(group.labels[0]!, group.sortKeys[0]!);
+  return keys;
+}
+
 /**
  * The derive step for dots: one row per key with each value combined by the aggregate (rows
- * missing a value left out with a warning naming them), only keys that have every value, sorted
- * as the query says (by value: by the last value, largest first, ties by label).
+ * missing a value left out with a warning naming them), sorted as the query says (by value: by
+ * the last known value, largest first, ties by label). A key with only some of its values keeps
+ * the known dots (NaN for the others) and is listed in `partial`; a key with none is in `noData`.
  */
-export function deriveDotRows(table: Table, query: DotQuery): { rows: DotRow[]; diagnostics: Diagnostic[] } {
+export function deriveDotRows(table: Table, query: DotQuery): { rows: DotRow[]; diagnostics: Diagnostic[]; noData: string[]; partial: PartialRow[] } {
   const combine = AGGREGATORS[query.aggregate].combine;
   const grouped = query.values.map((value) => groupRows(table, { keys: [query.key], value }));
   const diagnostics = grouped.flatMap((g) => g.diagnostics);
   const byLabel = grouped.map((g) => new Map(g.groups.map((group) => [group.labels[0]!, group])));
   const rows: DotRow[] = [];
-  for (const group of grouped[0]!.groups) {
-    const label = group.labels[0]!;
-    const all = byLabel.map((m) => m.get(label));
-    if (all.some((g) => g === undefined)) continue;
-    rows.push({ label, values: all.map((g) => combine(g!.values)), sortKey: group.sortKeys[0]! });
+  const partial: PartialRow[] = [];
+  for (const [label, sortKey] of keysOf(grouped)) {
+    const values = byLabel.map((m) => { const g = m.get(label); const v = g ? combine(g.values) : Number.NaN; return Number.isFinite(v) ? v : Number.NaN; });
+    if (values.every(Number.isNaN)) continue;
+    rows.push({ label, values, sortKey });
+    const missing = query.values.filter((_, i) => Number.isNaN(values[i]!)).map((v) => v.label);
+    if (missing.length) partial.push({ label, missing });
   }
+  const drawn = new Set(rows.map((r) => r.label));
+  const noData = [...new Set(grouped.flatMap((g) => g.noValue))].filter((l) => !drawn.has(l));
   const several = grouped[0]!.groups.filter((g) => g.values.length > 1).length;
   if (several && query.aggregate !== 'count') {
     diagnostics.push(diagnostic('derive.aggregated', `${count(several, 'key')} ${agree(several, 'has', 'have')} several rows; their values are ${AGGREGATORS[query.aggregate].verb} (aggregate: ${query.aggregate})`, {
       field: query.key.name, hint: 'set `aggregate:` to sum, mean, count, max or min',
     }));
   }
-  return { rows: sortRows(rows.filter((r) => r.values.every(Number.isFinite)), query.order), diagnostics };
+  return { rows: sortRows(rows, query.order), diagnostics, noData, partial };
 }

@@ -29,6 +29,8 @@ export interface DerivedGroupedBars<Q extends GroupedBarQuery = GroupedBarQuery>
   bars: GroupedBar[];
   /** Name of the value in data terms: the value column, or "count". */
   valueName: string;
+  /** Key and group pairs with no bar ("North / 2024"), in drawing order: no row, or no usable value. */
+  noData: string[];
 }
 
 /** The keys in the query's order: by value, each key's rows combined over every group (so by its total for sums). */
@@ -66,9 +68,11 @@ export function deriveGroupedBars<Q extends GroupedBarQuery>(table: Table, query
     return failure(problems);
   }
   const byCell = new Map(grouped.groups.map((g, i) => [JSON.stringify(g.labels), cells[i]!]));
+  const noData: string[] = [];
   const bars: GroupedBar[] = keys.flatMap((key) => query.groups.flatMap((group) => {
     const cell = byCell.get(JSON.stringify([key, group]));
+    if (!cell) noData.push(`${key} / ${group}`);
     return cell ? [{ key, group, value: cell.value, count: cell.count, rows: cell.rows }] : [];
   }));
-  return success({ query, keys, bars, valueName: query.value?.name ?? 'count' }, problems);
+  return success({ query, keys, bars, valueName: query.value?.name ?? 'count', noData }, problems);
 }

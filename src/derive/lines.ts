@@ -4,6 +4,7 @@ import { formatDate, keyText } from '../fields/labels.js';
 import type { FieldRef } from '../fields/types.js';
 import { columnOf, type Column, type Table } from '../table/types.js';
 import { AGGREGATORS } from './aggregate.js';
+import type { Combined } from './group.js';
 import { compareText } from './order.js';
 import { breakSkippedPeriods, type SkippedPeriods } from './skipped-periods.js';
 import { agree, count } from '../diagnostics/words.js';
@@ -22,6 +23,10 @@ export interface LineQuery {
    * title names it, so no direct label or legend is drawn. Default: false.
    */
   onePerPanel?: boolean;
+  /** Whether the brief states `aggregate:`; when it does not, the plan has already warned of rows combined. Default: stated. */
+  aggregateStated?: boolean;
+  /** Rows sharing a key (and series) that are combined, as the plan counted them, said in the note and the axis title. Default: none. */
+  combined?: Combined;
 }
 
 /** One line's points in key order. */
@@ -201,7 +206,7 @@ export function deriveLines<Q extends LineQuery>(table: Table, query: Q): Outcom
     problems.push(diagnostic('derive.no-rows', 'no row has both a key and a usable value, so there is nothing to draw', { file: table.origin.file, hint: 'check that the key and value columns are the ones you meant', expected: 'at least one complete row' }));
     return failure(problems);
   }
-  if (combined) problems.push(diagnostic('derive.aggregated', `${count(combined, 'point')} had several rows; their values are ${AGGREGATORS[query.aggregate].verb} (aggregate: ${query.aggregate})`, { field: query.key.name, hint: 'set `aggregate:` to sum, mean, count, max or min' }));
+  if (combined && query.aggregateStated !== false) problems.push(diagnostic('derive.aggregated', `${count(combined, 'point')} had several rows; their values are ${AGGREGATORS[query.aggregate].verb} (aggregate: ${query.aggregate})`, { field: query.key.name, hint: 'set `aggregate:` to sum, mean, count, max or min' }));
   const overflow = series.find((s) => s.ys.some((y) => y === Infinity || y === -Infinity));
   if (overflow) {
     problems.push(diagnostic('derive.not-finite', `a combined \`${query.value?.name ?? 'count'}\`${overflow.label === undefined ? '' : ` of ${JSON.stringify(overflow.label)}`} is beyond the range of numbers`, { field: query.key.name, expected: 'a finite number', hint: 'rescale the values (e.g. to thousands or millions) before charting' }));

@@ -18,6 +18,8 @@ export interface ValueMatrix {
   /** Cells that combined more than one row. */
   combined: number;
   diagnostics: Diagnostic[];
+  /** Dates a date key skipped, put back as rows or columns of missing cells. Default: none. */
+  inserted?: { rows: string[]; columns: string[] };
 }
 
 /** Labels of one key, each with its index in order of first appearance and its place in the key's own order. */

@@ -10,7 +10,7 @@ export interface SkippedPeriods {
 }
 
 /** The most common step between a series' keys, in its grain's units, when at least half the steps are it. */
-function regularStep(steps: readonly number[]): number | undefined {
+export function regularStep(steps: readonly number[]): number | undefined {
   const counts = new Map<number, number>();
   for (const s of steps) counts.set(s, (counts.get(s) ?? 0) + 1);
   const [step, count] = [...counts].sort((a, b) => b[1] - a[1] || a[0] - b[0])[0] ?? [0, 0];
@@ -20,7 +20,7 @@ function regularStep(steps: readonly number[]): number | undefined {
 const DAY = 86_400_000;
 
 /** Whether every day strictly between two days is a Saturday or a Sunday (UTC): business-day data skips weekends by design. */
-function onlyWeekend(from: number, to: number): boolean {
+export function onlyWeekend(from: number, to: number): boolean {
   for (let t = from + DAY; t < to; t += DAY) {
     const wd = new Date(t).getUTCDay();
     if (wd !== 0 && wd !== 6) return false;

@@ -39,6 +39,8 @@ export interface SlopeQuery {
 export interface DerivedSlopes {
   items: SlopeItem[];
   ends: [string, string];
+  /** Items left out for a value at only one of the two ends, said in the note. Default: none. */
+  incomplete?: string[];
 }
 
 /** The way a value moved from `before` to `after`: exact comparison, so only equal values are unchanged. */
@@ -128,5 +130,5 @@ export function deriveSlopes(table: Table, query: SlopeQuery): Outcome<DerivedSl
     }));
     return failure(problems);
   }
-  return problems.some((p) => p.severity === 'error') ? failure(problems) : success({ items, ends }, problems);
+  return problems.some((p) => p.severity === 'error') ? failure(problems) : success({ items, ends, ...(incomplete.length ? { incomplete } : {}) }, problems);
 }

@@ -2,7 +2,8 @@ import { max, min } from 'd3-array';
 import type { Aggregate } from '../brief/types.js';
 import { diagnostic, failure, success, type Outcome } from '../diagnostics/diagnostic.js';
 import type { FieldRef } from '../fields/types.js';
-import type { Table } from '../table/types.js';
+import { columnOf, type DateGrain, type Table } from '../table/types.js';
+import { filledLabels } from './matrix-dates.js';
 import { AGGREGATORS } from './aggregate.js';
 import type { Grouped } from './group.js';
 import { byOnset, insideOutOrder, onsetOf } from './stream-order.js';
@@ -37,6 +38,12 @@ export interface DerivedStream<Q extends StreamQuery = StreamQuery> {
   extent: [number, number];
   /** How many (key, series) cells had no row and count as zero thickness. */
   emptyCells: number;
+  /** The (series, key) cells with no usable value, drawn as zero thickness, in series then key order; periods with no row at all are in `skipped` instead. */
+  empty: { series: string; key: string }[];
+  /** Periods a regular date key skips (no row in any series), put back as keys of zero thickness. Default: none. */
+  skipped: string[];
+  /** The date key's grain, so its axis ticks no finer than the data. Default: none (not dates). */
+  grain?: DateGrain;
 }
 
 /** The keys in their own order, each with its label and position. */
@@ -60,6 +67,14 @@ export function deriveStream<Q extends StreamQuery>(table: Table, query: Q, grou
     }));
     return failure(problems);
   }
+  const filled = filledLabels(keys.map((k) => k.label), table, query.time);
+  const skipped = filled?.inserted ?? [];
+  if (filled) keys.splice(0, keys.length, ...filled.labels.map((label, i) => ({ label, at: filled.at[i]! })));
+  if (skipped.length) {
+    problems.push(diagnostic('derive.uneven-dates', `the dates of \`${query.time.name}\` skip ${skipped.length} period${skipped.length === 1 ? '' : 's'} (first ${skipped[0]}) with no rows in any series; the stream narrows to zero thickness there rather than flow across values it does not have`, {
+      field: query.time.name, hint: 'add rows for the missing periods (0 where there truly is none), or aggregate to a coarser period',
+    }));
+  }
   const index = new Map(keys.map((k, i) => [k.label, i]));
   const cells = new Map<string, number[]>();
   const combine = AGGREGATORS[query.aggregate].combine;
@@ -69,12 +84,21 @@ export function deriveStream<Q extends StreamQuery>(table: Table, query: Q, grou
     cells.set(g.labels[1]!, row);
   }
   let emptyCells = 0;
-  const series = [...cells].map(([name, row]) => ({ name, values: row.map((v) => (Number.isNaN(v) ? (emptyCells++, 0) : v)) }));
+  const gone = new Set(skipped);
+  const empty: { series: string; key: string }[] = [];
+  const series = [...cells].map(([name, row]) => ({ name, values: row.map((v, k) => {
+    if (!Number.isNaN(v)) return v;
+    emptyCells++;
+    if (!gone.has(keys[k]!.label)) empty.push({ series: name, key: keys[k]!.label });
+    return 0;
+  }) }));
   const ranked = insideOutOrder(series);
   const rank = new Map(byOnset(series).map((s, i) => [s, i]));
   const layers = ranked.map((s) => ({ ...s, onset: onsetOf(s.values), rank: rank.get(s)! }));
   const baseline = streamBaseline(layers.map((l) => l.values));
   const tops = baseline.map((b, k) => b + layers.reduce((a, l) => a + l.values[k]!, 0));
   const extent: [number, number] = [min(baseline)!, max(tops)!];
-  return success({ query, keys, layers, baseline, extent, emptyCells }, problems);
+  const column = columnOf(table, query.time.name);
+  const grain = column?.type === 'date' ? column.grain : undefined;
+  return success({ query, keys, layers, baseline, extent, emptyCells, empty, skipped, ...(grain ? { grain } : {}) }, problems);
 }

@@ -1,11 +1,4 @@
-/** Known cycles: a text column whose every value is one of these is cyclic, in this order. */
-const CYCLES: string[][] = [
-  ['january', 'february', 'march', 'april', 'may', 'june', 'july', 'august', 'september', 'october', 'november', 'december'],
-  ['jan', 'feb', 'mar', 'apr', 'may', 'jun', 'jul', 'aug', 'sep', 'oct', 'nov', 'dec'],
-  ['monday', 'tuesday', 'wednesday', 'thursday', 'friday', 'saturday', 'sunday'],
-  ['mon', 'tue', 'wed', 'thu', 'fri', 'sat', 'sun'],
-  ['n', 'nne', 'ne', 'ene', 'e', 'ese', 'se', 'sse', 's', 'ssw', 'sw', 'wsw', 'w', 'wnw', 'nw', 'nnw'],
-];
+import { CYCLES } from './labels.js';
 
 /**
  * If every level names a place in a known cycle (months, weekdays, compass points), the levels
@@ -22,3 +15,4 @@ export function cycleOrder(levels: readonly string[]): string[] | undefined {
   }
   return undefined;
 }
+

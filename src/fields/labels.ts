@@ -60,7 +60,43 @@ export function readableName(name: string): string {
     .replace(/(\p{Ll})(\p{Lu}{2,})/gu, '$1 $2')
     .replace(/\s+/g, ' ')
     .trim();
-  if (/^\p{Ll}{1,3}$/u.test(spaced)) return spaced;
+  const capital = spaced.charAt(0).toUpperCase() + spaced.slice(1);
+  // Month and weekday names ("jan", "mon") are names, not abbreviations to keep as written.
+  if (/^\p{Ll}{1,3}$/u.test(spaced) && !PROPER.test(capital)) return spaced;
   const first = /^\S+/.exec(spaced)?.[0] ?? '';
   return /^\p{Ll}+$/u.test(first) ? spaced.charAt(0).toUpperCase() + spaced.slice(1) : spaced;
+}
+
+/** Known cycles: a text column whose every value is one of these is cyclic, in this order. */
+export const CYCLES: string[][] = [
+  ['january', 'february', 'march', 'april', 'may', 'june', 'july', 'august', 'september', 'october', 'november', 'december'],
+  ['jan', 'feb', 'mar', 'apr', 'may', 'jun', 'jul', 'aug', 'sep', 'oct', 'nov', 'dec'],
+  ['monday', 'tuesday', 'wednesday', 'thursday', 'friday', 'saturday', 'sunday'],
+  ['mon', 'tue', 'wed', 'thu', 'fri', 'sat', 'sun'],
+  ['n', 'nne', 'ne', 'ene', 'e', 'ese', 'se', 'sse', 's', 'ssw', 'sw', 'wsw', 'w', 'wnw', 'nw', 'nnw'],
+];
+
+/** How many of CYCLES' first entries are calendar cycles (months, weekdays), whose every place exists whether or not the data has it. */
+const CALENDAR_CYCLES = 4;
+
+/** A level written as the data writes its levels: upper case, lower case, or a capital first. */
+function writtenAs(sample: readonly string[]): (name: string) => string {
+  if (sample.every((l) => l === l.toUpperCase())) return (n) => n.toUpperCase();
+  if (sample.every((l) => l === l.toLowerCase())) return (n) => n;
+  return (n) => `${n.charAt(0).toUpperCase()}${n.slice(1)}`;
+}
+
+/**
+ * The whole calendar cycle the levels belong to (12 months or 7 weekdays), written as the data
+ * writes them, when the levels are months or weekdays; otherwise undefined (compass points and
+ * other cycles have no fixed count of places: the data's own levels are the cycle).
+ */
+export function wholeCycle(levels: readonly string[]): string[] | undefined {
+  if (levels.length < 3 || levels.some((l) => l.endsWith('.'))) return undefined;
+  const lower = levels.map((l) => l.toLowerCase());
+  const cycle = CYCLES.slice(0, CALENDAR_CYCLES).find((c) => lower.every((l) => c.includes(l)));
+  if (!cycle) return undefined;
+  const write = writtenAs(levels);
+  const present = new Map(levels.map((l) => [l.toLowerCase(), l]));
+  return cycle.map((name) => present.get(name) ?? write(name));
 }

@@ -12,8 +12,8 @@ import { readableStep } from '../layout/axes.js';
 import { idMaker } from '../scene/ids.js';
 import type { Table } from '../table/types.js';
 import { barNotes } from './bar-text.js';
+import { checkCombining, combiningDecision, repeatsOf } from './combining.js';
 import type { Planned, PlanInput } from './types.js';
-import { inSentence } from '../fields/labels.js';
 
 /** How bars are laid out and ordered. */
 export interface BarPlan {
@@ -29,48 +29,6 @@ export interface BarPlan {
   combined?: Combined;
   /** Keys with no usable value in any row, said in the chart's note. Default: none. */
   noData?: string[];
-}
-
-/** What combining rows by key does to the chart: which keys repeat, which have no data. */
-function combinedOf(grouped: Grouped): Combined | undefined {
-  const repeated = grouped.groups.filter((g) => g.values.length > 1);
-  if (repeated.length === 0) return undefined;
-  const most = max(repeated, (g) => g.values.length)!;
-  return { keys: repeated.length, most, every: grouped.groups.every((g) => g.values.length === most) };
-}
-
-/**
- * The keys whose rows are combined. In small multiples a key repeats once per panel, so repeats
- * are counted within each panel; faceting by a key itself is refused by the facet rules.
- */
-function repeatsOf(input: PlanInput, key: Field, value: Field | undefined, grouped: Grouped): Combined | undefined {
-  const by = input.brief.facet?.by;
-  if (by === undefined) return combinedOf(grouped);
-  const facet = input.fields.all.find((f) => f.name === by);
-  if (!facet || input.brief.keys.includes(by)) return undefined;
-  return combinedOf(groupRows(input.table, { keys: [refOf(key), refOf(facet)], value: value && refOf(value) }));
-}
-
-/**
- * Rows sharing a key are combined by the aggregate: a sum of a value that does not add up
- * (shares, pH, temperatures) is refused with a mean offered; combining when the brief states no
- * `aggregate:` is warned about, so it is never a surprise.
- */
-function checkCombining(input: PlanInput, key: Field, value: Field | undefined, combined: Combined | undefined): Diagnostic[] {
-  const { brief } = input;
-  if (!combined || !value) return [];
-  const rows = `${combined.keys} ${inSentence(key.label)} value${combined.keys === 1 ? ' has' : 's have'} several rows (up to ${combined.most})`;
-  if (brief.aggregate === 'sum' && !value.additive) {
-    return [diagnostic('choice.sum-not-additive', `${rows}, and \`${value.name}\`${value.unit ? ` in ${value.unit}` : ''} does not add up: a sum of it means nothing`, {
-      path: brief.aggregateStated ? '/aggregate' : `/fields/${value.name}`, field: value.name, found: 'aggregate: sum', expected: 'mean, max or min',
-      hint: `use \`aggregate: mean\`, or set \`fields.${value.name}.additive: true\` if its values do add up`,
-    })];
-  }
-  if (brief.aggregateStated) return [];
-  return [diagnostic('choice.keys-repeat', `${rows}; they are ${AGGREGATORS[brief.aggregate].verb}, and the chart's note says so`, {
-    field: key.name, found: `${combined.keys} repeated keys`, expected: 'one row per key, or a stated `aggregate:`',
-    hint: `state how to combine them with \`aggregate: sum\` (or mean, max, min, count)`,
-  })];
 }
 
 /** The table's rows grouped by the bars' key, once per render: planning and deriving both need them. */
@@ -185,7 +143,7 @@ export function planBar(input: PlanInput, opts: { totals?: boolean } = {}): Outc
   const grouped = barGroups(input.table, refOf(key), value && refOf(value), input);
   // Planned as the totals of another form's bars (stacks, groups): several rows per key are that
   // form's parts, not repeats, and the frame is the other form's to size.
-  const combined = opts.totals ? undefined : repeatsOf(input, key, value, grouped);
+  const combined = opts.totals ? undefined : repeatsOf(input, [key], value, grouped);
   problems.push(...checkCombining(input, key, value, combined));
   if (problems.some((p) => p.severity === 'error')) return failure(problems);
   const orientation = chooseOrientation(input, key, value);
@@ -194,8 +152,8 @@ export function planBar(input: PlanInput, opts: { totals?: boolean } = {}): Outc
   // Small multiples divide the frame among panels, which are measured by the facet layout.
   const grown = orientation.vertical || key.type === 'temporal' || key.type === 'quantitative' || brief.facet || opts.totals ? {} : grownFrame(input, key, value, notes);
   if (grown.decision) decisions.push(grown.decision);
-  if (combined && value) decisions.push({ decision: `rows with the same ${inSentence(key.label)} ${AGGREGATORS[brief.aggregate].verb}`, rule: brief.aggregateStated ? 'the brief asks for it (`aggregate:`)' : 'sum is the default for rows sharing a key; the note and the axis title say so' });
-  else if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });
+  const combining = combiningDecision(key, value, brief.aggregate, brief.aggregateStated === true, combined);
+  if (combining) decisions.push(combining);
   return success({
     plan: { key: refOf(key), value: value && refOf(value), orientation: orientation.vertical ? 'vertical' : 'horizontal', order, aggregate: brief.aggregate, aggregateStated: brief.aggregateStated, noData: grouped.noValue, ...(combined ? { combined } : {}) },
     decisions,

@@ -1,39 +1,26 @@
 import { format } from 'd3-format';
-import { AGGREGATORS } from '../derive/aggregate.js';
 import { capText } from '../layout/text.js';
 import { summaryOf, type BarQuery, type DerivedBars, type FoldSummary } from '../derive/bars.js';
 import { axisTitle } from '../layout/axis.js';
 import { inSentence } from '../fields/labels.js';
+import { combinedTitle, combineNote } from './combining.js';
 
 /** The value axis title of a bar chart. */
 export function barValueTitle(query: BarQuery): string {
   const { value, aggregate } = query;
   if (!value) return 'Number of rows';
-  const title = axisTitle(value, value.label);
-  const lower = inSentence(title);
-  if (aggregate === 'mean') return `Mean ${lower}`;
-  // Only a combination that happened is named: one row per key is its own value.
-  if (!query.combined) return title;
-  return { sum: `Total ${lower}`, max: `Largest ${lower}`, min: `Smallest ${lower}`, count: title }[aggregate];
+  return combinedTitle(axisTitle(value, value.label), aggregate, query.combined);
 }
 
 const NO_DATA_NAMES = 6;
 
 /** The notes of a bar chart: rows combined, keys with no data, and what a fold left out, in that order. */
 export function barNotes(query: BarQuery, fold: FoldSummary | undefined, valueTitle: string, fmt: (n: number) => string): string[] {
-  return [...combineNote(query), ...noDataNote(query), ...foldNote(query, fold, valueTitle, fmt)];
-}
-
-function combineNote(query: BarQuery): string[] {
-  const { combined, value, aggregate } = query;
-  if (!combined || !value) return [];
-  const key = inSentence(query.key.label);
-  const verb = AGGREGATORS[aggregate].verb;
-  return [combined.every ? `${combined.most} rows per ${key} were ${verb}.` : `Rows sharing a ${key} were ${verb} (${combined.keys} ${key} values had several rows, up to ${combined.most}).`];
+  return [...combineNote(query.key, query.value, query.aggregate, query.combined), ...noDataNote(query), ...foldNote(query, fold, valueTitle, fmt)];
 }
 
 /** "No data: A, B." naming the keys that have no value, shortened to a count beyond a few names. */
-function noDataNote(query: BarQuery): string[] {
+export function noDataNote(query: Pick<BarQuery, 'key' | 'noData'>): string[] {
   const names = query.noData ?? [];
   if (names.length === 0) return [];
   const shown = names.slice(0, NO_DATA_NAMES).map((n) => capText(n, 40));

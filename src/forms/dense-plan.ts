@@ -25,6 +25,8 @@ export interface DenseItems {
   labels: string[] | undefined;
   values: Float64Array;
   diagnostics: Diagnostic[];
+  /** What was left out for want of a value: the keys with none (with a key), or how many rows (without). */
+  left: { keys: string[]; rows: number };
 }
 
 /** The items in source order (one per key, combined by `aggregate`; one per row with a usable value without a key), once per render. */
@@ -35,11 +37,11 @@ export function denseItems(ctx: Pick<PlanInput, 'memo'>, table: Table, plan: Pic
       const values = Float64Array.from(column.values.filter((v): v is number => typeof v === 'number'));
       const missing = column.values.flatMap((v, i) => (typeof v === 'number' ? [] : [table.rowPositions[i]!]));
       const diagnostics = missing.length ? [diagnostic('derive.missing-values', `${missing.length} row${missing.length === 1 ? ' has' : 's have'} no usable \`${plan.value.name}\` and ${missing.length === 1 ? 'is' : 'are'} left out, not drawn as zero`, { file: table.origin.file, field: plan.value.name, rows: missing.slice(0, 20), hint: 'fill in the values, or remove those rows if they are not data' })] : [];
-      return { labels: undefined, values, sortKeys: undefined, diagnostics };
+      return { labels: undefined, values, sortKeys: undefined, diagnostics, left: { keys: [], rows: missing.length } };
     }
     const grouped = groupRows(table, { keys: [plan.key], value: plan.value });
     const combine = AGGREGATORS[plan.aggregate].combine;
-    return { labels: grouped.groups.map((g) => g.labels[0]!), values: Float64Array.from(grouped.groups, (g) => combine(g.values)), sortKeys: grouped.groups.map((g) => g.sortKeys[0]!), diagnostics: grouped.diagnostics };
+    return { labels: grouped.groups.map((g) => g.labels[0]!), values: Float64Array.from(grouped.groups, (g) => combine(g.values)), sortKeys: grouped.groups.map((g) => g.sortKeys[0]!), diagnostics: grouped.diagnostics, left: { keys: grouped.noValue, rows: 0 } };
   });
 }
 

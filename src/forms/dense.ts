@@ -9,7 +9,8 @@ import type { LegendSpec } from '../layout/legend.js';
 import { valueFormatter } from '../layout/number-format.js';
 import { rasterNode } from '../layout/raster-image.js';
 import type { Table } from '../table/types.js';
-import { denseItems, planDense, type DensePlan } from './dense-plan.js';
+import { noDataNote } from './bar-text.js';
+import { denseItems, planDense, type DenseItems, type DensePlan } from './dense-plan.js';
 import { classLegend } from './colour-classes.js';
 import type { FormDef } from './types.js';
 import { inSentence } from '../fields/labels.js';
@@ -21,6 +22,8 @@ export interface DerivedDense {
   /** Values in drawing order. */
   values: Float64Array;
   grid: DenseGrid;
+  /** What was left out for want of a value. */
+  left: DenseItems['left'];
 }
 
 const legendOf = (d: Pick<DerivedDense, 'query'>): LegendSpec => classLegend(d.query.value, d.query.classes);
@@ -29,6 +32,12 @@ function countNote(plan: DensePlan, n: number): string {
   const what = plan.key ? `${inSentence(plan.key.label)} values` : 'rows';
   const order = plan.order === 'value' ? 'in value order, largest first' : plan.order === 'key' ? `in ${inSentence(plan.key!.label)} order` : plan.order === 'label' ? 'in label order' : 'in data order';
   return `${format(',')(n)} ${what}, one square cell each, ${order}, read left to right in rows from the top.`;
+}
+
+/** The notes: how the items are laid out, then what was left out ("No data: …", or a count of rows). */
+function denseNotes(plan: DensePlan, n: number, left: DenseItems['left']): string[] {
+  const rows = left.rows ? [`${format(',')(left.rows)} row${left.rows === 1 ? ' has' : 's have'} no value and ${left.rows === 1 ? 'is' : 'are'} not drawn.`] : [];
+  return [countNote(plan, n), ...(plan.key ? noDataNote({ key: plan.key, noData: left.keys }) : []), ...rows];
 }
 
 /** The items in drawing order (stable: ties keep their source order), fitted to the body the frame and legend leave. */
@@ -40,14 +49,14 @@ function deriveDense(table: Table, plan: DensePlan, ctx: LayoutContext) {
   if (plan.order === 'value') index.sort((a, b) => items.values[b]! - items.values[a]! || a - b);
   if (plan.order === 'key') index.sort((a, b) => items.sortKeys![a]! - items.sortKeys![b]! || a - b);
   if (plan.order === 'label') index.sort((a, b) => (items.labels![a]! < items.labels![b]! ? -1 : items.labels![a]! > items.labels![b]! ? 1 : a - b));
-  const body = frameFor(legendOf({ query: plan }), [countNote(plan, n)], ctx).body;
+  const body = frameFor(legendOf({ query: plan }), denseNotes(plan, n, items.left), ctx).body;
   const grid = denseGrid(n, body.width, body.height);
   if (!grid) {
     return failure<DerivedDense>([...items.diagnostics, diagnostic('derive.too-many-items', `${format(',')(n)} items do not fit the ${Math.floor(body.width)} × ${Math.floor(body.height)} px plot even at one pixel each`, {
       field: plan.value.name, found: `${n} items`, expected: `at most ${Math.floor(body.width) * Math.floor(body.height)}`, hint: 'make the chart larger with `size:`, or combine items by a coarser key',
     })]);
   }
-  return success<DerivedDense>({ query: plan, labels: items.labels && index.map((i) => items.labels![i]!), values: Float64Array.from(index, (i) => items.values[i]!), grid }, items.diagnostics);
+  return success<DerivedDense>({ query: plan, labels: items.labels && index.map((i) => items.labels![i]!), values: Float64Array.from(index, (i) => items.values[i]!), grid, left: items.left }, items.diagnostics);
 }
 
 /**
@@ -70,7 +79,7 @@ export const DENSE: FormDef<DensePlan, DerivedDense> = {
     return {
       title: `${value} of ${format(',')(n)} ${d.query.key ? inSentence(d.query.key.label) : 'items'}`,
       description: `Dense pixel layout of ${inSentence(value)} for ${format(',')(n)} items, one cell each, from ${fmt(d.values[lo]!)} to ${fmt(d.values[hi]!)}, coloured in ${d.query.classes.classes.length} classes.`,
-      notes: [countNote(d.query, n)],
+      notes: denseNotes(d.query, n, d.left),
     };
   },
   layoutBody(d, body, ctx) {

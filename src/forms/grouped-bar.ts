@@ -6,7 +6,7 @@ import { valueFormatter } from '../layout/number-format.js';
 import { asBand, asLinear } from '../layout/scales.js';
 import type { SceneNode } from '../scene/types.js';
 import { MIN_BAND_PX } from './bar.js';
-import { barValueTitle, tooltipText } from './bar-text.js';
+import { barValueTitle, noDataNote, tooltipText } from './bar-text.js';
 import { planGroupedBar, type GroupedBarPlan } from './grouped-bar-plan.js';
 import type { FormDef } from './types.js';
 import { inSentence } from '../fields/labels.js';
@@ -81,6 +81,6 @@ export const GROUPED_BAR: FormDef<GroupedBarPlan, Derived> = {
   },
   words(derived) {
     const plan = derived.query;
-    return { title: `${barValueTitle(plan)} by ${inSentence(plan.key.label)} and ${inSentence(plan.group.label)}`, description: describe(derived), notes: [] };
+    return { title: `${barValueTitle(plan)} by ${inSentence(plan.key.label)} and ${inSentence(plan.group.label)}`, description: describe(derived), notes: noDataNote({ key: { ...plan.key, label: `${plan.key.label} and ${plan.group.label}` }, noData: derived.noData }) };
   },
 };

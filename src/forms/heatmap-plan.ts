@@ -4,6 +4,7 @@ import type { Decision } from '../choose/types.js';
 import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import type { ColourClasses } from '../derive/classes.js';
 import { buildMatrix, type ValueMatrix } from '../derive/matrix.js';
+import { fillSkippedDates } from '../derive/matrix-dates.js';
 import type { ClusterOptions } from '../derive/reorder.js';
 import { isOrdered, refOf, type FieldRef } from '../fields/types.js';
 import { memoized } from '../layout/kit-types.js';
@@ -35,7 +36,7 @@ export interface HeatmapPlan {
 /** The table as a matrix of the two keys, once per render (planning and deriving both need it). */
 export function matrixOf(input: Pick<PlanInput, 'memo'>, table: Table, plan: Pick<HeatmapPlan, 'rows' | 'columns' | 'value' | 'aggregate'>): ValueMatrix {
   const ordered: [boolean, boolean] = [isOrdered(plan.rows.type), isOrdered(plan.columns.type)];
-  return memoized(input, `heatmap\u0000matrix\u0000${plan.rows.name}\u0000${plan.columns.name}\u0000${plan.value.name}\u0000${plan.aggregate}`, () => buildMatrix(table, plan.rows, plan.columns, plan.value, plan.aggregate, ordered));
+  return memoized(input, `heatmap\u0000matrix\u0000${plan.rows.name}\u0000${plan.columns.name}\u0000${plan.value.name}\u0000${plan.aggregate}`, () => fillSkippedDates(buildMatrix(table, plan.rows, plan.columns, plan.value, plan.aggregate, ordered), table, plan.rows, plan.columns));
 }
 
 function chooseOrder(input: PlanInput, problems: Diagnostic[], decisions: Decision[]): HeatmapPlan['order'] {

@@ -50,6 +50,19 @@ function missingNote(d: DerivedHeatmap): string[] {
   return [`${format(',')(n)} cell${n === 1 ? ' has' : 's have'} no value: drawn ${d.query.raster ? 'in grey' : 'hatched'}, not as zero.`];
 }
 
+const SKIPPED_NAMES = 4;
+
+/** "No rows for 3 Jun 2025, 5 Jun 2025: drawn as rows of hatched cells." naming the dates put back, shortened to a count when long. */
+function skippedNote(d: DerivedHeatmap): string[] {
+  const { inserted } = d.matrix;
+  if (!inserted) return [];
+  const side = inserted.rows.length ? 'rows' : 'columns';
+  const all = [...inserted.rows, ...inserted.columns];
+  const shown = all.slice(0, SKIPPED_NAMES).join(', ');
+  const more = all.length > SKIPPED_NAMES ? ` and ${all.length - SKIPPED_NAMES} more` : '';
+  return [`No rows for ${shown}${more}: drawn as ${all.length === 1 ? `a ${side.slice(0, -1)}` : side} of ${d.query.raster ? 'grey' : 'hatched'} cells.`];
+}
+
 const ordinal = (k: number) => (k === 2 ? 'second' : `${k}th`);
 
 function thinNote(g: HeatmapGeometry, d: DerivedHeatmap): string[] {
@@ -61,7 +74,7 @@ function thinNote(g: HeatmapGeometry, d: DerivedHeatmap): string[] {
 /** The notes and the body they leave: a note on thinned labels is kept only when the body with it still needs thinning. */
 function layoutOf(d: DerivedHeatmap, ctx: LayoutContext): { notes: string[]; geometry: (body: Box) => HeatmapGeometry } {
   return memoized(ctx, 'heatmap\u0000notes', () => {
-    const base = missingNote(d);
+    const base = [...skippedNote(d), ...missingNote(d)];
     const probe = (notes: string[]) => heatmapGeometry(d, frameFor(legendOf(d), notes, ctx).body, ctx);
     const withThin = [...base, ...thinNote(probe([...base, 'x']), d)];
     const notes = withThin.length > base.length ? [...base, ...thinNote(probe(withThin), d)] : base;

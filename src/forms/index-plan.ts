@@ -1,7 +1,7 @@
-import { success, type Outcome } from '../diagnostics/diagnostic.js';
+import { failure, success, type Outcome } from '../diagnostics/diagnostic.js';
 import type { IndexAs, IndexBase } from '../derive/index.js';
 import { refOf } from '../fields/types.js';
-import { lineDecisions, type LinePlan } from './line-plan.js';
+import { lineCombining, lineDecisions, type LinePlan } from './line-plan.js';
 import type { Planned, PlanInput } from './types.js';
 
 /** How an index line chart is drawn: a line plan, its base, and how the index is shown. */
@@ -30,6 +30,10 @@ export function planIndex(input: PlanInput): Outcome<Planned<IndexPlan>> {
     rule: `intent change: an index puts series of different sizes on one scale, so their growth is compared rather than their level${brief.index?.base === undefined ? ' (no `index.base` given: the first key)' : ''}`,
   });
   decisions.push({ decision: `the value axis may leave zero out; a reference line marks the base at ${as === 'index' ? '100' : '0 %'}`, rule: 'an index is read against its base, not against zero, and a line carries it by position, not length, so a cut axis does not distort it' });
-  if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });
-  return success({ plan: { key: refOf(key), series: series && refOf(series), value: value && refOf(value), aggregate: brief.aggregate, zero: false, base, as, ...(onePerPanel ? { onePerPanel } : {}) }, decisions, ...(facet ? { facet } : {}) }, problems);
+  const combining = lineCombining(input, key, series, value);
+  problems.push(...combining.problems);
+  if (combining.problems.some((p) => p.severity === 'error')) return failure(problems);
+  if (combining.decision) decisions.push(combining.decision);
+  const combined = combining.combined ? { combined: combining.combined } : {};
+  return success({ plan: { key: refOf(key), series: series && refOf(series), value: value && refOf(value), aggregate: brief.aggregate, aggregateStated: brief.aggregateStated === true, ...combined, zero: false, base, as, ...(onePerPanel ? { onePerPanel } : {}) }, decisions, ...(facet ? { facet } : {}) }, problems);
 }

@@ -7,6 +7,7 @@ import type { LegendSpec } from '../layout/legend.js';
 import { asLinear } from '../layout/scales.js';
 import { valueFormatter } from '../layout/number-format.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
+import { combineNote } from './combining.js';
 import { directLabels, labelGutter, labelsFit, type LineEnd } from './line-labels.js';
 import { keyToPx, seriesMarks, type SeriesPaint } from './line-marks.js';
 import { lastPresent, lineDescription } from './line-text.js';
@@ -46,11 +47,17 @@ function keyChannel(derived: DerivedLines): Channel {
   return { ...base, kind: 'band', domain: key.levels };
 }
 
+/** The chart's notes: how rows sharing a key were combined, then the view's own. */
+function notesOf<D extends DerivedLines>(view: LineView<D>, derived: D): string[] {
+  const { key, value, aggregate, combined } = derived.query;
+  return [...combineNote(key, value, aggregate, combined), ...(view.notes?.(derived) ?? [])];
+}
+
 /** Direct labels, a legend (when the names cannot be stacked in the plot's height), or neither (one line, or one line per panel titled with its name). */
 function labelMode<D extends DerivedLines>(view: LineView<D>, derived: D, base: CartesianDomains, ctx: LayoutContext): 'direct' | 'legend' | 'none' {
   if (derived.query.series === undefined || derived.query.onePerPanel) return 'none';
   return memoized(ctx, 'line\u0000label-mode', () => {
-    const probe = plotFor(base, view.notes?.(derived) ?? [], ctx).box.plot;
+    const probe = plotFor(base, notesOf(view, derived), ctx).box.plot;
     return labelsFit(derived.series.length, probe.height, ctx) ? 'direct' : 'legend';
   });
 }
@@ -125,7 +132,7 @@ export function lineChart<D extends DerivedLines>(name: string, view: LineView<D
     words(derived): FormWords {
       const title = view.valueTitle(derived);
       const fmt = valueFormatter(derived.series.flatMap((s) => { const i = lastPresent(s); return i === undefined ? [] : [s.ys[i]!]; }), derived.query.value?.format);
-      return { title: `${title} by ${inSentence(derived.query.key.label)}`, description: lineDescription(derived, view.noun, title, fmt), notes: view.notes?.(derived) ?? [] };
+      return { title: `${title} by ${inSentence(derived.query.key.label)}`, description: lineDescription(derived, view.noun, title, fmt), notes: notesOf(view, derived) };
     },
   };
 }

@@ -1,8 +1,10 @@
 import type { Decision, FacetRequest } from '../choose/types.js';
-import { diagnostic, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import { diagnostic, failure, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
+import type { Combined } from '../derive/group.js';
 import type { LineQuery } from '../derive/lines.js';
 import { refOf, type Field } from '../fields/types.js';
 import { M4_COLUMNS_PER_PX, M4_MIN_POINTS_PER_GROUP } from './line-marks.js';
+import { checkCombining, combiningDecision, repeatsOf } from './combining.js';
 import type { Planned, PlanInput } from './types.js';
 
 /** How a line chart is drawn. */
@@ -85,6 +87,17 @@ export function lineDecisions(input: PlanInput, key: Field, series: Field | unde
   return { decisions, problems, onePerPanel: layout.onePerPanel, ...(layout.facet ? { facet: layout.facet } : {}) };
 }
 
+/**
+ * Rows sharing a key (within a series) are combined as the bar's are: a sum of a value that does
+ * not add up is refused, combining with no `aggregate:` stated is warned about, and the plan
+ * keeps what was combined for the note and the axis title.
+ */
+export function lineCombining(input: PlanInput, key: Field, series: Field | undefined, value: Field | undefined): { combined: Combined | undefined; problems: Diagnostic[]; decision: Decision | undefined } {
+  const combined = repeatsOf(input, series ? [key, series] : [key], value);
+  const { brief } = input;
+  return { combined, problems: checkCombining(input, key, value, combined), decision: combiningDecision(key, value, brief.aggregate, brief.aggregateStated === true, combined) };
+}
+
 /** The line form's plan: the key along x, the series, the value along y, and whether zero is kept, each with its rule. */
 export function planLine(input: PlanInput): Outcome<Planned<LinePlan>> {
   const { fields, brief } = input;
@@ -93,6 +106,10 @@ export function planLine(input: PlanInput): Outcome<Planned<LinePlan>> {
   const { decisions, problems, onePerPanel, facet } = lineDecisions(input, key, series, value);
   const zero = zeroDecision(input, value);
   decisions.push(zero.decision);
-  if (brief.aggregate !== 'sum' || !value) decisions.push({ decision: `rows with the same key combined by ${brief.aggregate}`, rule: 'the brief asks for it (`aggregate:`)' });
-  return success({ plan: { key: refOf(key), series: series && refOf(series), value: value && refOf(value), aggregate: brief.aggregate, zero: zero.zero, ...(onePerPanel ? { onePerPanel } : {}) }, decisions, ...(facet ? { facet } : {}) }, problems);
+  const combining = lineCombining(input, key, series, value);
+  problems.push(...combining.problems);
+  if (combining.problems.some((p) => p.severity === 'error')) return failure(problems);
+  if (combining.decision) decisions.push(combining.decision);
+  const combined = combining.combined ? { combined: combining.combined } : {};
+  return success({ plan: { key: refOf(key), series: series && refOf(series), value: value && refOf(value), aggregate: brief.aggregate, aggregateStated: brief.aggregateStated === true, ...combined, zero: zero.zero, ...(onePerPanel ? { onePerPanel } : {}) }, decisions, ...(facet ? { facet } : {}) }, problems);
 }

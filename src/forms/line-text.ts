@@ -1,13 +1,13 @@
 import type { DerivedLines, LineQuery, LineSeries } from '../derive/lines.js';
 import { formatDate, inSentence, quarterName } from '../fields/labels.js';
 import { axisTitle } from '../layout/axis.js';
+import { combinedTitle } from './combining.js';
 
 /** The value axis title of a line chart. */
 export function lineValueTitle(query: LineQuery): string {
   const { value, aggregate } = query;
   if (!value) return 'Number of rows';
-  const title = axisTitle(value, value.label);
-  return aggregate === 'mean' ? `Mean ${inSentence(title)}` : title;
+  return combinedTitle(axisTitle(value, value.label), aggregate, query.combined);
 }
 
 /** A key position as a reader names it: a date at the data's grain, a number, or the ordinal level. */

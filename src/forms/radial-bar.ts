@@ -8,7 +8,7 @@ import { polarPoint, ringCommands, sectorCommands } from '../layout/polar.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { BodyMarks } from '../layout/chart.js';
 import type { Box, SceneNode, TextNode } from '../scene/types.js';
-import { barValueTitle, tooltipText } from './bar-text.js';
+import { barValueTitle, noDataNote, tooltipText } from './bar-text.js';
 import { barGroups } from './bar-plan.js';
 import { planRadialBar, type RadialBarPlan } from './radial-bar-plan.js';
 import type { FormDef } from './types.js';
@@ -69,7 +69,7 @@ function coversBar(box: Box, c: Circle, sectors: readonly Sector[]): boolean {
 function rings(derived: DerivedBars<RadialBarPlan>, c: Circle, sectors: readonly Sector[], top: ValueTicks, ctx: LayoutContext): SceneNode[] {
   const { style, measure } = ctx;
   const inner = c.outer * INNER_RING_SHARE;
-  const seam = -180 / Math.max(1, derived.bars.length);
+  const seam = -180 / Math.max(1, wheelPlaces(derived).places.length);
   const h = textBoxHeight(measure, style.text.tick);
   const guides: SceneNode[] = [];
   top.ticks.forEach((t, i) => {
@@ -85,11 +85,30 @@ function rings(derived: DerivedBars<RadialBarPlan>, c: Circle, sectors: readonly
   return guides;
 }
 
-/** One bar: a sector of its key's angle, from the inner ring out to its value's radius. */
-function sectorOf(derived: DerivedBars<RadialBarPlan>, bar: BarDatum, angle: number, top: number, c: Circle): Sector {
+/** Every place of the wheel in cycle order, with its bar (undefined where the data has none), and the places with no data. */
+function wheelPlaces(derived: DerivedBars<RadialBarPlan>): { places: { label: string; bar: BarDatum | undefined }[]; missing: string[] } {
+  const byLabel = new Map(derived.bars.map((b) => [b.label, b]));
+  const wheel = derived.query.wheel ?? [];
+  const onWheel = new Set(wheel);
+  // A bar whose key is not on the wheel (never expected) is still drawn, after the wheel's places.
+  const labels = [...wheel, ...derived.bars.map((b) => b.label).filter((l) => !onWheel.has(l))];
+  const places = labels.map((label) => ({ label, bar: byLabel.get(label) }));
+  return { places, missing: places.filter((p) => p.bar === undefined).map((p) => p.label) };
+}
+
+/** One place's sector at its angle, from the inner ring out to `value`'s radius. */
+function sectorOf(places: number, value: number, angle: number, top: number, c: Circle): Sector {
   const inner = c.outer * INNER_RING_SHARE;
-  const half = (180 / derived.bars.length) * (1 - SECTOR_PADDING);
-  return { from: angle - half, to: angle + half, inner, outer: radialBarRadius(bar.value, top, inner, c.outer) };
+  const half = (180 / places) * (1 - SECTOR_PADDING);
+  return { from: angle - half, to: angle + half, inner, outer: radialBarRadius(value, top, inner, c.outer) };
+}
+
+/** A place with no data: its whole sector outlined with a dash and left unfilled, so it reads as "nothing known", never as zero. */
+function emptySector(derived: DerivedBars<RadialBarPlan>, label: string, angle: number, s: Sector, c: Circle, ctx: LayoutContext): SceneNode {
+  return {
+    kind: 'path', id: ctx.id('bar-missing', label), role: 'bar', datum: { [derived.query.key.name]: label, [derived.valueName]: null },
+    commands: sectorCommands(c.cx, c.cy, s.inner, s.outer, s.from, s.to), fill: ctx.style.background, stroke: ctx.style.palette.others, strokeWidth: 1, dash: [3, 3], angle, radius: s.outer,
+  };
 }
 
 /** A bar's tooltip: the key and value by their labels, the value in the chart's number format (formatter made once per chart). */
@@ -115,14 +134,16 @@ function ringTitle(derived: DerivedBars<RadialBarPlan>, body: Box, ctx: LayoutCo
 
 function layoutRadial(derived: DerivedBars<RadialBarPlan>, whole: Box, ctx: LayoutContext): BodyMarks {
   const { title, rest: body } = ringTitle(derived, whole, ctx);
-  const c = circleIn(body, derived.bars.map((b) => b.label), ctx);
-  const angles = cycleAngles(derived.bars.length);
+  const { places } = wheelPlaces(derived);
+  const c = circleIn(body, places.map((p) => p.label), ctx);
+  const angles = cycleAngles(places.length);
   const inner = c.outer * INNER_RING_SHARE;
   const ticks = ticksFor(ctx, 0, max(derived.bars, (b) => b.value) ?? 0, c.outer - inner, 'vertical', derived.query.value?.format);
-  const sectors = derived.bars.map((b, i) => sectorOf(derived, b, angles[i]!, ticks.domain[1], c));
-  const guides = rings(derived, c, sectors, ticks, ctx);
-  const marks = derived.bars.map((b, i) => radialBar(derived, b, angles[i]!, sectors[i]!, c, ctx));
-  const labels = derived.bars.map((b, i) => keyLabel(b.label, angles[i]!, c, ctx));
+  const top = ticks.domain[1];
+  const sectors = places.map((p, i) => sectorOf(places.length, p.bar ? p.bar.value : top, angles[i]!, top, c));
+  const guides = rings(derived, c, sectors.filter((_, i) => places[i]!.bar !== undefined), ticks, ctx);
+  const marks = places.map((p, i) => (p.bar ? radialBar(derived, p.bar, angles[i]!, sectors[i]!, c, ctx) : emptySector(derived, p.label, angles[i]!, sectors[i]!, c, ctx)));
+  const labels = places.map((p, i) => keyLabel(p.label, angles[i]!, c, ctx));
   const plot = { x: c.cx - c.outer, y: c.cy - c.outer, width: 2 * c.outer, height: 2 * c.outer };
   return { marks, labels: [], guides: [...guides, ...labels, title], panels: [{ id: 'panel', plot, axes: [] }], diagnostics: [] };
 }
@@ -147,6 +168,7 @@ export const RADIAL_BAR: FormDef<RadialBarPlan, DerivedBars<RadialBarPlan>> = {
     const top = derived.bars.reduce<BarDatum | undefined>((a, b) => (a === undefined || b.value > a.value ? b : a), undefined);
     const low = derived.bars.reduce<BarDatum | undefined>((a, b) => (a === undefined || b.value < a.value ? b : a), undefined);
     const description = top && low && top !== low ? `${what}: largest ${top.label} (${fmt(top.value)}), smallest ${low.label} (${fmt(low.value)}).` : `${what}.`;
-    return { title: `${valueTitle} by ${inSentence(derived.query.key.label)}`, description, notes: [] };
+    const { missing } = wheelPlaces(derived);
+    return { title: `${valueTitle} by ${inSentence(derived.query.key.label)}`, description, notes: noDataNote({ ...derived.query, noData: missing }) };
   },
 };

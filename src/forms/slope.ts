@@ -17,6 +17,8 @@ export interface DerivedSlope {
   plan: SlopePlan;
   items: SlopeItem[];
   ends: [string, string];
+  /** Items left out for a value at only one end. Default: none. */
+  incomplete?: string[];
 }
 
 /** Line width without a width value, and the widest line with one, in px (common practice). */
@@ -113,6 +115,16 @@ function layoutSlope(d: DerivedSlope, area: PlotArea, ctx: LayoutContext) {
   return { marks, labels, diagnostics: [] };
 }
 
+const INCOMPLETE_NAMES = 6;
+
+/** "Not drawn, with a value at only one of 2024 and 2025: A, B." shortened to a count beyond a few names. */
+function incompleteNote(d: DerivedSlope): string[] {
+  const names = d.incomplete ?? [];
+  if (names.length === 0) return [];
+  const more = names.length - INCOMPLETE_NAMES;
+  return [`Not drawn, with a value at only one of ${d.ends[0]} and ${d.ends[1]}: ${names.slice(0, INCOMPLETE_NAMES).join(', ')}${more > 0 ? ` and ${more} more` : ''}.`];
+}
+
 function words(d: DerivedSlope) {
   const q = d.plan.query;
   const count = (dir: Direction) => d.items.filter((i) => i.direction === dir).length;
@@ -122,6 +134,7 @@ function words(d: DerivedSlope) {
     const unit = q.width.unit ? ` ${q.width.unit}` : '';
     notes.push(`Line width shows ${inSentence(q.width.label)}: the thickest line is ${fmt(max(d.items, (i) => i.width ?? 0) ?? 0)}${unit}.`);
   }
+  notes.push(...incompleteNote(d));
   return {
     title: `${valueTitle(q)}: ${d.ends[0]} and ${d.ends[1]}`,
     description: `Slope chart of ${d.items.length} items (${inSentence(q.item.label)}) from ${d.ends[0]} to ${d.ends[1]}: ${count('up')} went up, ${count('down')} went down and ${count('unchanged')} stayed the same.`,

@@ -4,7 +4,7 @@ import { ticksFor, type LayoutContext } from '../layout/kit-types.js';
 import { tickCount } from '../layout/plot-box.js';
 import { bandScale, linearScale } from '../layout/scales.js';
 import { lineHeight } from '../layout/text.js';
-import { timeScale } from '../layout/time-scale.js';
+import { timeScale, timeStep, type TimeGrain } from '../layout/time-scale.js';
 import type { Box } from '../scene/types.js';
 
 /** The height a bottom axis takes under the plot: its tick labels and its title, with their gaps. */
@@ -20,6 +20,19 @@ function inset(plot: Box, labels: readonly string[], ctx: LayoutContext): [numbe
   return [plot.x + half(0), plot.x + plot.width - half(labels.length - 1)];
 }
 
+const GRAINS: readonly TimeGrain[] = ['minute', 'hour', 'day', 'week', 'month', 'quarter', 'year'];
+
+/**
+ * The finest tick grain: the data's own when ticks picked freely would be finer than the data
+ * (monthly data ticked "13 Jan, 27 Jan"), else free. Ticks already at the data's grain or coarser
+ * keep their scale, so a chart whose ticks were right is drawn as before.
+ */
+function finestFor(derived: DerivedStream, extent: [number, number], width: number): TimeGrain {
+  const grain = derived.grain === undefined || derived.grain === 'second' ? 'minute' : derived.grain;
+  const free = timeStep(Math.min(...extent), Math.max(...extent), tickCount(width, 'horizontal')).grain;
+  return GRAINS.indexOf(free) < GRAINS.indexOf(grain) ? grain : 'minute';
+}
+
 /**
  * The key axis under a streamgraph and each key's x: a time axis for dates, a linear one for
  * numbers, evenly spaced bands for ordered levels.
@@ -30,10 +43,11 @@ export function streamAxis(derived: DerivedStream, plot: Box, body: Box, ctx: La
   const extent: [number, number] = [keys[0]!.at, keys[keys.length - 1]!.at];
   const base = { name: 'key', field: time.name, title: time.label };
   if (time.type === 'temporal') {
-    const probe = timeScale(extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'));
+    const finest = finestFor(derived, extent, plot.width);
+    const probe = timeScale(extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'), finest);
     const [l, r] = inset(plot, probe.labels, ctx);
-    const scale = timeScale(extent, [l, r], tickCount(r - l, 'horizontal'));
-    return { xs: keys.map((k) => scale.map(k.at)), axis: drawTimeAxis('bottom', scale, { kind: 'time', ...base, extent }, plot, body, ctx) };
+    const scale = timeScale(extent, [l, r], tickCount(r - l, 'horizontal'), finest);
+    return { xs: keys.map((k) => scale.map(k.at)), axis: drawTimeAxis('bottom', scale, { kind: 'time', ...base, extent, ...(derived.grain ? { grain: derived.grain } : {}) }, plot, body, ctx) };
   }
   if (time.type === 'quantitative') {
     const channel = { kind: 'linear' as const, ...base, extent, format: time.format };

@@ -88,6 +88,18 @@ function legendOf(derived: Derived, ctx: LayoutContext): LegendSpec | undefined 
   return { kind: 'categorical', field: derived.query.series.name, title: derived.query.series.label, entries };
 }
 
+const GAP_NAMES = 4;
+
+/** A list of names, shortened to the first few and a count. */
+const someOf = (names: readonly string[]) => `${names.slice(0, GAP_NAMES).join(', ')}${names.length > GAP_NAMES ? ` and ${names.length - GAP_NAMES} more` : ''}`;
+
+/** The notes on gaps: periods with no rows at all, then the series and periods with no value; both drawn as zero thickness, not smoothed over. */
+function streamNotes(derived: DerivedStream): string[] {
+  const skipped = derived.skipped.length ? [`No rows for ${someOf(derived.skipped)}: every layer narrows to zero thickness there.`] : [];
+  const empty = derived.empty.length ? [`No data for ${someOf(derived.empty.map((e) => `${e.series} in ${e.key}`))}: drawn as zero thickness, not smoothed over.`] : [];
+  return [...skipped, ...empty];
+}
+
 /**
  * The streamgraph: one layer per series along an ordered key, stacked around the baseline of
  * least weighted wiggle in inside-out order, with smooth edges that never cross.
@@ -108,7 +120,7 @@ export const STREAM: FormDef<StreamPlan, Derived> = {
     const totals = derived.layers.map((l) => ({ name: l.name, total: l.values.reduce((a, b) => a + b, 0) }));
     const top = totals.reduce((a, b) => (b.total > a.total ? b : a));
     const [first, last] = [derived.keys[0]!.label, derived.keys[derived.keys.length - 1]!.label];
-    const notes = derived.emptyCells ? [`${derived.emptyCells} pair${derived.emptyCells === 1 ? '' : 's'} of ${inSentence(time.label)} and ${inSentence(series.label)} with no row ${derived.emptyCells === 1 ? 'is' : 'are'} drawn as zero thickness.`] : [];
+    const notes = streamNotes(derived);
     return {
       title: `${valueTitle} by ${inSentence(series.label)} over ${inSentence(time.label)}`,
       description: `Streamgraph of ${inSentence(valueTitle)} for ${n} series of ${inSentence(series.label)}, from ${first} to ${last}; the largest in total is ${top.name}.`,

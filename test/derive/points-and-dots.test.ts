@@ -41,8 +41,9 @@ describe('deriveDotRows', () => {
   it('one row per key, values combined by the aggregate, sorted by the last value, largest first', async () => {
     const { table, field } = await tableOf(rows, { intent: 'compare', keys: 'k', values: ['p', 'q'] });
     const r = deriveDotRows(table, { key: field('k'), values: [field('p'), field('q')], order: 'value', aggregate: 'mean' });
-    expect(r.rows.map((x) => [x.label, ...x.values])).toEqual([['c', 1, 7], ['a', 2, 5], ['b', 5, 4]]);
-    // d has no p: left out, with the warning naming its row; a has two rows: combined, and said.
+    expect(r.rows.map((x) => [x.label, ...x.values])).toEqual([['c', 1, 7], ['a', 2, 5], ['b', 5, 4], ['d', NaN, 2]]);
+    // d has no p: its q dot is kept (sorted by the value it has), listed as partial, with the warning naming its row; a has two rows: combined, and said.
+    expect(r.partial.map((x) => x.label)).toEqual(['d']);
     expect(r.diagnostics.map((d) => d.code).sort()).toEqual(['derive.aggregated', 'derive.missing-values']);
   });
 
