@@ -38,6 +38,7 @@ const fieldHint: SchemaNode = {
     format: { type: 'string', description: 'd3-format specifier for numbers, e.g. ",d".' },
     order: { type: 'array', items: { anyOf: [{ type: 'string' }, { type: 'number' }] }, description: 'Level order for ordinal or cyclic fields.' },
     label: { type: 'string', description: 'Readable name used in axis titles.' },
+    decimal: { type: 'string', enum: [',', '.'], description: 'The column\'s decimal mark: "," reads "4,2" as 4.2 in any file. Default: "." (detected per column in semicolon-separated files).' },
     additive: { type: 'boolean', description: 'Whether values of this column may be added up (false for rates, shares, temperatures, pH). Default: false for the units %, ‰, °C, °F, K, pH and dB, true otherwise.' },
     zero: { type: 'string', enum: ['meaningful', 'arbitrary'], description: 'Whether zero means none or is an arbitrary point (e.g. °C); a line leaves an arbitrary zero out of its axis.' },
     midpoint: { type: 'number', description: 'A meaningful centre of the values: colour diverges from it.' },

@@ -50,6 +50,8 @@ export interface FieldHint {
   order?: (string | number)[];
   /** Human-readable name used in titles. Default: the column name made readable. */
   label?: string;
+  /** The column's decimal mark: "," reads "4,2" as 4.2 (and "1.050,5" as 1050.5) in any file. Default: "." (in semicolon-separated files, detected per column). */
+  decimal?: ',' | '.';
   /** Whether values may be added up; a sum of a non-additive value is refused. Default: false for the units %, ‰, °C, °F, K, pH and dB, true otherwise. */
   additive?: boolean;
   /** Whether the value's zero means "none" ('meaningful') or is an arbitrary point of its scale ('arbitrary', e.g. °C): a line's value axis leaves an arbitrary zero out. Default: 'meaningful'. */

@@ -1,7 +1,7 @@
 import type { FieldType } from '../brief/types.js';
 import { describeRows, diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { splitAffix } from './affix.js';
-import { isMissingText, parseBooleanText } from './cells.js';
+import { isMissingText, parseBooleanText, parseNumberText, type DecimalMark } from './cells.js';
 import { patternReader, readDateText, slashDates, type DateReader } from './date-format.js';
 import { decimalMarkOf, eitherMark, numberReader, type NumberReader } from './decimal.js';
 import type { RawCell, RawTable } from './parse.js';
@@ -167,12 +167,14 @@ function unreadableProblem(name: string, column: Column, cells: RawCell[], unrea
  * field hint's type wins. Slash dates stay text, with a warning, until a format says their order. A column of mostly numbers keeps its numbers and warns about the rest by row. In a
  * semicolon-separated file each numeric column's decimal mark is decided from its cells.
  */
-export function inferTable(raw: RawTable, origin: TableOrigin, hints: ReadonlyMap<string, FieldType | undefined>, patterns: ReadonlyMap<string, string> = new Map()): { table: Table; diagnostics: Diagnostic[] } {
+export function inferTable(raw: RawTable, origin: TableOrigin, hints: ReadonlyMap<string, FieldType | undefined>, patterns: ReadonlyMap<string, string> = new Map(), decimals: ReadonlyMap<string, DecimalMark> = new Map()): { table: Table; diagnostics: Diagnostic[] } {
   const diagnostics: Diagnostic[] = [];
   const columns = raw.names.map((name, c) => {
     const cells = raw.rows.map((row) => row[c] ?? null);
     const forced = forcedType(hints.get(name));
-    const reader = readerFor(raw, cells, forced, name, origin);
+    // A decimal mark the brief declares (`fields.<col>.decimal`) is read as declared, in any file.
+    const declared = decimals.get(name);
+    const reader = declared ? (t: string) => parseNumberText(t, declared) : readerFor(raw, cells, forced, name, origin);
     if (typeof reader !== 'function') diagnostics.push(reader);
     const readNumber = typeof reader === 'function' ? reader : eitherMark;
     const guess = forced ? { type: forced, mixed: false } : guessType(cells, readNumber);

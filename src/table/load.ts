@@ -108,6 +108,11 @@ function typeHints(fields: Record<string, FieldHint>): Map<string, FieldHint['ty
   return new Map(Object.entries(fields).map(([k, v]) => [k, v?.type]));
 }
 
+/** Decimal marks the brief declares for its columns (`fields.<col>.decimal`). */
+function decimalMarks(fields: Record<string, FieldHint>): Map<string, ',' | '.'> {
+  return new Map(Object.entries(fields).flatMap(([k, v]) => (v?.decimal ? [[k, v.decimal] as [string, ',' | '.']] : [])));
+}
+
 /**
  * The table stage: a data source (file relative to the brief, stdin, or inline rows) → a typed,
  * columnar `Table`. Every coded error names the file and line.
@@ -125,6 +130,6 @@ export async function readTable(source: DataSource, fields: Record<string, Field
     raw = parseTableText(read.value.text, origin);
   }
   if (!raw.ok) return failure(raw.diagnostics);
-  const { table, diagnostics } = inferTable(raw.value, origin, typeHints(fields), datePatterns(fields));
+  const { table, diagnostics } = inferTable(raw.value, origin, typeHints(fields), datePatterns(fields), decimalMarks(fields));
   return hasErrors(diagnostics) ? failure(diagnostics) : success(table, diagnostics);
 }

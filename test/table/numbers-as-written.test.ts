@@ -45,3 +45,15 @@ describe('numbers as people write them', () => {
     expect(codes(formatted)).not.toContain('choice.percent-of-fractions');
   });
 });
+
+describe('a declared decimal mark', () => {
+  it('fields.<col>.decimal: "," reads "4,2" as 4.2 in a comma-separated file', async () => {
+    const { renderBrief } = await import('../../src/pipeline/render.js');
+    const { env, memoryFiles } = await import('../helpers.js');
+    const files = memoryFiles({ 'd.csv': 'k,v\na,"4,2"\nb,"1.050,5"\n' });
+    const r = await renderBrief({ brief: 'data: d.csv\nintent: compare\nkeys: k\nvalues: v\nfields: { v: { decimal: ",", unit: kg } }\n', file: 'b.yaml' }, { ...env, table: files });
+    expect(r.ok).toBe(true);
+    const bars = r.scene!.root.children.flatMap(function walk(n): { role: string; datum?: Record<string, unknown> }[] { return [n, ...('children' in n ? n.children.flatMap(walk) : [])]; }).filter((n) => n.role === 'bar');
+    expect(bars.map((b) => b.datum!.v).sort()).toEqual([1050.5, 4.2]);
+  });
+});
