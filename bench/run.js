@@ -40,7 +40,6 @@ const matrix = node(['bench/matrix.js']);
 
 const f = (ms) => (ms < 1 ? ms.toFixed(2) : ms < 10 ? ms.toFixed(1) : ms.toFixed(0));
 const x = (a, b) => `${(a / b).toFixed(2)}×`;
-const mb = (bytes) => `${(bytes / 1e6).toFixed(2)} MB`;
 const s = (t) => `${(t.wall / 1000).toFixed(2)} s (CPU ${(t.cpu / 1000).toFixed(2)} s)`;
 const table = [
   `Measured ${new Date().toISOString().slice(0, 10)}: ${process.platform}/${process.arch}, Node ${process.version}, ${cpus().length} cores; medians. Chart: demo-data/hut-overnights (40 bars, 720 × 900).`,

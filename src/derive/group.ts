@@ -88,3 +88,32 @@ export function groupRows(table: Table, query: GroupQuery): Grouped {
   const noValue = [...missingValueKeys].filter(([id]) => !groups.has(id)).map(([, labels]) => labels.join(' / '));
   return { groups: [...groups.values()], diagnostics, noValue };
 }
+
+/**
+ * Which keys have several rows (with a usable value), counted without grouping the rows: a
+ * million-row series is counted in one pass over a Map of counts, where grouping would build a
+ * million groups. Undefined when no key repeats.
+ */
+export function repeatedKeys(table: Table, query: GroupQuery): Combined | undefined {
+  const keyColumns = query.keys.map((k) => columnOf(table, k.name)!);
+  const valueColumn = query.value ? columnOf(table, query.value.name)! : undefined;
+  const counts = new Map<string, number>();
+  for (let i = 0; i < table.rowCount; i++) {
+    if (valueColumn && typeof valueColumn.values[i] !== 'number') continue;
+    let id = '';
+    let absent = false;
+    for (const c of keyColumns) {
+      const label = keyText(c, i);
+      if (label === null) { absent = true; break; }
+      id += `${label}\u0000`;
+    }
+    if (!absent) counts.set(id, (counts.get(id) ?? 0) + 1);
+  }
+  let keys = 0;
+  let most = 1;
+  for (const n of counts.values()) if (n > 1) { keys++; most = Math.max(most, n); }
+  if (keys === 0) return undefined;
+  let every = true;
+  for (const n of counts.values()) if (n !== most) { every = false; break; }
+  return { keys, most, every };
+}

@@ -2,7 +2,7 @@ import { max } from 'd3-array';
 import type { Aggregate } from '../brief/types.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { AGGREGATORS } from '../derive/aggregate.js';
-import { groupRows, type Combined, type Grouped } from '../derive/group.js';
+import { repeatedKeys, type Combined, type Grouped } from '../derive/group.js';
 import { refOf, type Field, type FieldRef } from '../fields/types.js';
 import { inSentence } from '../fields/labels.js';
 import type { PlanInput } from './types.js';
@@ -23,11 +23,11 @@ export function combinedOf(grouped: Grouped): Combined | undefined {
  */
 export function repeatsOf(input: PlanInput, keys: Field[], value: Field | undefined, grouped?: Grouped): Combined | undefined {
   const by = input.brief.facet?.by;
-  const group = (fields: Field[]) => groupRows(input.table, { keys: fields.map(refOf), value: value && refOf(value) });
-  if (by === undefined) return combinedOf(grouped ?? group(keys));
+  const repeats = (fields: Field[]) => repeatedKeys(input.table, { keys: fields.map(refOf), value: value && refOf(value) });
+  if (by === undefined) return grouped ? combinedOf(grouped) : repeats(keys);
   const facet = input.fields.all.find((f) => f.name === by);
   if (!facet || input.brief.keys.includes(by)) return undefined;
-  return combinedOf(group([...keys, facet]));
+  return repeats([...keys, facet]);
 }
 
 /** Whether a sum of the value means nothing: its unit does not add up (%, °C, pH), or its zero is arbitrary. */
