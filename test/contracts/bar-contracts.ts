@@ -49,6 +49,4 @@ export function checkBarContracts(dump: SceneDump, valueName: string, keyName: s
   }
 }
 
-/** No text outside the canvas, and no two texts overlap: a contract of every chart. */
-export const checkTextsClear = checkTexts;
 

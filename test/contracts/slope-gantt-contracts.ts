@@ -1,7 +1,7 @@
 import { expect } from 'vitest';
 import type { DumpMark, SceneDump } from '../../src/scene/dump.js';
 import type { AxisInfo } from '../../src/scene/types.js';
-import { checkTextsClear } from './bar-contracts.js';
+import { checkTexts } from './text-contracts.js';
 
 /** A continuous axis as a function from value (or epoch ms) to px, read from the dump alone. */
 export function axisPx(axis: AxisInfo): (v: number) => number {
@@ -41,7 +41,7 @@ export function checkSlopeContracts(dump: SceneDump, value: string | [string, st
   for (const dir of ['up', 'down', 'unchanged']) expect(stroke(dir).size).toBeLessThanOrEqual(1);
   const [up, down] = [[...stroke('up')][0], [...stroke('down')][0]];
   if (up && down) expect(up).not.toBe(down);
-  checkTextsClear(dump);
+  checkTexts(dump);
 }
 
 const time = (v: unknown) => (typeof v === 'number' ? v : Date.parse(String(v)));
@@ -70,5 +70,5 @@ export function checkGanttContracts(dump: SceneDump, names: { task: string; star
     expect(Math.abs(s.x - to.x!)).toBeLessThanOrEqual(0.5);
     expect(Math.abs(s.y - (to.y! + to.height! / 2))).toBeLessThanOrEqual(0.5);
   }
-  checkTextsClear(dump);
+  checkTexts(dump);
 }
