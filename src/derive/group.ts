@@ -109,11 +109,14 @@ export function repeatedKeys(table: Table, query: GroupQuery): Combined | undefi
     }
     if (!absent) counts.set(id, (counts.get(id) ?? 0) + 1);
   }
+  return combinedFromCounts([...counts.values()]);
+}
+
+/** Which keys repeat, from the number of rows of each key: how many have several, the most, and whether every key has that many. */
+export function combinedFromCounts(counts: readonly number[]): Combined | undefined {
   let keys = 0;
   let most = 1;
-  for (const n of counts.values()) if (n > 1) { keys++; most = Math.max(most, n); }
+  for (const n of counts) if (n > 1) { keys++; most = Math.max(most, n); }
   if (keys === 0) return undefined;
-  let every = true;
-  for (const n of counts.values()) if (n !== most) { every = false; break; }
-  return { keys, most, every };
+  return { keys, most, every: counts.every((n) => n === most) };
 }

@@ -1,18 +1,14 @@
-import { max } from 'd3-array';
 import type { Aggregate } from '../brief/types.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { AGGREGATORS } from '../derive/aggregate.js';
-import { repeatedKeys, type Combined, type Grouped } from '../derive/group.js';
+import { combinedFromCounts, repeatedKeys, type Combined, type Grouped } from '../derive/group.js';
 import { refOf, type Field, type FieldRef } from '../fields/types.js';
 import { inSentence } from '../fields/labels.js';
 import type { PlanInput } from './types.js';
 
 /** What combining rows by key does to the chart: which keys repeat, and how many rows the most repeated has. */
 export function combinedOf(grouped: Grouped): Combined | undefined {
-  const repeated = grouped.groups.filter((g) => g.values.length > 1);
-  if (repeated.length === 0) return undefined;
-  const most = max(repeated, (g) => g.values.length)!;
-  return { keys: repeated.length, most, every: grouped.groups.every((g) => g.values.length === most) };
+  return combinedFromCounts(grouped.groups.map((g) => g.values.length));
 }
 
 /**
