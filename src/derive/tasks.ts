@@ -52,7 +52,7 @@ export function sortTasks(tasks: readonly Task[], order: TaskQuery['order']): Ta
   return [...tasks].sort(order === 'label' ? (a, b) => compareNatural(a.label, b.label) : byStart);
 }
 
-function rowsProblem(code: 'derive.task-end-before-start' | 'derive.task-duplicate' | 'derive.predecessor-unknown' | 'derive.predecessor-overlap', rows: number[], table: Table, what: string, details: { field: string; hint: string; found?: string }): Diagnostic {
+function rowsProblem(code: 'derive.task-end-before-start' | 'derive.task-duplicate' | 'derive.predecessor-unknown' | 'derive.predecessor-overlap' | 'derive.predecessor-cycle', rows: number[], table: Table, what: string, details: { field: string; hint: string; found?: string }): Diagnostic {
   return diagnostic(code, `${describeRows(rows, table.positionNoun)}: ${what}`, { file: table.origin.file, rows, ...details });
 }
 
@@ -99,6 +99,28 @@ function checkTasks(tasks: readonly Task[], table: Table, query: TaskQuery): Dia
   return problems;
 }
 
+/**
+ * The first circle of predecessors, in the order they wait on each other, or undefined. Each
+ * task names at most one predecessor, so following the names from any task either ends or comes
+ * back to a task already on the path.
+ */
+function firstCycle(linked: readonly Task[], byName: ReadonlyMap<string, Task>): Task[] | undefined {
+  const done = new Set<string>();
+  for (const start of linked) {
+    const path: Task[] = [];
+    const onPath = new Map<string, number>();
+    let t: Task | undefined = start;
+    while (t && !done.has(t.label)) {
+      if (onPath.has(t.label)) return path.slice(onPath.get(t.label)!);
+      onPath.set(t.label, path.length);
+      path.push(t);
+      t = t.after === undefined ? undefined : byName.get(t.after);
+    }
+    for (const p of path) done.add(p.label);
+  }
+  return undefined;
+}
+
 /** The dependencies the predecessor column names: unknown names are errors, a start before the predecessor's end is warned. */
 function linkTasks(tasks: readonly Task[], table: Table, query: TaskQuery, problems: Diagnostic[]): Dependency[] {
   if (!query.after) return [];
@@ -109,6 +131,13 @@ function linkTasks(tasks: readonly Task[], table: Table, query: TaskQuery, probl
     const first = unknown[0]!;
     problems.push(rowsProblem('derive.predecessor-unknown', unknown.map((t) => t.row), table, `the predecessor ${JSON.stringify(first.after)} of ${JSON.stringify(first.label)} ${first.after === first.label ? 'is the task itself' : 'is not a task of the table'}`, {
       field: query.after.name, found: first.after!, hint: `name a task of \`${query.task.name}\` in \`${query.after.name}\`, or leave the cell empty`,
+    }));
+    return [];
+  }
+  const cycle = firstCycle(linked, byName);
+  if (cycle) {
+    problems.push(rowsProblem('derive.predecessor-cycle', cycle.map((t) => t.row), table, `the predecessors go round in a circle: ${[...cycle, cycle[0]!].map((t) => JSON.stringify(t.label)).join(' after ')}`, {
+      field: query.after.name, found: cycle.map((t) => t.label).join(', '), hint: `a task cannot wait for itself: clear the \`${query.after.name}\` cell of one task in the circle`,
     }));
     return [];
   }

@@ -110,6 +110,7 @@ export const CATALOGUE = {
   'derive.task-duplicate': 'error',
   'derive.predecessor-unknown': 'error',
   'derive.predecessor-overlap': 'warning',
+  'derive.predecessor-cycle': 'error',
   'derive.negative-area': 'error',
   'derive.fit-not-possible': 'warning',
   'derive.too-many-dots': 'error',

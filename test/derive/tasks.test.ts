@@ -65,6 +65,20 @@ describe('task derivation', () => {
     expect(itself.diagnostics.find((d) => d.code === 'derive.predecessor-unknown')).toMatchObject({ rows: [1], found: 'a' });
   });
 
+  it('a circle of predecessors is an error naming every task on it and their rows (regression: a circle was drawn as overlapping connectors)', async () => {
+    const rows = [{ t: 'x', s: 0, e: 1, p: '' }, { t: 'a', s: 1, e: 2, p: 'c' }, { t: 'b', s: 2, e: 3, p: 'a' }, { t: 'c', s: 3, e: 4, p: 'b' }, { t: 'd', s: 4, e: 5, p: 'c' }];
+    const r = await derive(rows, { after: 'p' });
+    expect(r.ok).toBe(false);
+    const d = r.diagnostics.find((x) => x.code === 'derive.predecessor-cycle');
+    expect(d).toMatchObject({ field: 'p', severity: 'error' });
+    expect(new Set(d!.rows)).toEqual(new Set([2, 3, 4]));
+    expect(d!.found!.split(', ').sort()).toEqual(['a', 'b', 'c']);
+    // A chain that only leads into the circle (d after c) is not part of it.
+    expect(d!.found).not.toContain('d');
+    const chain = await derive(rows.map((row) => (row.t === 'a' ? { ...row, p: 'x' } : row)), { after: 'p' });
+    expect(chain.diagnostics.some((x) => x.code === 'derive.predecessor-cycle')).toBe(false);
+  });
+
   it('dependencies come in the order of their successors, whatever the order of the rows (regression: shuffled rows drew connectors in another order)', async () => {
     const rows = [{ t: 'c', s: 2, e: 3, p: 'b' }, { t: 'a', s: 0, e: 1, p: '' }, { t: 'b', s: 1, e: 2, p: 'a' }];
     const r = await derive(rows, { after: 'p' });
