@@ -9,6 +9,15 @@ export function isMissingText(text: string): boolean {
   return MISSING_TOKENS.has(text.trim().toLowerCase());
 }
 
+/**
+ * A cell's text on one line: line breaks, tabs and other control characters become one space
+ * each run, since a chart label is drawn on one line and a control character has no glyph.
+ */
+export function oneLine(text: string): string {
+  // eslint-disable-next-line no-control-regex
+  return text.replace(/ *[\u0000-\u001f\u007f-\u009f\u2028\u2029]+ */g, ' ').trim();
+}
+
 /** The mark between a number's whole and fractional parts. */
 export type DecimalMark = '.' | ',';
 

@@ -1,7 +1,7 @@
 import type { FieldType } from '../brief/types.js';
 import { describeRows, diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { splitAffix } from './affix.js';
-import { isMissingText, parseBooleanText, parseNumberText, type DecimalMark } from './cells.js';
+import { isMissingText, oneLine, parseBooleanText, parseNumberText, type DecimalMark } from './cells.js';
 import { patternReader, readDateText, slashDates, type DateReader } from './date-format.js';
 import { decimalMarkOf, eitherMark, numberReader, type NumberReader } from './decimal.js';
 import type { RawCell, RawTable } from './parse.js';
@@ -34,7 +34,7 @@ function readAs(type: ColumnType, cell: RawCell, readNumber: NumberReader, readD
     const b = typeof cell === 'boolean' ? cell : typeof cell === 'string' ? parseBooleanText(cell) : undefined;
     return b === undefined ? undefined : { value: b };
   }
-  return { value: String(cell).trim() };
+  return { value: oneLine(String(cell)) };
 }
 
 /**
@@ -93,7 +93,7 @@ function buildColumn(name: string, type: ColumnType, cells: RawCell[], readNumbe
   let unit: string | undefined;
   let quarters: boolean | undefined;
   cells.forEach((cell, i) => {
-    text.push(cell === null || (typeof cell === 'number' && !Number.isFinite(cell)) ? null : String(cell).trim());
+    text.push(cell === null || (typeof cell === 'number' && !Number.isFinite(cell)) ? null : oneLine(String(cell)));
     let r = readAs(type, cell, readNumber, readDate);
     // One column, one unit sign: "$640" beside "€4.2" is not a number to compare.
     const sign = type === 'number' && r && typeof cell === 'string' ? splitAffix(cell).unit : undefined;

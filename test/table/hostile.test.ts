@@ -132,3 +132,15 @@ describe('hostile inline rows give coded errors, never exceptions', () => {
     });
   }
 });
+
+describe('line breaks inside cells', () => {
+  it('a quoted CSV label with a line break, tab or control character is drawn on one line, not with a missing-glyph box (regression)', async () => {
+    const t = await readCsv('region,v\n"North\r\nshore",3\n"South\tbay",4\n"East\u0007 end",5\n');
+    expect(t.ok).toBe(true);
+    const col = columnOf(t.ok ? t.value : (undefined as never), 'region')!;
+    expect(col.values).toEqual(['North shore', 'South bay', 'East end']);
+    const r = await renderRows({ intent: 'compare', keys: ['region'], values: 'v', fields: { v: { unit: 'boats' } } }, [{ region: 'North\nshore', v: 3 }, { region: 'South', v: 4 }]);
+    expect(codes(r)).toEqual([]);
+    expect(r.svg).toContain('North shore');
+  });
+});
