@@ -19,22 +19,36 @@ export interface DerivedParallel {
   extents: [number, number][];
 }
 
-/** Each axis's title, shortened to the room it has; in two staggered rows when one row is too tight. */
-function axisTitles(derived: DerivedParallel, spacing: number, body: Box, ctx: LayoutContext): { titles: { text: string; full: string; width: number }[]; rows: number } {
+/** Most rows the axis titles are staggered over before they are shortened. */
+const MAX_TITLE_ROWS = 3;
+
+type Title = { text: string; full: string; width: number };
+
+/** Each title shortened to `room` px. */
+function shortened(full: readonly string[], room: number, ctx: LayoutContext): Title[] {
+  const st = ctx.style.text.axisTitle;
+  return full.map((f) => {
+    const text = truncateText(ctx.measure, f, st, room);
+    return { text, full: f, width: ctx.measure.width(text, st.size, st.weight) };
+  });
+}
+
+/**
+ * Each axis's title, in as few staggered rows (up to MAX_TITLE_ROWS) as let every title stand
+ * whole between its row's neighbours `rows × spacing` apart; shortened only beyond that.
+ */
+function axisTitles(derived: DerivedParallel, spacing: number, body: Box, ctx: LayoutContext): { titles: Title[]; rows: number } {
   const { measure, style } = ctx;
   const st = style.text.axisTitle;
   const gap = style.spacing.tickGap;
   const full = derived.plan.attributes.map((a) => axisTitle(a, a.label));
-  const rows = full.some((t) => measure.width(t, st.size, st.weight) > spacing - gap) ? 2 : 1;
-  const room = Math.max(0, Math.min(body.width, rows * spacing - gap));
-  const titles = full.map((f) => {
-    const text = truncateText(measure, f, st, room);
-    return { text, full: f, width: measure.width(text, st.size, st.weight) };
-  });
-  return { titles, rows };
+  const widest = max(full, (t) => measure.width(t, st.size, st.weight)) ?? 0;
+  let rows = 1;
+  while (rows < MAX_TITLE_ROWS && widest > rows * spacing - gap) rows++;
+  return { titles: shortened(full, Math.max(0, Math.min(body.width, rows * spacing - gap)), ctx), rows };
 }
 
-interface Frame { xs: number[]; top: number; bottom: number; titles: { text: string; full: string; width: number }[]; rows: number; scales: LinearScale[] }
+interface Frame { xs: number[]; top: number; bottom: number; titles: Title[]; rows: number; scales: LinearScale[] }
 
 /** Where the axes stand: evenly spaced, inset so the first axis's tick labels and the end titles stay inside the body. */
 function frameOf(derived: DerivedParallel, body: Box, ctx: LayoutContext): Frame {
@@ -51,7 +65,10 @@ function frameOf(derived: DerivedParallel, body: Box, ctx: LayoutContext): Frame
   const right = body.x + body.width - titles[n - 1]!.width / 2;
   const xs = derived.plan.attributes.map((_, k) => (n === 1 ? (left + right) / 2 : left + ((right - left) * k) / (n - 1)));
   const scales = ticks.map((vt, k) => linearScale(vt, derived.plan.flips[k] ? [top, bottom] : [bottom, top]));
-  return { xs, top, bottom, titles, rows, scales };
+  // The axes stand closer than the first guess (the ends are inset), so the titles are fitted again to the spacing drawn.
+  const drawn = n > 1 ? (right - left) / (n - 1) : body.width;
+  const fitted = shortened(titles.map((t) => t.full), Math.max(0, Math.min(body.width, rows * drawn - style.spacing.tickGap)), ctx);
+  return { xs, top, bottom, titles: fitted, rows, scales };
 }
 
 /** One axis: its line, tick marks and labels (only the ends where labels would crowd), title, and a mark when reversed. */
@@ -69,7 +86,7 @@ function drawAxis(derived: DerivedParallel, f: Frame, k: number, ctx: LayoutCont
     const end = i === 0 || i === scale.ticks.length - 1;
     if (scale.shown[i] && (!crowded || end)) guides.push(textNode(measure, { id: id(`tick-${attr.name}`, scale.labels[i]!), role: 'tick', text: scale.labels[i]!, style: tick, x: x - 3 - style.spacing.tickGap / 2, top: y - h / 2, anchor: 'end' }));
   });
-  const row = f.rows === 2 ? k % 2 : 0;
+  const row = k % f.rows;
   const lh = lineHeight(style.text.axisTitle, style.spacing.lineHeight);
   const title: TextNode = { ...textNode(measure, { id: id('axis-title', attr.name), role: 'axis-title', text: f.titles[k]!.text, style: style.text.axisTitle, x, top: f.top - h / 2 - style.spacing.tickGap - (f.rows - row) * lh + (lh - textBoxHeight(measure, style.text.axisTitle)) / 2, anchor: 'middle' }) };
   if (title.text !== f.titles[k]!.full) title.full = f.titles[k]!.full;

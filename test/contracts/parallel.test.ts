@@ -75,4 +75,23 @@ describe('parallel coordinates contracts', () => {
       }
     });
   }
+
+  it('fourteen long attribute names stand in staggered rows without overlapping, shortened only where three rows are not enough (regression: two rows overlapped)', async () => {
+    const names = ['Dissolved oxygen (mg/L)', 'Water temperature at surface', 'Nitrate concentration', 'Phosphate concentration', 'Turbidity (nephelometric)', 'Conductivity at 25 degrees', 'Chlorophyll a fluorescence', 'Total suspended solids', 'Biochemical oxygen demand', 'Ammonium nitrogen', 'Secchi disc depth', 'Faecal coliform count', 'Silicate concentration', 'Dissolved organic carbon'];
+    const rows = Array.from({ length: 30 }, (_, i) => Object.fromEntries([['station', `S${i}`], ...names.map((n, j) => [n, ((i * 7 + j * 13) % 23) + j])]));
+    const r = await renderRows({ intent: 'profile', keys: 'station', values: names, form: 'parallel' }, rows);
+    expect(r.ok).toBe(true);
+    expect(r.diagnostics.map((d) => d.code)).not.toContain('layout.text-overlap');
+    const titles = dumpScene(r.scene!).texts.filter((t) => t.role === 'axis-title');
+    expect(titles).toHaveLength(14);
+    for (let i = 0; i < titles.length; i++) {
+      for (let j = i + 1; j < titles.length; j++) {
+        const [a, b] = [titles[i]!, titles[j]!];
+        const apart = a.x + a.width <= b.x + 1e-6 || b.x + b.width <= a.x + 1e-6 || a.y + a.height <= b.y + 1e-6 || b.y + b.height <= a.y + 1e-6;
+        expect(apart, `${a.text} / ${b.text}`).toBe(true);
+      }
+    }
+    expect(new Set(titles.map((t) => t.y)).size).toBe(3);
+    expect(titles.filter((t) => names.includes(t.text)).length).toBeGreaterThanOrEqual(7);
+  });
 });
