@@ -12,7 +12,9 @@ function checkValues(fields: Fields, brief: ResolvedBrief): Diagnostic[] {
     const numeric = quantitativeColumns(fields, brief);
     return [diagnostic('choice.needs-two-values', `a correlation needs two values, x and y; the brief gives ${fields.values.length}`, {
       path: '/values', found: fields.values.map((v) => v.name).join(', ') || 'none', expected: 'two numeric columns: `values: [x, y]`',
-      hint: numeric.length >= 2 ? `use \`values: [${numeric[0]}, ${numeric[1]}]\`` : 'name two numeric columns in `values: [x, y]`',
+      hint: fields.values.length > 2
+        ? `to see every pair of the ${fields.values.length} values, use \`intent: profile\` (a scatterplot matrix); or pick two: \`values: [${fields.values[0]!.name}, ${fields.values[1]!.name}]\``
+        : numeric.length >= 2 ? `use \`values: [${numeric[0]}, ${numeric[1]}]\`` : 'name two numeric columns in `values: [x, y]`',
     })];
   }
   return fields.values.filter((v) => v.type !== 'quantitative').map((v) => diagnostic('choice.value-not-quantitative', `the value \`${v.name}\` is ${v.type}, but a scatter plot places points by numbers`, {

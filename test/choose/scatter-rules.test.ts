@@ -27,6 +27,13 @@ describe('rules for the correlation intent', () => {
     expect(r.diagnostics[0]!.hint).toMatch(/values: \[/);
   });
 
+  it('with three or more values, points to the scatterplot matrix (intent: profile) that shows every pair', async () => {
+    const many = rows.map((row, i) => ({ ...row, extra: i * 3 }));
+    const r = await renderRows({ ...brief, values: ['h', 'w', 'extra'] }, many);
+    expect(r.diagnostics[0]).toMatchObject({ code: 'choice.needs-two-values', path: '/values' });
+    expect(r.diagnostics[0]!.hint).toMatch(/intent: profile/);
+  });
+
   it('refuses a text value, and a text area', async () => {
     expect((await renderRows({ ...brief, values: ['h', 'kind'] }, rows)).diagnostics[0]).toMatchObject({ code: 'choice.value-not-quantitative', path: '/values' });
     expect((await renderRows({ ...brief, area: 'kind' }, rows)).diagnostics[0]).toMatchObject({ code: 'choice.value-not-quantitative', path: '/area' });
