@@ -30,9 +30,15 @@ const GAP = 8;
 const PAD = 4;
 const POINT_AREA = 16;
 
-interface Grid { x0: number; y0: number; step: number; cell: number; xs: LinearScale[]; ys: LinearScale[] }
+/**
+ * Widest a cell may be against its height: cells take the width a wide frame gives (room for the
+ * attribute names) without stretching the point clouds beyond recognition (common practice).
+ */
+const MAX_CELL_ASPECT = 1.5;
 
-/** One shared cell size for all p × p cells, with room at the left and bottom for the outer tick labels. */
+interface Grid { x0: number; y0: number; stepX: number; stepY: number; cellW: number; cellH: number; xs: LinearScale[]; ys: LinearScale[] }
+
+/** One shared cell size for all p × p cells (up to MAX_CELL_ASPECT times wider than tall), with room at the left and bottom for the outer tick labels. */
 function gridIn(derived: DerivedMatrix, body: Box, ctx: LayoutContext): Grid {
   const { measure, style } = ctx;
   const { tick } = style.text;
@@ -41,16 +47,17 @@ function gridIn(derived: DerivedMatrix, body: Box, ctx: LayoutContext): Grid {
   const widest = max(derived.extents.slice(1), ([lo, hi]) => max(ticksFor(ctx, lo, hi, probe, 'vertical', undefined).labels, (l) => measure.width(l, tick.size, tick.weight))) ?? 0;
   const left = widest + style.spacing.tickGap;
   const bottom = style.spacing.tickGap + lineHeight(tick, style.spacing.lineHeight);
-  const step = Math.max(0, Math.min((body.width - left) / p, (body.height - bottom) / p));
-  const cell = Math.max(0, step - GAP);
-  // The grid is square; centred across the body when the height is what limits it.
-  const [x0, y0] = [body.x + left + Math.max(0, (body.width - left - p * step) / 2), body.y];
-  const xs = derived.extents.map(([lo, hi], j) => linearScale(ticksFor(ctx, lo, hi, Math.max(1, cell - 2 * PAD), 'horizontal', undefined), [x0 + j * step + PAD, x0 + j * step + cell - PAD]));
-  const ys = derived.extents.map(([lo, hi], i) => linearScale(ticksFor(ctx, lo, hi, Math.max(1, cell - 2 * PAD), 'vertical', undefined), [y0 + i * step + cell - PAD, y0 + i * step + PAD]));
-  return { x0, y0, step, cell, xs, ys };
+  const stepY = Math.max(0, Math.min((body.width - left) / p, (body.height - bottom) / p));
+  const stepX = Math.max(0, Math.min((body.width - left) / p, stepY * MAX_CELL_ASPECT));
+  const [cellW, cellH] = [Math.max(0, stepX - GAP), Math.max(0, stepY - GAP)];
+  // Centred across the body when the height is what limits the grid.
+  const [x0, y0] = [body.x + left + Math.max(0, (body.width - left - p * stepX) / 2), body.y];
+  const xs = derived.extents.map(([lo, hi], j) => linearScale(ticksFor(ctx, lo, hi, Math.max(1, cellW - 2 * PAD), 'horizontal', undefined), [x0 + j * stepX + PAD, x0 + j * stepX + cellW - PAD]));
+  const ys = derived.extents.map(([lo, hi], i) => linearScale(ticksFor(ctx, lo, hi, Math.max(1, cellH - 2 * PAD), 'vertical', undefined), [y0 + i * stepY + cellH - PAD, y0 + i * stepY + PAD]));
+  return { x0, y0, stepX, stepY, cellW, cellH, xs, ys };
 }
 
-const cellBox = (g: Grid, i: number, j: number): Box => ({ x: g.x0 + j * g.step, y: g.y0 + i * g.step, width: g.cell, height: g.cell });
+const cellBox = (g: Grid, i: number, j: number): Box => ({ x: g.x0 + j * g.stepX, y: g.y0 + i * g.stepY, width: g.cellW, height: g.cellH });
 
 function axisInfo(orient: 'left' | 'bottom', field: string, title: string, s: LinearScale): AxisInfo {
   return { orient, scale: 'linear', field, title, domain: s.domain, ticks: s.ticks, tickPositions: s.ticks.map(s.map), range: s.range };
@@ -76,7 +83,7 @@ function diagonalCell(derived: DerivedMatrix, g: Grid, i: number, ctx: LayoutCon
   const box = cellBox(g, i, i);
   const title = axisTitle(a, a.label);
   const st = style.text.axisTitle;
-  const text = truncateText(measure, title, st, Math.max(0, g.cell - 2 * PAD));
+  const text = truncateText(measure, title, st, Math.max(0, g.cellW - 2 * PAD));
   const name: TextNode = textNode(measure, { id: ctx.id('panel-title', a.name), role: 'panel-title', text, style: st, x: box.x + box.width / 2, top: box.y + PAD, anchor: 'middle' });
   if (text !== title) name.full = title;
   const bins = histogram(derived.items.map((it) => it.values[i]!), 10);
@@ -113,7 +120,7 @@ function layoutMatrix(derived: DerivedMatrix, body: Box, ctx: LayoutContext): Bo
       panels.push(c.panel);
     }
   }
-  const bottom = g.y0 + (p - 1) * g.step + g.cell;
+  const bottom = g.y0 + (p - 1) * g.stepY + g.cellH;
   const gap = ctx.style.spacing.tickGap;
   guides.push(...clearAlong('bottom', derived.plan.attributes.flatMap((a, j) => tickRow('bottom', a.name, g.xs[j]!, bottom, ctx)), gap));
   guides.push(...clearAlong('left', derived.plan.attributes.slice(1).flatMap((a, i) => tickRow('left', a.name, g.ys[i + 1]!, g.x0, ctx)), gap / 2));
