@@ -86,6 +86,7 @@ export const CATALOGUE = {
   'choice.matrix-needs-two-keys': 'error',
   // derive: the numbers drawn
   'derive.aggregated': 'info',
+  'table.read-as-years': 'info',
   'derive.missing-values': 'warning',
   'derive.others-folded': 'warning',
   'derive.no-rows': 'error',

@@ -20,6 +20,30 @@ function isMissingCell(cell: RawCell): boolean {
   return typeof cell === 'string' && isMissingText(cell);
 }
 
+/** Column names that say a column of whole numbers counts years (common practice in data exports). */
+const YEAR_NAME = /^(years?|yr|fiscal[ _-]?year|fy|calendar[ _-]?year|jahr|année|annee|año|ano)$/i;
+
+/**
+ * A cell that is a year written as a whole number, 1000–9999 (ISO 8601's four-digit year, the
+ * reduced precision of a calendar date), or undefined.
+ */
+function yearOf(cell: RawCell): number | undefined {
+  const n = typeof cell === 'number' ? cell : typeof cell === 'string' && /^\s*\d{4}\s*$/.test(cell) ? Number(cell) : undefined;
+  return n !== undefined && Number.isInteger(n) && n >= 1000 && n <= 9999 ? n : undefined;
+}
+
+/** Whether a number column is a column of years: a year-like name and every present cell a year. */
+function yearColumn(name: string, cells: RawCell[]): boolean {
+  if (!YEAR_NAME.test(name.trim())) return false;
+  let present = false;
+  for (const cell of cells) {
+    if (isMissingCell(cell)) continue;
+    if (yearOf(cell) === undefined) return false;
+    present = true;
+  }
+  return present;
+}
+
 function readAs(type: ColumnType, cell: RawCell, readNumber: NumberReader, readDate: DateReader = readDateText): Reading {
   if (isMissingCell(cell)) return null;
   if (type === 'number') {
@@ -27,6 +51,8 @@ function readAs(type: ColumnType, cell: RawCell, readNumber: NumberReader, readD
     return n === undefined ? undefined : { value: n };
   }
   if (type === 'date') {
+    const year = yearOf(cell);
+    if (year !== undefined) return { value: Date.UTC(year, 0, 1), grain: 'year' };
     const d = typeof cell === 'string' ? readDate(cell) : undefined;
     return d === undefined ? undefined : { value: d.time, grain: d.grain, ...(d.quarter ? { quarter: d.quarter } : {}) };
   }
@@ -177,7 +203,13 @@ export function inferTable(raw: RawTable, origin: TableOrigin, hints: ReadonlyMa
     const reader = declared ? (t: string) => parseNumberText(t, declared) : readerFor(raw, cells, forced, name, origin);
     if (typeof reader !== 'function') diagnostics.push(reader);
     const readNumber = typeof reader === 'function' ? reader : eitherMark;
-    const guess = forced ? { type: forced, mixed: false } : guessType(cells, readNumber);
+    let guess = forced ? { type: forced, mixed: false } : guessType(cells, readNumber);
+    if (!forced && guess.type === 'number' && yearColumn(name, cells)) {
+      guess = { type: 'date', mixed: false };
+      diagnostics.push(diagnostic('table.read-as-years', `column \`${name}\` holds whole numbers named as years, so they are read as years on a time axis (1950, not 1,950)`, {
+        file: origin.file, field: name, found: 'years written as numbers', expected: 'years', hint: `set \`fields.${name}.type: quantitative\` to treat them as plain numbers`,
+      }));
+    }
     const pattern = patterns.get(name);
     const { column, unreadable } = buildColumn(name, guess.type, cells, readNumber, pattern === undefined ? readDateText : patternReader(pattern));
     if (!forced && column.type === 'text' && slashDates(column.text)) diagnostics.push(slashDateWarning(name, column, origin));

@@ -144,3 +144,31 @@ describe('line breaks inside cells', () => {
     expect(r.svg).toContain('North shore');
   });
 });
+
+describe('years written as numbers', () => {
+  it('a column named year of whole numbers is read as years, ticked 1950 not 1,950, with an info saying so (regression)', async () => {
+    const rows = Array.from({ length: 8 }, (_, i) => ({ year: 1950 + i * 10, catch: 10 + i }));
+    const r = await renderRows({ intent: 'trend', keys: 'year', values: 'catch', fields: { catch: { unit: 't' } } }, rows);
+    expect(r.ok).toBe(true);
+    expect(r.diagnostics.find((d) => d.code === 'table.read-as-years')).toMatchObject({ severity: 'info', field: 'year' });
+    const ticks = r.scene!.axes.find((a) => a.orient === 'bottom')!;
+    expect(ticks.scale).toBe('time');
+    expect(r.svg).toContain('>1950<');
+    expect(r.svg).not.toMatch(/>1,9\d0</);
+  });
+
+  it('keeps a year-named column as numbers when a cell is not a whole four-digit year, or when the brief says quantitative', async () => {
+    const t = await readRows([{ year: 1950 }, { year: 1960.5 }]);
+    expect(t.ok && columnOf(t.value, 'year')!.type).toBe('number');
+    const other = await readRows([{ weight: 1950 }, { weight: 1960 }]);
+    expect(other.ok && columnOf(other.value, 'weight')!.type).toBe('number');
+    const r = await renderRows({ intent: 'trend', keys: 'year', values: 'v', fields: { year: { type: 'quantitative' }, v: { unit: 't' } } }, [{ year: 1950, v: 1 }, { year: 1960, v: 2 }, { year: 1970, v: 3 }]);
+    expect(r.diagnostics.map((d) => d.code)).not.toContain('table.read-as-years');
+  });
+
+  it('a column declared temporal reads four-digit years, as text or as numbers (ISO 8601 reduced precision: YYYY)', async () => {
+    const r = await renderRows({ intent: 'trend', keys: 'y', values: 'v', fields: { y: { type: 'temporal' }, v: { unit: 't' } } }, [{ y: '2001', v: 1 }, { y: 2002, v: 2 }, { y: '2003', v: 3 }]);
+    expect(r.ok).toBe(true);
+    expect(r.scene!.axes.find((a) => a.orient === 'bottom')!.scale).toBe('time');
+  });
+});
