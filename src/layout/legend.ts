@@ -59,10 +59,14 @@ export function sizeLegendValues(maxValue: number, maxRadius: number): number[] 
   return [...new Set(values)].filter((v) => maxRadius * Math.sqrt(v / maxValue) >= MIN_RADIUS);
 }
 
-/** The label of a class: "10–20" (one value alone when the class holds one); "−10 to 0" when a bound is negative, where a dash would read as a minus. */
-function binLabel(from: number, to: number, f: (n: number) => string): string {
+/**
+ * The label of a class: "10–20" (one value alone when the class holds one); "−10 to 0" when any
+ * class of the legend has a negative bound, where a dash would read as a minus, and then for
+ * every class, so one legend reads one way.
+ */
+function binLabel(from: number, to: number, f: (n: number) => string, signed: boolean): string {
   if (from === to) return f(from);
-  return from < 0 || to < 0 ? `${f(from)} to ${f(to)}` : `${f(from)}–${f(to)}`;
+  return signed ? `${f(from)} to ${f(to)}` : `${f(from)}–${f(to)}`;
 }
 
 /** The entries of a legend and their keys; `swatch` is the side of a colour square, px. */
@@ -76,7 +80,8 @@ function keysOf(spec: LegendSpec, swatch: number): Key[] {
       return spec.entries.map((e) => ({ entry: { label: e.label, fill: e.fill, ...(e.stroke ? { stroke: e.stroke } : {}) }, keyWidth: swatch, keyHeight: swatch, draw: square(e.fill, e.stroke) }));
     case 'binned': {
       const f = spec.format ?? valueFormatter(spec.bins.flatMap((b) => [b.from, b.to]));
-      return spec.bins.map((b) => ({ entry: { label: binLabel(b.from, b.to, f), fill: b.fill, from: b.from, to: b.to }, keyWidth: swatch, keyHeight: swatch, draw: square(b.fill) }));
+      const signed = spec.bins.some((b) => b.from < 0 || b.to < 0);
+      return spec.bins.map((b) => ({ entry: { label: binLabel(b.from, b.to, f, signed), fill: b.fill, from: b.from, to: b.to }, keyWidth: swatch, keyHeight: swatch, draw: square(b.fill) }));
     }
     case 'shape':
       return spec.entries.map((e) => ({

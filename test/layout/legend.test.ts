@@ -90,6 +90,9 @@ describe('legend', () => {
     expect(l.info.entries.map((e) => [e.from, e.to])).toEqual([[0, 10], [10, 20], [20, 50]]);
     const negative: LegendSpec = { ...spec, bins: [{ from: -10, to: 0, fill: '#eeeeee' }] };
     expect(labels(layoutLegend(negative, { x: 0, y: 0, width: 400, placement: 'top' }, style, env.measure))[0]!.text).toBe('\u221210 to 0');
+    // One legend reads one way: once a class crosses below zero, every class says "to" (regression: "−2 to 0" beside "0–2").
+    const diverging: LegendSpec = { ...spec, bins: [{ from: -2, to: 0, fill: '#eeeeee' }, { from: 0, to: 2, fill: '#999999' }] };
+    expect(labels(layoutLegend(diverging, { x: 0, y: 0, width: 400, placement: 'top' }, style, env.measure)).map((t) => t.text)).toEqual(['\u22122 to 0', '0 to 2']);
   });
 
   it('draws a size legend at round values with area, not radius, proportional to value', () => {
