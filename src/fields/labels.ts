@@ -31,8 +31,11 @@ export function keyText(column: Column, row: number): string | null {
   return column.text[row] ?? String(value);
 }
 
-// Month and weekday names keep their capital inside a sentence.
-const PROPER = /^(January|February|March|April|May|June|July|August|September|October|November|December|Jan|Feb|Mar|Apr|Jun|Jul|Aug|Sep|Sept|Oct|Nov|Dec|Monday|Tuesday|Wednesday|Thursday|Friday|Saturday|Sunday)$/;
+/** Whether a word is a month or weekday name written with its capital ("May", "Sept", "Mon"), which keeps its capital inside a sentence. */
+function calendarName(word: string): boolean {
+  const lower = word.toLowerCase();
+  return /^\p{Lu}\p{Ll}+$/u.test(word) && (lower === 'sept' || CYCLES.slice(0, CALENDAR_CYCLES).some((c) => c.includes(lower)));
+}
 
 /**
  * A label as it reads inside a sentence ("Bar chart of crossings per day"): only a first word
@@ -41,7 +44,7 @@ const PROPER = /^(January|February|March|April|May|June|July|August|September|Oc
  */
 export function inSentence(label: string): string {
   const first = /^\p{L}+/u.exec(label)?.[0] ?? '';
-  if (!/^\p{Lu}\p{Ll}+$/u.test(first) || PROPER.test(first)) return label;
+  if (!/^\p{Lu}\p{Ll}+$/u.test(first) || calendarName(first)) return label;
   return `${first.charAt(0).toLowerCase()}${label.slice(1)}`;
 }
 
@@ -62,7 +65,7 @@ export function readableName(name: string): string {
     .trim();
   const capital = spaced.charAt(0).toUpperCase() + spaced.slice(1);
   // Month and weekday names ("jan", "mon") are names, not abbreviations to keep as written.
-  if (/^\p{Ll}{1,3}$/u.test(spaced) && !PROPER.test(capital)) return spaced;
+  if (/^\p{Ll}{1,3}$/u.test(spaced) && !calendarName(capital)) return spaced;
   const first = /^\S+/.exec(spaced)?.[0] ?? '';
   return /^\p{Ll}+$/u.test(first) ? spaced.charAt(0).toUpperCase() + spaced.slice(1) : spaced;
 }

@@ -13,6 +13,8 @@ describe('labels keep the case they were written in', () => {
     ['May and September (°C)', 'May and September (°C)'],
     ['Index, Q1 2023 = 100', 'index, Q1 2023 = 100'],
     ['Water Temperature', 'water Temperature'],
+    ['Sept rainfall', 'Sept rainfall'],
+    ['Mon to Fri crossings', 'Mon to Fri crossings'],
   ])('in a sentence, %j reads %j', (label, sentence) => {
     expect(inSentence(label)).toBe(sentence);
   });
@@ -30,6 +32,8 @@ describe('labels keep the case they were written in', () => {
     ['GDP_per_capita', 'GDP per capita'],
     ['sku', 'sku'],
     ['pier', 'Pier'],
+    ['jan', 'Jan'], // month and weekday names are names, not abbreviations kept as written
+    ['mon', 'Mon'],
   ])('the column %j reads %j', (name, label) => {
     expect(readableName(name)).toBe(label);
   });
