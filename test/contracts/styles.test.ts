@@ -5,6 +5,7 @@ import { contrastRatio, MARK_CONTRAST, TEXT_CONTRAST } from '../../src/color/wca
 import { renderBrief } from '../../src/pipeline/render.js';
 import { dumpScene } from '../../src/scene/dump.js';
 import { demoBriefs, env } from '../helpers.js';
+import { marksOffCanvas } from './canvas-contracts.js';
 import { markContrasts, textContrasts } from './contrast-contracts.js';
 import { checkTexts } from './text-contracts.js';
 
@@ -19,11 +20,12 @@ const STYLES = ['report', 'slide', 'print', 'dark'] as const;
 const ON_MARK_FLOOR = 3;
 
 describe.each(STYLES)('every gallery chart in the %s style', (style) => {
-  it.each(demoBriefs().map((f) => [basename(f, '.yaml'), f]))('%s: no text collides or leaves the canvas, and text and marks contrast with what they sit on', async (_name, file) => {
+  it.each(demoBriefs().map((f) => [basename(f, '.yaml'), f]))('%s: no text collides, nothing leaves the canvas, and text and marks contrast with what they sit on', async (_name, file) => {
     const result = await renderBrief({ brief: readFileSync(file, 'utf8'), file, style }, env);
     expect(result.ok, JSON.stringify(result.diagnostics.filter((d) => d.severity === 'error'))).toBe(true);
     const scene = result.scene!;
     checkTexts(dumpScene(scene));
+    expect(marksOffCanvas(scene).map((m) => `${m.role} ${m.id}`)).toEqual([]);
     const resolved = env.style(style, undefined);
     if (!resolved.ok) throw new Error(`the ${style} preset does not load`);
     const inks = [resolved.value.text.label.color, resolved.value.background];
