@@ -41,11 +41,11 @@ export interface BriefReport {
  * Reads a brief file and renders it; a missing file or unexpected failure becomes a diagnostic.
  * A brief already read and parsed (when its outputs were planned) is rendered as it was read.
  */
-export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes'>, source?: BriefSource): Promise<RenderResult> {
+export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style'>, source?: BriefSource): Promise<RenderResult> {
   const read = source ?? readBriefFile(file, opts.maxBriefBytes);
   if ('problem' in read) return { ok: false, rationale: [], diagnostics: [read.problem] };
   try {
-    return await renderBrief({ brief: read.text, ...(source ? { parsed: source.parsed } : {}), file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock }, env);
+    return await renderBrief({ brief: read.text, ...(source ? { parsed: source.parsed } : {}), file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock, ...(opts.style !== undefined ? { style: opts.style } : {}) }, env);
   } catch (e) {
     const detail = opts.debug ? `\n${(e as Error).stack}` : '';
     return { ok: false, rationale: [], diagnostics: [diagnostic('render.internal', `chartwright failed unexpectedly: ${(e as Error).message}${detail}`, { file, hint: 'rerun with --debug and report it with the brief and data' })] };
@@ -53,7 +53,7 @@ export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchO
 }
 
 /** Renders a planned brief without writing: its own diagnostics, then the problems with where it would write. */
-export async function renderPlan(plan: BriefPlan, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes'>): Promise<RenderResult> {
+export async function renderPlan(plan: BriefPlan, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style'>): Promise<RenderResult> {
   if (plan.failed) return { ok: false, rationale: [], diagnostics: [plan.failed] };
   const result = await renderFile(plan.file, env, opts, plan.source);
   if (!plan.problems.length) return result;

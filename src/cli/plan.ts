@@ -29,13 +29,16 @@ export interface PlanOptions extends OutputRules {
   scene?: string;
   /** The largest brief file read, in bytes. */
   maxBriefBytes?: number;
+  /** A style preset or style file (absolute) for every brief, instead of each brief's `style:` (--style). */
+  style?: string;
 }
 
-function inputsOf(file: string, brief: ResolvedBrief): string[] {
+function inputsOf(file: string, brief: ResolvedBrief, styleOverride: string | undefined): string[] {
   const near = (p: string) => (isAbsolute(p) ? p : join(dirname(file), p));
   const inputs = [file];
   if (brief.data.kind === 'file') inputs.push(near(brief.data.path));
-  if (brief.style.includes('/') || brief.style.endsWith('.json')) inputs.push(near(brief.style));
+  const style = styleOverride ?? brief.style;
+  if (style.includes('/') || style.endsWith('.json')) inputs.push(near(style));
   return inputs;
 }
 
@@ -55,7 +58,7 @@ function planBrief(entry: BriefEntry, many: boolean, opts: PlanOptions, cwd: str
   const outputs = plannedOutputs(file, brief.output, opts);
   const files = opts.scene ? [...outputs.files, sceneFile(opts.scene, file, many, cwd)] : outputs.files;
   const source = { text: read.text, parsed: parsed.value.parsed };
-  return { file, files, problems: inFile(withPositions(outputs.problems, parsed.value.parsed), file), inputs: inputsOf(file, brief), source };
+  return { file, files, problems: inFile(withPositions(outputs.problems, parsed.value.parsed), file), inputs: inputsOf(file, brief, opts.style), source };
 }
 
 function collisionProblem(path: string, others: string[], cwd: string, file?: string): Diagnostic {

@@ -50,14 +50,20 @@ function demoBriefs(root: string): BriefEntry[] {
   return readdirSync(dir).filter((f) => /\.ya?ml$/.test(f)).sort().map((f) => ({ file: join(dir, f) }));
 }
 
-interface CommonFlags { strict?: boolean; lenient?: boolean; quiet?: boolean; allowOutside?: boolean }
+interface CommonFlags { strict?: boolean; lenient?: boolean; quiet?: boolean; allowOutside?: boolean; style?: string }
+
+/** --style as a render takes it: a preset name as given, a style file made absolute from the working folder. */
+function styleFlag(style: string | undefined, io: CliIo): { style?: string } {
+  if (style === undefined) return {};
+  return { style: style.includes('/') || style.endsWith('.json') ? resolve(io.cwd, style) : style };
+}
 interface RenderFlags extends CommonFlags { outDir?: string; png?: boolean; outlineText?: boolean; scale: number; scene?: string; debug?: boolean; timings?: boolean; report?: string }
 
 function batchOptions(flags: RenderFlags, io: CliIo, deps: CliDeps): BatchOptions {
   return {
     outDir: flags.outDir ? resolve(io.cwd, flags.outDir) : undefined, png: !!flags.png, scale: flags.scale, scene: flags.scene, allowOutside: !!flags.allowOutside,
     strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, outlineText: !!flags.outlineText, tempTag: String(io.pid),
-    maxBriefBytes: inputLimit('brief', io.env), fs: deps.fs,
+    maxBriefBytes: inputLimit('brief', io.env), fs: deps.fs, ...styleFlag(flags.style, io),
     housekeeping: { alive: io.alive ?? (() => true), now: io.now ?? (() => Date.now()) },
     ...(flags.timings ? { clock: io.clock } : {}),
   };
@@ -103,8 +109,8 @@ async function runRender(entries: BriefEntry[], flags: RenderFlags, io: CliIo, e
   return exitFor(reports);
 }
 
-async function runExplain(file: string, flags: { json?: boolean; lenient?: boolean }, io: CliIo, env: RenderEnv): Promise<number> {
-  const result = await renderFile(resolve(io.cwd, file), env, { strict: false, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env) });
+async function runExplain(file: string, flags: { json?: boolean; lenient?: boolean; style?: string }, io: CliIo, env: RenderEnv): Promise<number> {
+  const result = await renderFile(resolve(io.cwd, file), env, { strict: false, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env), ...styleFlag(flags.style, io) });
   const diagnostics = relativeFiles(result.diagnostics, io.cwd);
   if (flags.json) {
     io.stdout(`${printable(JSON.stringify({ form: result.choice?.form ?? null, ok: result.ok, rationale: result.rationale, diagnostics }, null, 2), true)}\n`);
@@ -117,7 +123,7 @@ async function runExplain(file: string, flags: { json?: boolean; lenient?: boole
 }
 
 async function runCheck(paths: string[], flags: CommonFlags, io: CliIo, env: () => RenderEnv, deps: CliDeps): Promise<number> {
-  const opts = { png: false, allowOutside: !!flags.allowOutside, strict: !!flags.strict, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env) };
+  const opts = { png: false, allowOutside: !!flags.allowOutside, strict: !!flags.strict, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env), ...styleFlag(flags.style, io) };
   const results: { ok: boolean; diagnostics: Diagnostic[] }[] = [];
   for (const plan of planRun(expandBriefs(paths, io.cwd, deps.listDir), opts, io.cwd).plans) {
     const result = await renderPlan(plan, env(), opts);
@@ -133,11 +139,15 @@ function chartwrightVersion(): string {
   return (JSON.parse(readFileSync(join(packageRoot(), 'package.json'), 'utf8')) as { version: string }).version;
 }
 
+/** --style, on every command that renders: it replaces each brief's `style:`. */
+const STYLE_OPTION = ['--style <name|path>', 'style preset (report, slide, print, dark) or style file, instead of each brief\'s `style:`'] as const;
+
 const withCommonFlags = (c: Command) => c
   .option('--strict', 'treat warnings as errors')
   .option('--lenient', 'draw the nearest honest form, with a warning, instead of failing on a hard rule')
   .option('-q, --quiet', 'print only errors on stderr (no warnings, progress or timings)')
-  .option('--allow-outside', 'let `output:` write outside the brief\'s folder (or -o DIR), absolute paths included');
+  .option('--allow-outside', 'let `output:` write outside the brief\'s folder (or -o DIR), absolute paths included')
+  .option(...STYLE_OPTION);
 
 const withRenderFlags = (c: Command) => withCommonFlags(c)
   .option('-o, --out-dir <dir>', 'write outputs under this folder instead of beside each brief')
@@ -160,7 +170,8 @@ function program(io: CliIo, env: () => RenderEnv, deps: CliDeps, exit: { code: n
   cli.command('explain').description('say which chart a brief gets and why').argument('<brief>', 'a brief file')
     .option('--json', 'print JSON: { form, rationale, diagnostics }')
     .option('--lenient', 'explain the lenient render')
-    .action(async (file: string, flags: { json?: boolean; lenient?: boolean }) => { exit.code = await runExplain(file, flags, io, env()); });
+    .option(...STYLE_OPTION)
+    .action(async (file: string, flags: { json?: boolean; lenient?: boolean; style?: string }) => { exit.code = await runExplain(file, flags, io, env()); });
   withCommonFlags(cli.command('check').description('validate and lint briefs; non-zero exit on errors').argument('<brief...>', 'brief files, or folders of them'))
     .action(async (files: string[], flags: CommonFlags) => { exit.code = await runCheck(files, flags, io, env, deps); });
   withRenderFlags(cli.command('demo').description('render the demo gallery from demo-data/ as SVG and PNG').argument('[dir]', 'output folder', 'gallery'))

@@ -35,6 +35,7 @@ export function measureRamp(ramp: readonly string[], background: string): RampMe
     oklabLightness: ramp.map((c) => round4(oklabLightness(hexToRgb(c)))),
     contrast: ramp.map((c) => round4(contrastRatio(c, background))),
     lightestDeltaE00FromBackground: round4(deltaE(lightest, background)),
+    nearestDeltaE00FromBackground: round4(Math.min(...ramp.map((c) => deltaE(c, background)))),
     minAdjacentDeltaE00: perVision((v) => Math.min(...ramp.slice(1).map((c, i) => deltaE(ramp[i]!, c, v)))),
   };
 }

@@ -38,6 +38,8 @@ export interface RampMeasures {
   contrast: number[];
   /** ΔE00 between the lightest step and the background. */
   lightestDeltaE00FromBackground: number;
+  /** ΔE00 between the step nearest the background and the background: how far the faint end stands off the page (on a dark page, the darkest step). */
+  nearestDeltaE00FromBackground: number;
   /** Smallest ΔE00 between neighbouring steps. */
   minAdjacentDeltaE00: PerVision;
 }

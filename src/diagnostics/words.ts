@@ -13,6 +13,15 @@ export function agree(n: number, one: string, many: string): string {
   return n === 1 ? one : many;
 }
 
+/** The ordinal as words say "every …": "second", "third", then "4th", "21st", "22nd", "23rd", "111th". */
+export function ordinal(k: number): string {
+  if (k === 2) return 'second';
+  if (k === 3) return 'third';
+  const teen = k % 100 >= 11 && k % 100 <= 13;
+  const suffix = teen ? 'th' : ({ 1: 'st', 2: 'nd', 3: 'rd' } as Record<number, string>)[k % 10] ?? 'th';
+  return `${k}${suffix}`;
+}
+
 // Spelled with a vowel but said with a consonant ("a unit", "a one-off"), and the reverse ("an hour").
 const SAID_WITH_CONSONANT = /^(uni|use|usu|uti|ure|eu|one|once)/i;
 const SAID_WITH_VOWEL = /^(hour|honest|honou?r|heir)/i;

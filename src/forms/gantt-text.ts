@@ -1,3 +1,4 @@
+import { ordinal } from '../diagnostics/words.js';
 import { thinningStep } from '../layout/axis.js';
 import { plotFor } from '../layout/compose.js';
 import type { CartesianDomains, LayoutContext } from '../layout/kit-types.js';
@@ -12,7 +13,7 @@ function namingStep(domains: CartesianDomains, notes: string[], ctx: LayoutConte
 
 function note(k: number, n: number): string {
   const shown = Math.ceil(n / k);
-  return `Only every ${k === 2 ? 'second' : `${k}th`} task is named on the axis (${shown} of ${n}), for want of room; each bar carries its task's name as its title.`;
+  return `Only every ${ordinal(k)} task is named on the axis (${shown} of ${n}), for want of room; each bar carries its task's name as its title.`;
 }
 
 /**

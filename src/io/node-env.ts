@@ -15,7 +15,7 @@ import { describeBytes, INPUT_LIMITS, readBounded, readUpTo } from './bounded-re
 import { packageRoot } from './package-root.js';
 
 /** Style presets shipped in templates/styles. */
-export const STYLE_PRESETS = ['report'] as const;
+export const STYLE_PRESETS = ['report', 'slide', 'print', 'dark'] as const;
 
 function readJson<T>(path: string): T {
   return JSON.parse(readFileSync(path, 'utf8')) as T;

@@ -1,5 +1,6 @@
 import { max } from 'd3-array';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { ordinal } from '../diagnostics/words.js';
 import type { AxisInfo, Box, Role, SceneNode, TextNode } from '../scene/types.js';
 import { segment } from '../svg/path.js';
 import { thinningStep } from './axis.js';
@@ -24,7 +25,7 @@ export function rule(id: string, role: Role, x1: number, y1: number, x2: number,
 }
 
 function thinned(field: string, k: number, total: number, shown: number): Diagnostic {
-  return diagnostic('layout.labels-thinned', `${total} key labels do not all fit; every ${k === 2 ? 'second' : `${k}th`} is shown (${shown} of ${total})`, {
+  return diagnostic('layout.labels-thinned', `${total} key labels do not all fit; every ${ordinal(k)} is shown (${shown} of ${total})`, {
     field, hint: 'make the chart larger with `size:`, or use shorter labels',
   });
 }

@@ -13,6 +13,7 @@ import { layoutChart } from '../layout/chart.js';
 import type { LayoutContext } from '../layout/kit-types.js';
 import { idMaker } from '../scene/ids.js';
 import type { Scene } from '../scene/types.js';
+import { withStyleSize } from '../style/frame-size.js';
 import type { Style } from '../style/types.js';
 import { writeSvg } from '../svg/write.js';
 import { readTable } from '../table/load.js';
@@ -33,6 +34,11 @@ export interface RenderRequest {
   parsed?: ParsedBrief;
   /** Path of the brief file: data and style paths in it are relative to this. Default: none. */
   file?: string;
+  /**
+   * A style preset name or style file that replaces the brief's `style:` (the CLI's --style); a
+   * relative path is taken from the working folder, as the caller resolved it. Default: the brief's.
+   */
+  style?: string;
   /** Rows to chart when the brief names no data (library use). Default: none. */
   rows?: Record<string, unknown>[];
   /** Draw the nearest honest form, with a warning, instead of failing on a broken hard rule. Default: false. */
@@ -112,10 +118,13 @@ export async function loadInputs(req: RenderRequest, env: RenderEnv, lap: (stage
   const diagnostics = inFile(briefOutcome.diagnostics, req.file);
   lap('brief');
   if (!briefOutcome.ok) return { diagnostics };
-  const { brief, parsed } = briefOutcome.value;
+  const { parsed } = briefOutcome.value;
   const locate = (ds: Diagnostic[]) => inFile(withPositions(ds, parsed), req.file);
-  const style = env.style(brief.style, req.file);
-  diagnostics.push(...locate(style.diagnostics));
+  const style = env.style(req.style ?? briefOutcome.value.brief.style, req.file);
+  const stated = req.style === undefined ? briefOutcome.value.brief : { ...briefOutcome.value.brief, style: req.style };
+  const brief = style.ok ? withStyleSize(stated, style.value) : stated;
+  // A style named on the command line is not in the brief: its problems point at no line of it.
+  diagnostics.push(...(req.style === undefined ? locate(style.diagnostics) : style.diagnostics));
   const table = await readTable(brief.data, brief.fields, req.file, env.table);
   diagnostics.push(...locate(table.diagnostics));
   lap('table');

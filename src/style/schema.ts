@@ -61,5 +61,10 @@ export const STYLE_SCHEMA: SchemaNode = {
         lineHeight: { type: 'number', minimum: 1.326, maximum: 3, description: 'At least the font\'s ascent + descent (1.326 em for Source Sans 3).' },
       },
     },
+    size: {
+      type: 'object', additionalProperties: false, required: ['width', 'height'],
+      description: 'The frame size a brief gets when it sets none; a brief\'s `size:` wins, side by side.',
+      properties: { width: { type: 'integer', minimum: 160, maximum: 4000 }, height: { type: 'integer', minimum: 160, maximum: 4000 } },
+    },
   },
 };

@@ -22,7 +22,7 @@ export interface Style {
     others: string;
     /** Colours for categories, in order (each prefix as distinct as the palette allows). */
     categorical: string[];
-    /** A sequential ramp, lightest first. */
+    /** A sequential ramp, low values first: the step nearest the page first (lightest on a light page, darkest on a dark one). */
     sequential: string[];
     /** A diverging ramp, low end first, with a neutral middle. */
     diverging: string[];
@@ -44,4 +44,6 @@ export interface Style {
     /** Line height as a multiple of the font size; at least the font's ascent + descent (1.326 em for Source Sans 3), so text boxes never overlap. */
     lineHeight: number;
   };
+  /** The frame size a brief gets when it sets none (each side the brief gives wins). Default: the brief's default, 720 × 440. */
+  size?: { width: number; height: number };
 }

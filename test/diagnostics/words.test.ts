@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { agree, article, count } from '../../src/diagnostics/words.js';
+import { agree, article, count, ordinal } from '../../src/diagnostics/words.js';
 import { readBrief } from '../../src/brief/resolve.js';
 import { readTable } from '../../src/table/load.js';
 import { memoryFiles } from '../helpers.js';
@@ -39,5 +39,10 @@ describe('counts and articles in diagnostics', () => {
   it('a wrong type for an integer option expects "an integer"', () => {
     const r = readBrief('data: t.csv\nintent: compare\nkeys: a\nvalues: b\nsize: { width: wide }\n');
     expect(r.diagnostics.find((d) => d.path === '/size/width')).toMatchObject({ code: 'brief.wrong-type', expected: 'an integer' });
+  });
+
+  // Found drawing the Gantt gallery chart in the slide style: its note read "Only every 3th task".
+  it('write "every third", never "every 3th": ordinals in English', () => {
+    expect([2, 3, 4, 11, 12, 13, 21, 22, 23, 101, 111].map(ordinal)).toEqual(['second', 'third', '4th', '11th', '12th', '13th', '21st', '22nd', '23rd', '101st', '111th']);
   });
 });
