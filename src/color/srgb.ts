@@ -26,3 +26,13 @@ export function fromLinearRgb([r, g, b]: Rgb): Rgb {
   const c = convertLrgbToRgb({ r, g, b });
   return [c.r, c.g, c.b];
 }
+
+/**
+ * `colour` laid over `background` at `share` opacity, as one solid colour: the sRGB blend an SVG
+ * renderer computes for `opacity` (SVG 1.1 compositing), without making an outline drawn with
+ * it translucent too.
+ */
+export function tint(colour: string, background: string, share: number): string {
+  const [f, b] = [hexToRgb(colour), hexToRgb(background)];
+  return rgbToHex([0, 1, 2].map((i) => b[i]! + (f[i]! - b[i]!) * share) as Rgb);
+}

@@ -98,7 +98,7 @@ export function textContrasts(scene: Scene): TextContrast[] {
 /** Roles of marks that carry data on their own against the page (not tiles of a colour scale, nor faint context). */
 const STANDALONE_MARKS: ReadonlySet<Role> = new Set(['bar', 'line', 'point', 'task', 'bin', 'box', 'dependency', 'dendrogram', 'segment', 'legend-swatch']);
 
-/** One data mark's contrast against the page: its fill, or its outline where it is filled with the page or nothing. */
+/** One data mark's contrast against the page: its fill or its solid outline, whichever stands out more. */
 export interface MarkContrast {
   role: Role;
   colour: string;
@@ -123,7 +123,9 @@ export function markContrasts(scene: Scene): MarkContrast[] {
     if (node.kind === 'group') return node.children.forEach(visit);
     if (node.kind === 'text' || node.kind === 'image' || !STANDALONE_MARKS.has(node.role)) return;
     const fill = node.fill && node.fill !== 'none' && node.fill !== scene.background ? node.fill : undefined;
-    const colour = fill ?? node.stroke;
+    // A mark with a solid outline is delineated by it: a light fill inside a dark outline (a box plot's box) reads as well as a dark fill.
+    const stroke = node.stroke && node.stroke !== 'none' && (node.strokeWidth ?? 1) >= 1 ? node.stroke : undefined;
+    const colour = fill && stroke ? (contrastRatio(stroke, scene.background) > contrastRatio(fill, scene.background) ? stroke : fill) : fill ?? stroke;
     if (!colour || (node.role === 'legend-swatch' && binned.has(colour))) return;
     const opacity = node.opacity ?? 1;
     out.push({ role: node.role, colour, opacity, ratio: contrastRatio(colour, scene.background), drawnRatio: contrastRatio(over(colour, opacity, scene.background), scene.background) });
