@@ -1,6 +1,7 @@
-import { Command, CommanderError, InvalidArgumentError } from 'commander';
+import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { readFileSync, readdirSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
+import { LOCALES, type Locale } from '../brief/types.js';
 import { BRIEF_SCHEMA } from '../pipeline/vocabulary.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { inputLimit } from '../io/bounded-read.js';
@@ -50,13 +51,13 @@ function demoBriefs(root: string): BriefEntry[] {
   return readdirSync(dir).filter((f) => /\.ya?ml$/.test(f)).sort().map((f) => ({ file: join(dir, f) }));
 }
 
-interface CommonFlags { strict?: boolean; lenient?: boolean; quiet?: boolean; allowOutside?: boolean }
+interface CommonFlags { strict?: boolean; lenient?: boolean; quiet?: boolean; allowOutside?: boolean; locale?: Locale }
 interface RenderFlags extends CommonFlags { outDir?: string; png?: boolean; outlineText?: boolean; scale: number; scene?: string; debug?: boolean; timings?: boolean; report?: string }
 
 function batchOptions(flags: RenderFlags, io: CliIo, deps: CliDeps): BatchOptions {
   return {
     outDir: flags.outDir ? resolve(io.cwd, flags.outDir) : undefined, png: !!flags.png, scale: flags.scale, scene: flags.scene, allowOutside: !!flags.allowOutside,
-    strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, outlineText: !!flags.outlineText, tempTag: String(io.pid),
+    strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, outlineText: !!flags.outlineText, tempTag: String(io.pid), ...(flags.locale ? { locale: flags.locale } : {}),
     maxBriefBytes: inputLimit('brief', io.env), fs: deps.fs,
     housekeeping: { alive: io.alive ?? (() => true), now: io.now ?? (() => Date.now()) },
     ...(flags.timings ? { clock: io.clock } : {}),
@@ -103,8 +104,8 @@ async function runRender(entries: BriefEntry[], flags: RenderFlags, io: CliIo, e
   return exitFor(reports);
 }
 
-async function runExplain(file: string, flags: { json?: boolean; lenient?: boolean }, io: CliIo, env: RenderEnv): Promise<number> {
-  const result = await renderFile(resolve(io.cwd, file), env, { strict: false, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env) });
+async function runExplain(file: string, flags: { json?: boolean; lenient?: boolean; locale?: Locale }, io: CliIo, env: RenderEnv): Promise<number> {
+  const result = await renderFile(resolve(io.cwd, file), env, { strict: false, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env), ...(flags.locale ? { locale: flags.locale } : {}) });
   const diagnostics = relativeFiles(result.diagnostics, io.cwd);
   if (flags.json) {
     io.stdout(`${printable(JSON.stringify({ form: result.choice?.form ?? null, ok: result.ok, rationale: result.rationale, diagnostics }, null, 2), true)}\n`);
@@ -117,7 +118,7 @@ async function runExplain(file: string, flags: { json?: boolean; lenient?: boole
 }
 
 async function runCheck(paths: string[], flags: CommonFlags, io: CliIo, env: () => RenderEnv, deps: CliDeps): Promise<number> {
-  const opts = { png: false, allowOutside: !!flags.allowOutside, strict: !!flags.strict, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env) };
+  const opts = { png: false, allowOutside: !!flags.allowOutside, strict: !!flags.strict, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env), ...(flags.locale ? { locale: flags.locale } : {}) };
   const results: { ok: boolean; diagnostics: Diagnostic[] }[] = [];
   for (const plan of planRun(expandBriefs(paths, io.cwd, deps.listDir), opts, io.cwd).plans) {
     const result = await renderPlan(plan, env(), opts);
@@ -133,11 +134,15 @@ function chartwrightVersion(): string {
   return (JSON.parse(readFileSync(join(packageRoot(), 'package.json'), 'utf8')) as { version: string }).version;
 }
 
+/** --locale: the numbers and dates of every brief in this locale, whatever the brief says. */
+const localeOption = () => new Option('--locale <name>', 'write numbers and dates in this locale instead of the brief\'s `locale:`').choices([...LOCALES]);
+
 const withCommonFlags = (c: Command) => c
   .option('--strict', 'treat warnings as errors')
   .option('--lenient', 'draw the nearest honest form, with a warning, instead of failing on a hard rule')
   .option('-q, --quiet', 'print only errors on stderr (no warnings, progress or timings)')
-  .option('--allow-outside', 'let `output:` write outside the brief\'s folder (or -o DIR), absolute paths included');
+  .option('--allow-outside', 'let `output:` write outside the brief\'s folder (or -o DIR), absolute paths included')
+  .addOption(localeOption());
 
 const withRenderFlags = (c: Command) => withCommonFlags(c)
   .option('-o, --out-dir <dir>', 'write outputs under this folder instead of beside each brief')
@@ -160,7 +165,8 @@ function program(io: CliIo, env: () => RenderEnv, deps: CliDeps, exit: { code: n
   cli.command('explain').description('say which chart a brief gets and why').argument('<brief>', 'a brief file')
     .option('--json', 'print JSON: { form, rationale, diagnostics }')
     .option('--lenient', 'explain the lenient render')
-    .action(async (file: string, flags: { json?: boolean; lenient?: boolean }) => { exit.code = await runExplain(file, flags, io, env()); });
+    .addOption(localeOption())
+    .action(async (file: string, flags: { json?: boolean; lenient?: boolean; locale?: Locale }) => { exit.code = await runExplain(file, flags, io, env()); });
   withCommonFlags(cli.command('check').description('validate and lint briefs; non-zero exit on errors').argument('<brief...>', 'brief files, or folders of them'))
     .action(async (files: string[], flags: CommonFlags) => { exit.code = await runCheck(files, flags, io, env, deps); });
   withRenderFlags(cli.command('demo').description('render the demo gallery from demo-data/ as SVG and PNG').argument('[dir]', 'output folder', 'gallery'))

@@ -239,6 +239,11 @@ export function valueFormatter(values: readonly number[], style?: string | Numbe
   return (n) => (Math.abs(n) >= EXPONENT_FROM ? huge(n) : words(n));
 }
 
+/** What labels of a field are written with: its d3-format specifier and its locale (or the other field's, when it has none: a count has no value field). */
+export function labelStyle(field: Pick<NumberStyle, 'format' | 'locale'> | undefined, other?: Pick<NumberStyle, 'locale'>): NumberStyle {
+  return { format: field?.format, locale: field?.locale ?? other?.locale };
+}
+
 /**
  * One number written as a chart of this locale writes it as a label (the API for sentences
  * that quote the chart's numbers): `formatNumberIn('de', 4_200_000)` is "4,2 Mio.",

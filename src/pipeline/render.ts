@@ -1,7 +1,7 @@
 import { checkBriefValue, readBrief, withPositions } from '../brief/resolve.js';
 import { capProblems } from '../brief/validate.js';
 import type { ParsedBrief } from '../brief/parse.js';
-import type { ResolvedBrief } from '../brief/types.js';
+import type { Locale, ResolvedBrief } from '../brief/types.js';
 import { checkBriefRules } from '../choose/checks.js';
 import { choose } from '../choose/choose.js';
 import type { Choice, Decision } from '../choose/types.js';
@@ -39,6 +39,8 @@ export interface RenderRequest {
   lenient?: boolean;
   /** Treat warnings as errors. Default: false. */
   strict?: boolean;
+  /** Write the chart's numbers and dates in this locale instead of the brief's `locale:` (the CLI's --locale). Default: the brief's. */
+  locale?: Locale;
   /**
    * A clock in milliseconds, to time each stage (the CLI's --timings). Only measured, never
    * used for output. Default: none (no timings).
@@ -112,7 +114,8 @@ export async function loadInputs(req: RenderRequest, env: RenderEnv, lap: (stage
   const diagnostics = inFile(briefOutcome.diagnostics, req.file);
   lap('brief');
   if (!briefOutcome.ok) return { diagnostics };
-  const { brief, parsed } = briefOutcome.value;
+  const { parsed } = briefOutcome.value;
+  const brief = req.locale ? { ...briefOutcome.value.brief, locale: req.locale } : briefOutcome.value.brief;
   const locate = (ds: Diagnostic[]) => inFile(withPositions(ds, parsed), req.file);
   const style = env.style(brief.style, req.file);
   diagnostics.push(...locate(style.diagnostics));
