@@ -59,6 +59,6 @@ describe('--locale and the brief\'s locale', () => {
     writeFileSync(join(dir, 'fr.yaml'), pierBrief('locale: fr\n'));
     const t = io(dir);
     expect(await runCli(['check', 'fr.yaml'], t.io)).toBe(EXIT.FAILED);
-    expect(t.err()).toContain('/locale');
+    expect(t.err()).toContain('error[brief.bad-value] /locale');
   });
 });
