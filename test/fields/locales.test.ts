@@ -27,6 +27,18 @@ describe('the locale table against CLDR', () => {
     }
   });
 
+  it.skipIf(!hasGerman)('weekday names, Sunday first, are CLDR 48\'s in both locales (So., Mo., …; Sun, Mon, …)', () => {
+    // In the format context (beside a date), as a tick would write it. 1 March 2026 is a Sunday.
+    const day = (locale: string, d: number, weekday: 'short' | 'long') => new Intl.DateTimeFormat(locale, { weekday, day: 'numeric', month: 'long', timeZone: 'UTC' })
+      .formatToParts(utc(2026, 2, 1 + d)).find((p) => p.type === 'weekday')!.value;
+    for (let d = 0; d < 7; d++) {
+      expect(LOCALE_DEFS.de.shortDays[d]).toBe(day('de', d, 'short'));
+      expect(LOCALE_DEFS.de.days[d]).toBe(day('de', d, 'long'));
+      expect(LOCALE_DEFS.en.shortDays[d]).toBe(day('en-US', d, 'short'));
+      expect(LOCALE_DEFS.en.days[d]).toBe(day('en-US', d, 'long'));
+    }
+  });
+
   it.skipIf(!hasGerman)('English month names are CLDR\'s en-US ones (Jan, Feb, …, Sep)', () => {
     for (let m = 0; m < 12; m++) {
       expect(LOCALE_DEFS.en.shortMonths[m]).toBe(cldrMonth('en-US', m, 'short'));
