@@ -32,13 +32,13 @@ const ALLOWED: Record<string, RegExp> = {
   font: /^font\//,
   style: /^(style|color|brief\/(schema|validate)|diagnostics\/suggest)/,
   // The rules know forms only through the Candidate values they are given.
-  choose: /^(choose\/|font\/measurer$|fields\/notation$)/,
-  derive: /^(derive|fields\/labels)/,
+  choose: /^(choose\/|font\/measurer$|fields\/(notation|locales)$)/,
+  derive: /^(derive|fields\/(labels|locales))/,
   scene: /^(scene|svg\/path)/,
   svg: /^(svg|scene\/ids|font\/measurer|font\/metrics)/,
-  layout: /^(layout|svg\/path|scene\/(ids|walk)|font\/measurer|fields\/(notation|labels)$|color\/wcag$|raster\/png-encode$)/,
+  layout: /^(layout|svg\/path|scene\/(ids|walk)|font\/measurer|fields\/(notation|labels|locales)$|color\/wcag$|raster\/png-encode$)/,
   // A form: the layout kit, the scene, derive operations, field helpers and types.
-  forms: /^(forms\/|layout\/|scene\/|derive\/|svg\/path$|fields\/(labels|notation)$|color\/wcag$)/,
+  forms: /^(forms\/|layout\/|scene\/|derive\/|svg\/path$|fields\/(labels|notation|locales)$|color\/wcag$)/,
   raster: /^raster\//,
   pipeline: /^(pipeline|brief|table|fields|choose|derive|forms|layout|scene|svg|font|style)\//,
   io: /^(io|pipeline|font|style|color|svg|table|diagnostics)\//,

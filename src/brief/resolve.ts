@@ -64,6 +64,7 @@ export function resolveBrief(raw: Record<string, unknown>): ResolvedBrief {
     linkage: raw.linkage as ResolvedBrief['linkage'],
     distance: raw.distance as ResolvedBrief['distance'],
     standardize: raw.standardize as boolean | undefined,
+    locale: (raw.locale ?? 'en') as ResolvedBrief['locale'],
   };
 }
 

@@ -1,5 +1,5 @@
 import { CATALOGUE } from '../diagnostics/catalogue.js';
-import { AGGREGATES, DISTANCE_NAMES, FIELD_TYPES, LINKAGE_NAMES, NOTATIONS, ORDERS, type BriefVocabulary } from './types.js';
+import { AGGREGATES, DISTANCE_NAMES, FIELD_TYPES, LINKAGE_NAMES, LOCALES, NOTATIONS, ORDERS, type BriefVocabulary } from './types.js';
 
 /** The codes a brief may accept: the warnings (errors cannot be accepted). */
 const ACCEPTABLE_CODES = Object.entries(CATALOGUE).filter(([, severity]) => severity === 'warning').map(([code]) => code);
@@ -116,6 +116,7 @@ export function briefSchema({ intents: INTENTS, forms: FORM_NAMES }: BriefVocabu
       linkage: { type: 'string', enum: LINKAGE_NAMES, description: 'For intent matrix: how clusters of rows and columns are joined (default average).' },
       distance: { type: 'string', enum: DISTANCE_NAMES, description: 'For intent matrix: how rows and columns are compared (default euclidean).' },
       standardize: { type: 'boolean', description: 'For intent matrix: scale each row to mean 0 and standard deviation 1 before clustering.' },
+      locale: { type: 'string', enum: [...LOCALES], default: 'en', description: 'How the numbers and dates drawn on the chart are written: en (1,234.5; 4.2m; Oct 2026) or de (1.234,5; 4,2 Mio.; Okt. 2026). Sentences stay English; reading the data is set per column with fields.<col>.decimal.' },
     },
   };
 }

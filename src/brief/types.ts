@@ -35,6 +35,10 @@ export type Order = (typeof ORDERS)[number];
 export const NOTATIONS = ['auto', 'words', 'si', 'digits'] as const;
 export type Notation = (typeof NOTATIONS)[number];
 
+/** How the numbers and dates drawn on a chart are written: decimal and thousands marks, scale words, month names. */
+export const LOCALES = ['en', 'de'] as const;
+export type Locale = (typeof LOCALES)[number];
+
 export const AGGREGATES = ['sum', 'mean', 'count', 'max', 'min'] as const;
 export type Aggregate = (typeof AGGREGATES)[number];
 
@@ -147,6 +151,12 @@ export interface ResolvedBrief {
   distance: Distance | undefined;
   /** For intent matrix: scale each row to mean 0 and standard deviation 1 before clustering rows. Default: undefined (not standardized). */
   standardize: boolean | undefined;
+  /**
+   * How the numbers and dates drawn on the chart are written: decimal and thousands marks,
+   * scale words and month names (`de`: "1.234,5", "4,2 Mio.", "Okt. 2026"). Sentences stay
+   * English. Reading the data is separate (`fields.<col>.decimal`). Default: 'en'.
+   */
+  locale: Locale;
 }
 
 /** The intents and forms a brief may name: those the rule table answers and the registry draws. */

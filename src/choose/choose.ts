@@ -1,4 +1,5 @@
 import { notationDecision } from './notation.js';
+import { localeDecision } from './locale.js';
 import type { ResolvedBrief } from '../brief/types.js';
 import { diagnostic, failure, hasErrors, success, type Diagnostic, type Outcome } from '../diagnostics/diagnostic.js';
 import type { Fields } from '../fields/types.js';
@@ -55,6 +56,8 @@ export function choose(fields: Fields, brief: ResolvedBrief, ctx: ChooseContext,
   rationale.push(...planned.value.decisions);
   const numbers = notationDecision(fields);
   if (numbers) rationale.push(numbers);
+  const locale = localeDecision(brief);
+  if (locale) rationale.push(locale);
   const faceted = chooseFacet(fields, brief, form, planned.value.facet);
   problems.push(...faceted.problems);
   if (hasErrors(problems)) return failure(problems);

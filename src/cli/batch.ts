@@ -1,3 +1,4 @@
+import type { Locale } from '../brief/types.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { RenderEnv } from '../pipeline/env.js';
 import { outlineSvg, renderBrief, type RenderResult, type StageTiming } from '../pipeline/render.js';
@@ -15,6 +16,8 @@ export interface BatchOptions extends PlanOptions {
   strict: boolean;
   lenient: boolean;
   debug: boolean;
+  /** Writes every brief's numbers and dates in this locale, whatever the brief says (--locale). Default: the brief's. */
+  locale?: Locale;
   /** Names this process's temporary files (its pid), apart from another's writing the same folder. */
   tempTag: string;
   /** Write the SVG file with text as glyph outlines, for viewers without the font (--outline-text). */
@@ -41,11 +44,11 @@ export interface BriefReport {
  * Reads a brief file and renders it; a missing file or unexpected failure becomes a diagnostic.
  * A brief already read and parsed (when its outputs were planned) is rendered as it was read.
  */
-export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style'>, source?: BriefSource): Promise<RenderResult> {
+export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style' | 'locale'>, source?: BriefSource): Promise<RenderResult> {
   const read = source ?? readBriefFile(file, opts.maxBriefBytes);
   if ('problem' in read) return { ok: false, rationale: [], diagnostics: [read.problem] };
   try {
-    return await renderBrief({ brief: read.text, ...(source ? { parsed: source.parsed } : {}), file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock, ...(opts.style !== undefined ? { style: opts.style } : {}) }, env);
+    return await renderBrief({ brief: read.text, ...(source ? { parsed: source.parsed } : {}), file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock, ...(opts.style !== undefined ? { style: opts.style } : {}), ...(opts.locale ? { locale: opts.locale } : {}) }, env);
   } catch (e) {
     const detail = opts.debug ? `\n${(e as Error).stack}` : '';
     return { ok: false, rationale: [], diagnostics: [diagnostic('render.internal', `chartwright failed unexpectedly: ${(e as Error).message}${detail}`, { file, hint: 'rerun with --debug and report it with the brief and data' })] };
@@ -53,7 +56,7 @@ export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchO
 }
 
 /** Renders a planned brief without writing: its own diagnostics, then the problems with where it would write. */
-export async function renderPlan(plan: BriefPlan, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style'>): Promise<RenderResult> {
+export async function renderPlan(plan: BriefPlan, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style' | 'locale'>): Promise<RenderResult> {
   if (plan.failed) return { ok: false, rationale: [], diagnostics: [plan.failed] };
   const result = await renderFile(plan.file, env, opts, plan.source);
   if (!plan.problems.length) return result;

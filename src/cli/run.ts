@@ -1,6 +1,7 @@
-import { Command, CommanderError, InvalidArgumentError } from 'commander';
+import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { readFileSync, readdirSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
+import { LOCALES, type Locale } from '../brief/types.js';
 import { BRIEF_SCHEMA } from '../pipeline/vocabulary.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { inputLimit } from '../io/bounded-read.js';
@@ -50,7 +51,7 @@ function demoBriefs(root: string): BriefEntry[] {
   return readdirSync(dir).filter((f) => /\.ya?ml$/.test(f)).sort().map((f) => ({ file: join(dir, f) }));
 }
 
-interface CommonFlags { strict?: boolean; lenient?: boolean; quiet?: boolean; allowOutside?: boolean; style?: string }
+interface CommonFlags { strict?: boolean; lenient?: boolean; quiet?: boolean; allowOutside?: boolean; style?: string; locale?: Locale }
 
 /** --style as a render takes it: a preset name as given, a style file made absolute from the working folder. */
 function styleFlag(style: string | undefined, io: CliIo): { style?: string } {
@@ -62,7 +63,7 @@ interface RenderFlags extends CommonFlags { outDir?: string; png?: boolean; outl
 function batchOptions(flags: RenderFlags, io: CliIo, deps: CliDeps): BatchOptions {
   return {
     outDir: flags.outDir ? resolve(io.cwd, flags.outDir) : undefined, png: !!flags.png, scale: flags.scale, scene: flags.scene, allowOutside: !!flags.allowOutside,
-    strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, outlineText: !!flags.outlineText, tempTag: String(io.pid),
+    strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, outlineText: !!flags.outlineText, tempTag: String(io.pid), ...(flags.locale ? { locale: flags.locale } : {}),
     maxBriefBytes: inputLimit('brief', io.env), fs: deps.fs, ...styleFlag(flags.style, io),
     housekeeping: { alive: io.alive ?? (() => true), now: io.now ?? (() => Date.now()) },
     ...(flags.timings ? { clock: io.clock } : {}),
@@ -109,8 +110,8 @@ async function runRender(entries: BriefEntry[], flags: RenderFlags, io: CliIo, e
   return exitFor(reports);
 }
 
-async function runExplain(file: string, flags: { json?: boolean; lenient?: boolean; style?: string }, io: CliIo, env: RenderEnv): Promise<number> {
-  const result = await renderFile(resolve(io.cwd, file), env, { strict: false, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env), ...styleFlag(flags.style, io) });
+async function runExplain(file: string, flags: { json?: boolean; lenient?: boolean; style?: string; locale?: Locale }, io: CliIo, env: RenderEnv): Promise<number> {
+  const result = await renderFile(resolve(io.cwd, file), env, { strict: false, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env), ...styleFlag(flags.style, io), ...(flags.locale ? { locale: flags.locale } : {}) });
   const diagnostics = relativeFiles(result.diagnostics, io.cwd);
   if (flags.json) {
     io.stdout(`${printable(JSON.stringify({ form: result.choice?.form ?? null, ok: result.ok, rationale: result.rationale, diagnostics }, null, 2), true)}\n`);
@@ -123,7 +124,7 @@ async function runExplain(file: string, flags: { json?: boolean; lenient?: boole
 }
 
 async function runCheck(paths: string[], flags: CommonFlags, io: CliIo, env: () => RenderEnv, deps: CliDeps): Promise<number> {
-  const opts = { png: false, allowOutside: !!flags.allowOutside, strict: !!flags.strict, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env), ...styleFlag(flags.style, io) };
+  const opts = { png: false, allowOutside: !!flags.allowOutside, strict: !!flags.strict, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env), ...styleFlag(flags.style, io), ...(flags.locale ? { locale: flags.locale } : {}) };
   const results: { ok: boolean; diagnostics: Diagnostic[] }[] = [];
   for (const plan of planRun(expandBriefs(paths, io.cwd, deps.listDir), opts, io.cwd).plans) {
     const result = await renderPlan(plan, env(), opts);
@@ -141,13 +142,16 @@ function chartwrightVersion(): string {
 
 /** --style, on every command that renders: it replaces each brief's `style:`. */
 const STYLE_OPTION = ['--style <name|path>', 'style preset (report, slide, print, dark) or style file, instead of each brief\'s `style:`'] as const;
+/** --locale: the numbers and dates of every brief in this locale, whatever the brief says. */
+const localeOption = () => new Option('--locale <name>', 'write numbers and dates in this locale instead of the brief\'s `locale:`').choices([...LOCALES]);
 
 const withCommonFlags = (c: Command) => c
   .option('--strict', 'treat warnings as errors')
   .option('--lenient', 'draw the nearest honest form, with a warning, instead of failing on a hard rule')
   .option('-q, --quiet', 'print only errors on stderr (no warnings, progress or timings)')
   .option('--allow-outside', 'let `output:` write outside the brief\'s folder (or -o DIR), absolute paths included')
-  .option(...STYLE_OPTION);
+  .option(...STYLE_OPTION)
+  .addOption(localeOption());
 
 const withRenderFlags = (c: Command) => withCommonFlags(c)
   .option('-o, --out-dir <dir>', 'write outputs under this folder instead of beside each brief')
@@ -171,7 +175,8 @@ function program(io: CliIo, env: () => RenderEnv, deps: CliDeps, exit: { code: n
     .option('--json', 'print JSON: { form, rationale, diagnostics }')
     .option('--lenient', 'explain the lenient render')
     .option(...STYLE_OPTION)
-    .action(async (file: string, flags: { json?: boolean; lenient?: boolean; style?: string }) => { exit.code = await runExplain(file, flags, io, env()); });
+    .addOption(localeOption())
+    .action(async (file: string, flags: { json?: boolean; lenient?: boolean; style?: string; locale?: Locale }) => { exit.code = await runExplain(file, flags, io, env()); });
   withCommonFlags(cli.command('check').description('validate and lint briefs; non-zero exit on errors').argument('<brief...>', 'brief files, or folders of them'))
     .action(async (files: string[], flags: CommonFlags) => { exit.code = await runCheck(files, flags, io, env, deps); });
   withRenderFlags(cli.command('demo').description('render the demo gallery from demo-data/ as SVG and PNG').argument('[dir]', 'output folder', 'gallery'))

@@ -39,7 +39,7 @@ export function splitTable(table: Table, facet: FieldRef): { parts: FacetPart[];
   const byLevel = new Map<string, { sortKey: number; rows: number[] }>();
   const missing: number[] = [];
   for (let i = 0; i < table.rowCount; i++) {
-    const label = keyText(column, i);
+    const label = keyText(column, i, facet.locale);
     if (label === null) { missing.push(table.rowPositions[i]!); continue; }
     let level = byLevel.get(label);
     if (!level) { level = { sortKey: orderOf(i), rows: [] }; byLevel.set(label, level); }

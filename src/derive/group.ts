@@ -63,12 +63,13 @@ export function groupRows(table: Table, query: GroupQuery): Grouped {
   const keyColumns = query.keys.map((k) => columnOf(table, k.name)!);
   const valueColumn = query.value ? columnOf(table, query.value.name)! : undefined;
   const orders = query.keys.map((k, i) => keyOrderOf(k, keyColumns[i]!));
+  const locales = query.keys.map((k) => k.locale);
   const groups = new Map<string, RowGroup>();
   const missingValue: number[] = [];
   const missingValueKeys = new Map<string, string[]>();
   const missingKey: number[][] = query.keys.map(() => []);
   for (let i = 0; i < table.rowCount; i++) {
-    const labels = keyColumns.map((c) => keyText(c, i));
+    const labels = keyColumns.map((c, j) => keyText(c, i, locales[j]));
     const absent = labels.findIndex((l) => l === null);
     if (absent >= 0) { missingKey[absent]!.push(table.rowPositions[i]!); continue; }
     const raw = valueColumn ? valueColumn.values[i] : 1;

@@ -24,7 +24,7 @@ function timesOf(table: Table, key: FieldRef): { grain: DateGrain; time: Map<str
   const time = new Map<string, number>();
   for (let i = 0; i < table.rowCount; i++) {
     const v = column.values[i];
-    if (typeof v === 'number') time.set(formatDate(v, grain), v);
+    if (typeof v === 'number') time.set(formatDate(v, grain, key.locale), v);
   }
   return { grain, time };
 }
@@ -55,7 +55,7 @@ export function filledLabels(labels: readonly string[], table: Table, key: Field
     if (dates.grain === 'day' && step === 1 && onlyWeekend(times[i]!, times[i + 1]!)) return;
     for (let k = u[i]! + step; k < u[i + 1]!; k += step) {
       const t = timeOf(k, dates.grain);
-      out.push(formatDate(t, dates.grain));
+      out.push(formatDate(t, dates.grain, key.locale));
       at.push(t);
       inserted.push(out[out.length - 1]!);
     }

@@ -52,7 +52,7 @@ function readCells(table: Table, rows: FieldRef, columns: FieldRef, value: Field
   const missing: number[][] = [[], [], []];
   for (let i = 0; i < table.rowCount; i++) {
     // Plain statements: this runs once per row (a million for a 1,000 × 1,000 matrix).
-    const rl = keyText(rc, i), cl = keyText(cc, i), v = vc.values[i];
+    const rl = keyText(rc, i, rows.locale), cl = keyText(cc, i, columns.locale), v = vc.values[i];
     const gone = rl === null ? 0 : cl === null ? 1 : typeof v !== 'number' ? 2 : -1;
     if (gone >= 0) { missing[gone]!.push(table.rowPositions[i]!); continue; }
     entries.push(r.at(rl!, () => rowOrder(i)), c.at(cl!, () => columnOrder(i)), v as number);

@@ -103,6 +103,8 @@ export function inferFields(table: Table, brief: ResolvedBrief): Outcome<Fields>
       name: column.name, label: hint?.label ?? readableName(column.name), type, role,
       unit: hint?.unit ?? column.unit, format: hint?.format, notation: brief.notation, additive: hint?.additive ?? isAdditiveUnit(hint?.unit ?? column.unit), levels: levelsOf(column, type, hint, problems), column,
       ...(hint?.zero === 'arbitrary' ? { zero: hint.zero } : {}),
+      // Only a locale other than English is stated, so an English chart's plan reads as before.
+      ...(brief.locale !== 'en' ? { locale: brief.locale } : {}),
     };
   });
   if (hasErrors(problems)) return failure(problems);

@@ -1,41 +1,47 @@
+import type { Locale } from '../brief/types.js';
 import type { Column, DateGrain } from '../table/types.js';
+import { localeDef } from './locales.js';
 
-const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
-
-/** Writes a UTC time at a grain: "2026", "Oct 2026", "4 Oct 2026", "4 Oct 2026 06:30". */
-export function formatDate(time: number, grain: DateGrain): string {
+/**
+ * Writes a UTC time at a grain, in a locale's names (default English): "2026", "Oct 2026",
+ * "4 Oct 2026", "4 Oct 2026 06:30"; in de "Okt. 2026", "4. Okt. 2026".
+ */
+export function formatDate(time: number, grain: DateGrain, locale?: Locale): string {
   const d = new Date(time);
+  const def = localeDef(locale);
   const year = String(d.getUTCFullYear());
-  const month = MONTHS[d.getUTCMonth()]!;
+  const month = def.shortMonths[d.getUTCMonth()]!;
   const pad = (n: number) => String(n).padStart(2, '0');
   if (grain === 'year') return year;
   if (grain === 'month') return `${month} ${year}`;
-  const day = `${d.getUTCDate()} ${month} ${year}`;
+  const day = def.date(d.getUTCDate(), d.getUTCMonth(), year);
   if (grain === 'day') return day;
   const clock = `${pad(d.getUTCHours())}:${pad(d.getUTCMinutes())}`;
   return grain === 'minute' ? `${day} ${clock}` : `${day} ${clock}:${pad(d.getUTCSeconds())}`;
 }
 
 /** Writes the quarter a UTC time falls in: "Q1 2025". */
-export function quarterName(time: number): string {
+export function quarterName(time: number, locale?: Locale): string {
   const d = new Date(time);
-  return `Q${Math.floor(d.getUTCMonth() / 3) + 1} ${d.getUTCFullYear()}`;
+  return localeDef(locale).quarter(Math.floor(d.getUTCMonth() / 3) + 1, String(d.getUTCFullYear()));
 }
 
-/** The label of a key cell as a reader sees it: dates written out, other values as in the data. */
-export function keyText(column: Column, row: number): string | null {
+/** The label of a key cell as a reader sees it: dates written out (in the locale's names), other values as in the data. */
+export function keyText(column: Column, row: number, locale?: Locale): string | null {
   const value = column.values[row];
   if (value === null || value === undefined) return null;
-  if (column.type === 'date' && column.quarterly) return quarterName(value as number);
-  if (column.type === 'date') return formatDate(value as number, column.grain ?? 'day');
+  if (column.type === 'date' && column.quarterly) return quarterName(value as number, locale);
+  if (column.type === 'date') return formatDate(value as number, column.grain ?? 'day', locale);
   return column.text[row] ?? String(value);
 }
 
 /** Whether a word is a month or weekday name written with its capital ("May", "Sept", "Mon"), which keeps its capital inside a sentence. */
 function calendarName(word: string): boolean {
   const lower = word.toLowerCase();
-  return /^\p{Lu}\p{Ll}+$/u.test(word) && (lower === 'sept' || CYCLES.slice(0, CALENDAR_CYCLES).some((c) => c.includes(lower)));
+  return /^\p{Lu}\p{Ll}+$/u.test(word) && (lower === 'sept' || CYCLES.slice(0, CALENDAR_CYCLES).some((c) => c.includes(lower)) || PROPER_DE.test(word));
 }
+// So do the German month names a date label of `locale: de` starts with (only in sentences: column names are read as before).
+const PROPER_DE = /^(Januar|Februar|März|April|Mai|Juni|Juli|August|September|Oktober|November|Dezember|Jan|Feb|Apr|Aug|Sept|Okt|Nov|Dez)$/;
 
 /**
  * A label as it reads inside a sentence ("Bar chart of crossings per day"): only a first word

@@ -1,10 +1,12 @@
-import type { Notation } from '../brief/types.js';
+import type { Locale, Notation } from '../brief/types.js';
 
-/** What a formatter needs to know of a field: the user's d3-format specifier, its unit, the notation. */
+/** What a formatter needs to know of a field: the user's d3-format specifier, its unit, the notation, the locale. */
 export interface NumberStyle {
   format?: string | undefined;
   unit?: string | undefined;
   notation?: Notation | undefined;
+  /** Whose marks and scale words it is written in. Default: English. */
+  locale?: Locale | undefined;
 }
 
 /**

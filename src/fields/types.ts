@@ -1,4 +1,4 @@
-import type { FieldType, Notation } from '../brief/types.js';
+import type { FieldType, Locale, Notation } from '../brief/types.js';
 import type { Column } from '../table/types.js';
 
 /** The part a field plays in the chart. */
@@ -22,14 +22,16 @@ export interface Field {
   column: Column;
   /** `arbitrary` when the brief says the field's zero means nothing (`fields.<col>.zero`). Default: absent. */
   zero?: 'arbitrary';
+  /** How its numbers and dates are written on the chart (the brief's `locale`). Default: absent, English. */
+  locale?: Locale;
 }
 
 /** A field as plans refer to it: its name and presentation, never its column of data. */
-export type FieldRef = Pick<Field, 'name' | 'label' | 'type' | 'unit' | 'format' | 'levels'> & Partial<Pick<Field, 'notation' | 'additive'>>;
+export type FieldRef = Pick<Field, 'name' | 'label' | 'type' | 'unit' | 'format' | 'levels'> & Partial<Pick<Field, 'notation' | 'additive' | 'locale'>>;
 
 /** The reference to a field that a plan keeps. */
 export function refOf(field: Field): FieldRef {
-  return { name: field.name, label: field.label, type: field.type, unit: field.unit, format: field.format, notation: field.notation, additive: field.additive, levels: field.levels };
+  return { name: field.name, label: field.label, type: field.type, unit: field.unit, format: field.format, notation: field.notation, additive: field.additive, levels: field.levels, ...(field.locale ? { locale: field.locale } : {}) };
 }
 
 /** The fields of a brief: its keys and values in brief order, then every other column. */

@@ -1,4 +1,4 @@
-import { format } from 'd3-format';
+import { numberFormatIn } from '../layout/number-format.js';
 import { capText } from '../layout/text.js';
 import { summaryOf, type BarQuery, type DerivedBars, type FoldSummary } from '../derive/bars.js';
 import { axisTitle } from '../layout/axis.js';
@@ -31,7 +31,7 @@ export function noDataNote(query: Pick<BarQuery, 'key' | 'noData'>): string[] {
 /** The note printed under a folded chart, saying what "Others" holds or what was left out. */
 export function foldNote(query: BarQuery, fold: FoldSummary | undefined, valueTitle: string, fmt: (n: number) => string): string[] {
   if (!fold) return [];
-  const n = format(',d')(fold.count);
+  const n = numberFormatIn(query.key.locale, ',d')(fold.count);
   const key = inSentence(query.key.label);
   const value = inSentence(valueTitle);
   // With negative values, the keys folded are those closest to zero, not the smallest.

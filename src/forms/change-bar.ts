@@ -3,7 +3,7 @@ import { periodChanges, type PeriodChange } from '../derive/period-change.js';
 import { diagnostic, failure, success } from '../diagnostics/diagnostic.js';
 import { refOf } from '../fields/types.js';
 import type { CartesianDomains } from '../layout/kit-types.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import { asBand, asLinear } from '../layout/scales.js';
 import type { SceneNode } from '../scene/types.js';
 import { lineDecisions, type LinePlan } from './line-plan.js';
@@ -80,7 +80,7 @@ export const CHANGE_BAR: FormDef<LinePlan, DerivedChanges> = {
     return { marks, labels: [], diagnostics: [] };
   },
   words(d) {
-    const fmt = valueFormatter(d.changes.map((c) => c.change));
+    const fmt = valueFormatter(d.changes.map((c) => c.change), labelStyle(undefined, d.query.key));
     const last = d.changes[d.changes.length - 1];
     const description = `Bar chart of ${inSentence(title(d))}, ${d.changes.length} bars${last ? `; the last, ${last.label}, ${fmt(last.change)} %` : ''}.`;
     return { title: title(d), description, notes: [] };

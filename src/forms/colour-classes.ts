@@ -3,7 +3,7 @@ import type { Decision } from '../choose/types.js';
 import type { FieldRef } from '../fields/types.js';
 import { axisTitle } from '../layout/axis.js';
 import type { LegendSpec } from '../layout/legend.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import type { Style } from '../style/types.js';
 
 /** Sequential classes (`equalOnly`: never quantiles), or diverging ones around a declared midpoint or zero when the data straddle it; each with its rule. */
@@ -26,5 +26,5 @@ export function chooseClasses(cells: Float64Array, value: FieldRef, midpoint: nu
 
 /** The binned legend of a value's colour classes: each class's colour and its bounds, formatted as the value is. */
 export function classLegend(value: FieldRef, { classes }: ColourClasses): LegendSpec {
-  return { kind: 'binned', field: value.name, title: axisTitle(value, value.label), bins: classes.map((c) => ({ from: c.from, to: c.to, fill: c.fill })), format: valueFormatter(classes.flatMap((c) => [c.from, c.to]), value.format) };
+  return { kind: 'binned', field: value.name, title: axisTitle(value, value.label), bins: classes.map((c) => ({ from: c.from, to: c.to, fill: c.fill })), format: valueFormatter(classes.flatMap((c) => [c.from, c.to]), labelStyle(value)) };
 }

@@ -6,7 +6,7 @@ import { axisTitle } from '../layout/axis.js';
 import { frameFor } from '../layout/compose.js';
 import type { LayoutContext } from '../layout/kit-types.js';
 import type { LegendSpec } from '../layout/legend.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, numberFormatIn, valueFormatter } from '../layout/number-format.js';
 import { rasterNode } from '../layout/raster-image.js';
 import type { Table } from '../table/types.js';
 import { noDataNote } from './bar-text.js';
@@ -31,12 +31,12 @@ const legendOf = (d: Pick<DerivedDense, 'query'>): LegendSpec => classLegend(d.q
 function countNote(plan: DensePlan, n: number): string {
   const what = plan.key ? `${inSentence(plan.key.label)} values` : 'rows';
   const order = plan.order === 'value' ? 'in value order, largest first' : plan.order === 'key' ? `in ${inSentence(plan.key!.label)} order` : plan.order === 'label' ? 'in label order' : 'in data order';
-  return `${format(',')(n)} ${what}, one square cell each, ${order}, read left to right in rows from the top.`;
+  return `${numberFormatIn(plan.value.locale, ',')(n)} ${what}, one square cell each, ${order}, read left to right in rows from the top.`;
 }
 
 /** The notes: how the items are laid out, then what was left out ("No data: …", or a count of rows). */
 function denseNotes(plan: DensePlan, n: number, left: DenseItems['left']): string[] {
-  const rows = left.rows ? [`${format(',')(left.rows)} row${left.rows === 1 ? ' has' : 's have'} no value and ${left.rows === 1 ? 'is' : 'are'} not drawn.`] : [];
+  const rows = left.rows ? [`${numberFormatIn(plan.value.locale, ',')(left.rows)} row${left.rows === 1 ? ' has' : 's have'} no value and ${left.rows === 1 ? 'is' : 'are'} not drawn.`] : [];
   return [countNote(plan, n), ...(plan.key ? noDataNote({ key: plan.key, noData: left.keys }) : []), ...rows];
 }
 
@@ -72,13 +72,13 @@ export const DENSE: FormDef<DensePlan, DerivedDense> = {
   legend: legendOf,
   words(d) {
     const value = axisTitle(d.query.value, d.query.value.label);
-    const fmt = valueFormatter(Array.from(d.values), d.query.value.format);
+    const fmt = valueFormatter(Array.from(d.values), labelStyle(d.query.value));
     const n = d.values.length;
     let [lo, hi] = [0, 0];
     for (let i = 1; i < n; i++) { if (d.values[i]! < d.values[lo]!) lo = i; if (d.values[i]! > d.values[hi]!) hi = i; }
     return {
-      title: `${value} of ${format(',')(n)} ${d.query.key ? inSentence(d.query.key.label) : 'items'}`,
-      description: `Dense pixel layout of ${inSentence(value)} for ${format(',')(n)} items, one cell each, from ${fmt(d.values[lo]!)} to ${fmt(d.values[hi]!)}, coloured in ${d.query.classes.classes.length} classes.`,
+      title: `${value} of ${numberFormatIn(d.query.value.locale, ',')(n)} ${d.query.key ? inSentence(d.query.key.label) : 'items'}`,
+      description: `Dense pixel layout of ${inSentence(value)} for ${numberFormatIn(d.query.value.locale, ',')(n)} items, one cell each, from ${fmt(d.values[lo]!)} to ${fmt(d.values[hi]!)}, coloured in ${d.query.classes.classes.length} classes.`,
       notes: denseNotes(d.query, n, d.left),
     };
   },

@@ -66,7 +66,7 @@ function layoutDonut(derived: ShareBars, body: Box, ctx: LayoutContext): BodyMar
     const datum = { [derived.query.key.name]: bar.label, [derived.sourceName]: derived.originals.get(bar.label) ?? null, share: bar.value };
     marks.push({ kind: 'path', id, role: 'segment', datum, commands: wedgePath({ cx, cy, inner, outer, start, end }), fill: f[i]!, stroke: ctx.style.background, strokeWidth: 1 });
     const mid = (inner + outer) / 2;
-    const label = wedgeLabel(percentText(bar.value), f[i]!, polar(cx, cy, mid, (start + end) / 2), { thickness: outer - inner, arc: mid * (end - start) }, ctx, ctx.id('label', bar.label));
+    const label = wedgeLabel(percentText(bar.value, derived.query.key.locale), f[i]!, polar(cx, cy, mid, (start + end) / 2), { thickness: outer - inner, arc: mid * (end - start) }, ctx, ctx.id('label', bar.label));
     if (label) labels.push(label);
   });
   const plot = { x: cx - outer, y: cy - outer, width: 2 * outer, height: 2 * outer };
@@ -87,7 +87,7 @@ export const DONUT: FormDef<BarPlan, ShareBars> = {
   layoutBody: layoutDonut,
   words(derived) {
     const name = inSentence(derived.query.key.label);
-    const parts = derived.bars.map((b) => `${b.label} ${percentText(b.value)}`).join(', ');
+    const parts = derived.bars.map((b) => `${b.label} ${percentText(b.value, derived.query.key.locale)}`).join(', ');
     return { title: `${derived.query.value!.label} by ${name}`, description: `Donut chart of the ${derived.bars.length} parts of the whole by ${name}: ${parts}.`, notes: [] };
   },
 };

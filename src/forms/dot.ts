@@ -4,7 +4,7 @@ import { deriveDotRows, type DotRow, type PartialRow } from '../derive/dots.js';
 import { axisTitle } from '../layout/axis.js';
 import { plotFor } from '../layout/compose.js';
 import type { CartesianDomains, LayoutContext, PlotArea } from '../layout/kit-types.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import { asBand, asLinear } from '../layout/scales.js';
 import type { Datum, SceneNode } from '../scene/types.js';
 import type { Table } from '../table/types.js';
@@ -121,7 +121,7 @@ export const DOT: FormDef<DotPlan, DerivedDots> = {
   words(derived) {
     const { plan, rows } = derived;
     const known = (r: DotRow) => r.values.filter((v) => !Number.isNaN(v));
-    const fmt = valueFormatter(rows.flatMap(known), plan.values[0]!.format);
+    const fmt = valueFormatter(rows.flatMap(known), labelStyle(plan.values[0]));
     const what = `${plan.values.length === 2 ? 'Dumbbell' : 'Dot'} plot of ${inSentence(valueTitle(plan))} by ${inSentence(plan.key.label)}, ${rows.length} key${rows.length === 1 ? '' : 's'}`;
     const top = rows[0]!;
     return {

@@ -2,7 +2,7 @@ import { fsum, max, min } from 'd3-array';
 import { deriveGroupedBars, type DerivedGroupedBars, type GroupedBar } from '../derive/grouped-bars.js';
 import { plotFor } from '../layout/compose.js';
 import type { CartesianDomains, LayoutContext, PlotArea } from '../layout/kit-types.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import { asBand, asLinear } from '../layout/scales.js';
 import type { SceneNode } from '../scene/types.js';
 import { MIN_BAND_PX } from './bar.js';
@@ -56,7 +56,7 @@ function barRect(derived: Derived, bar: GroupedBar, area: PlotArea, ctx: LayoutC
 /** One sentence for screen readers: what is compared, how many keys and groups, and the largest bar. */
 function describe(derived: Derived): string {
   const plan = derived.query;
-  const fmt = valueFormatter(derived.bars.map((b) => b.value), plan.value?.format);
+  const fmt = valueFormatter(derived.bars.map((b) => b.value), labelStyle(plan.value, plan.key));
   const what = `Grouped bar chart of ${inSentence(barValueTitle(plan))} by ${inSentence(plan.key.label)} and ${inSentence(plan.group.label)}, ${derived.keys.length} keys × ${plan.groups.length} groups`;
   const top = derived.bars.reduce<GroupedBar | undefined>((a, b) => (!a || b.value > a.value ? b : a), undefined);
   return top ? `${what}: largest ${top.key}, ${top.group} (${fmt(top.value)}).` : `${what}.`;
@@ -76,7 +76,7 @@ export const GROUPED_BAR: FormDef<GroupedBarPlan, Derived> = {
   domains: (derived) => domainsOf(derived.query, derived.keys, extentOf(derived.bars)),
   facets: { noun: 'total', value: (derived) => fsum(derived.bars, (b) => b.value), minBand: (derived) => derived.query.groups.length * MIN_BAND_PX },
   layout(derived, area, ctx) {
-    const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format);
+    const fmt = valueFormatter(derived.bars.map((b) => b.value), labelStyle(derived.query.value, derived.query.key));
     return { marks: derived.bars.map((bar) => barRect(derived, bar, area, ctx, fmt)), labels: [], diagnostics: [] };
   },
   words(derived) {

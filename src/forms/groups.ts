@@ -5,7 +5,7 @@ import { groupRows } from '../derive/group.js';
 import { diagnostic, failure, success, type Outcome } from '../diagnostics/diagnostic.js';
 import { axisTitle } from '../layout/axis.js';
 import type { CartesianDomains, FormWords, LayoutContext, PlotArea } from '../layout/kit-types.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, numberFormatIn, valueFormatter } from '../layout/number-format.js';
 import type { Table } from '../table/types.js';
 import type { FormName } from '../brief/types.js';
 import type { Decision } from '../choose/types.js';
@@ -58,7 +58,8 @@ export function groupDomains(d: DerivedGroups): CartesianDomains {
 /** Title, description and notes of a chart of a value by group; `how` says how to read the marks. */
 export function groupWords(d: DerivedGroups, noun: string, how: string): FormWords {
   const { key, value } = d.query;
-  const fmt = valueFormatter(d.groups.map((g) => g.stats.median), value.format);
+  const fmt = valueFormatter(d.groups.map((g) => g.stats.median), labelStyle(value));
+  const count = numberFormatIn(value.locale, ',d');
   const unit = value.unit ? ` ${value.unit}` : '';
   const byMedian = [...d.groups].sort((a, b) => b.stats.median - a.stats.median);
   const [top, low] = [byMedian[0]!, byMedian[byMedian.length - 1]!];

@@ -3,7 +3,7 @@ import { classOf } from '../derive/classes.js';
 import type { ClusterTree } from '../derive/hclust.js';
 import { dendrogramNodes } from '../derive/reorder.js';
 import type { LayoutContext } from '../layout/kit-types.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import { rasterNode } from '../layout/raster-image.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Box, Datum, PathCommand, SceneNode, TextNode } from '../scene/types.js';
@@ -40,7 +40,7 @@ export function vectorCells(d: DerivedHeatmap, g: HeatmapGeometry, ctx: LayoutCo
   const [cw, ch] = [g.matrix.width / columnOrder.length, g.matrix.height / rowOrder.length];
   const style = ctx.style.text.label;
   const box = textBoxHeight(ctx.measure, style);
-  const fmt = valueFormatter(Array.from(m.cells).filter((v) => !Number.isNaN(v)), d.query.value.format);
+  const fmt = valueFormatter(Array.from(m.cells).filter((v) => !Number.isNaN(v)), labelStyle(d.query.value));
   const marks: SceneNode[] = [];
   const labels: TextNode[] = [];
   rowOrder.forEach((r, i) => columnOrder.forEach((c, j) => {

@@ -1,4 +1,4 @@
-import { format } from 'd3-format';
+import { numberFormatIn } from '../layout/number-format.js';
 import { diagnostic, failure, success, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { clusterMatrix } from '../derive/reorder.js';
 import { isOrdered } from '../fields/types.js';
@@ -47,7 +47,7 @@ const legendOf = (d: DerivedHeatmap): LegendSpec => classLegend(d.query.value, d
 function missingNote(d: DerivedHeatmap): string[] {
   const n = d.matrix.missing;
   if (n === 0) return [];
-  return [`${format(',')(n)} cell${n === 1 ? ' has' : 's have'} no value: drawn ${d.query.raster ? 'in grey' : 'hatched'}, not as zero.`];
+  return [`${numberFormatIn(d.query.value.locale, ',')(n)} cell${n === 1 ? ' has' : 's have'} no value: drawn ${d.query.raster ? 'in grey' : 'hatched'}, not as zero.`];
 }
 
 const SKIPPED_NAMES = 4;
@@ -66,7 +66,7 @@ function skippedNote(d: DerivedHeatmap): string[] {
 const ordinal = (k: number) => (k === 2 ? 'second' : `${k}th`);
 
 function thinNote(g: HeatmapGeometry, d: DerivedHeatmap): string[] {
-  const part = (k: number, n: number, what: string) => (k > 1 ? [`every ${ordinal(k)} of ${format(',')(n)} ${what}`] : []);
+  const part = (k: number, n: number, what: string) => (k > 1 ? [`every ${ordinal(k)} of ${numberFormatIn(d.query.value.locale, ',')(n)} ${what}`] : []);
   const parts = [...part(g.rowStep, d.rowOrder.length, 'rows'), ...part(g.columnStep, d.columnOrder.length, 'columns')];
   return parts.length ? [`Too many to label each at this size: labelled are ${parts.join(' and ')}.`] : [];
 }

@@ -4,7 +4,7 @@ import type { Binning } from '../derive/bins.js';
 import { diagnostic, failure, success, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { axisTitle } from '../layout/axis.js';
 import type { CartesianDomains, FormWords, LayoutContext } from '../layout/kit-types.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, numberFormatIn, valueFormatter } from '../layout/number-format.js';
 import { asLinear } from '../layout/scales.js';
 import type { SceneNode } from '../scene/types.js';
 import { histogramBins, histogramValues, planHistogram, type HistogramPlan } from './histogram-plan.js';
@@ -25,7 +25,7 @@ const count = format(',d');
 
 /** The count axis's title: what is counted, and in bins of what width and unit. */
 export function countTitle(d: DerivedHistogram): string {
-  const fmt = valueFormatter([d.bins.width, ...d.bins.edges], d.query.value.format);
+  const fmt = valueFormatter([d.bins.width, ...d.bins.edges], labelStyle(d.query.value));
   return `Number of rows (bins of ${fmt(d.bins.width)}${d.query.value.unit ? ` ${d.query.value.unit}` : ''})`;
 }
 
@@ -48,7 +48,8 @@ function missingWarnings(diagnostics: readonly Diagnostic[], missing: number, n:
 function words(d: DerivedHistogram): FormWords {
   const value = d.query.value;
   const label = inSentence(value.label);
-  const fmt = valueFormatter([d.bins.width, ...d.bins.edges], value.format);
+  const fmt = valueFormatter([d.bins.width, ...d.bins.edges], labelStyle(value));
+  const count = numberFormatIn(value.locale, ',d');
   const { edges, counts } = d.bins;
   const top = counts.indexOf(max(counts) ?? 0);
   const unit = value.unit ? ` ${value.unit}` : '';

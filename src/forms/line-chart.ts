@@ -5,7 +5,7 @@ import { plotFor } from '../layout/compose.js';
 import { memoized, type CartesianDomains, type Channel, type FormWords, type LayoutContext, type PlotArea } from '../layout/kit-types.js';
 import type { LegendSpec } from '../layout/legend.js';
 import { asLinear } from '../layout/scales.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
 import { combineNote } from './combining.js';
 import { directLabels, labelGutter, labelsFit, type LineEnd } from './line-labels.js';
@@ -131,7 +131,7 @@ export function lineChart<D extends DerivedLines>(name: string, view: LineView<D
     },
     words(derived): FormWords {
       const title = view.valueTitle(derived);
-      const fmt = valueFormatter(derived.series.flatMap((s) => { const i = lastPresent(s); return i === undefined ? [] : [s.ys[i]!]; }), derived.query.value?.format);
+      const fmt = valueFormatter(derived.series.flatMap((s) => { const i = lastPresent(s); return i === undefined ? [] : [s.ys[i]!]; }), labelStyle(derived.query.value, derived.query.key));
       return { title: `${title} by ${inSentence(derived.query.key.label)}`, description: lineDescription(derived, view.noun, title, fmt), notes: notesOf(view, derived) };
     },
   };

@@ -14,8 +14,8 @@ export function lineValueTitle(query: LineQuery): string {
 export function keyName(derived: DerivedLines, x: number): string {
   const { key } = derived.query;
   const column = derived.keyColumn;
-  if (derived.quarterly) return quarterName(x);
-  if (column.type === 'date') return formatDate(x, column.grain ?? 'day');
+  if (derived.quarterly) return quarterName(x, key.locale);
+  if (column.type === 'date') return formatDate(x, column.grain ?? 'day', key.locale);
   if (key.type === 'ordinal' || key.type === 'cyclic' || key.type === 'categorical') return key.levels[x] ?? String(x);
   return String(x);
 }

@@ -3,7 +3,7 @@ import { deriveBars, type BarDatum, type DerivedBars } from '../derive/bars.js';
 import { cycleAngles, radialBarRadius } from '../derive/radial.js';
 import type { ValueTicks } from '../layout/axis.js';
 import { memoized, ticksFor, type LayoutContext } from '../layout/kit-types.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import { polarPoint, ringCommands, sectorCommands } from '../layout/polar.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { BodyMarks } from '../layout/chart.js';
@@ -113,7 +113,7 @@ function emptySector(derived: DerivedBars<RadialBarPlan>, label: string, angle: 
 
 /** A bar's tooltip: the key and value by their labels, the value in the chart's number format (formatter made once per chart). */
 function radialTooltip(derived: DerivedBars<RadialBarPlan>, bar: BarDatum, ctx: LayoutContext): string {
-  const fmt = memoized(ctx, 'radial-bar\u0000format', () => valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format));
+  const fmt = memoized(ctx, 'radial-bar\u0000format', () => valueFormatter(derived.bars.map((b) => b.value), labelStyle(derived.query.value, derived.query.key)));
   return tooltipText([[derived.query.key.label, bar.label], [barValueTitle(derived.query), fmt(bar.value)]]);
 }
 
@@ -162,7 +162,7 @@ export const RADIAL_BAR: FormDef<RadialBarPlan, DerivedBars<RadialBarPlan>> = {
   layoutBody: layoutRadial,
   words(derived) {
     const valueTitle = barValueTitle(derived.query);
-    const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format);
+    const fmt = valueFormatter(derived.bars.map((b) => b.value), labelStyle(derived.query.value, derived.query.key));
     const n = derived.bars.length;
     const what = `Radial bar chart of ${inSentence(valueTitle)} by ${inSentence(derived.query.key.label)}, ${n} bar${n === 1 ? '' : 's'} around a circle in cycle order`;
     const top = derived.bars.reduce<BarDatum | undefined>((a, b) => (a === undefined || b.value > a.value ? b : a), undefined);

@@ -72,6 +72,6 @@ export function pointLegends(c: Codings, style: Style): LegendSpec[] {
     const fill = (l: string) => (sameField ? fillOf(l, c.colorLevels, style) : style.palette.others);
     legends.push({ kind: 'shape', field: c.shape.name, title: c.shape.label, entries: c.shapeLevels.map((l) => ({ label: l, shape: shapeOf(l, c.shapeLevels), fill: fill(l) })) });
   }
-  if (c.area && c.maxArea > 0) legends.push({ kind: 'size', field: c.area.name, title: axisTitle(c.area, c.area.label), maxValue: c.maxArea, maxRadius: c.maxRadius, fill: style.background, stroke: style.lines.axis });
+  if (c.area && c.maxArea > 0) legends.push({ kind: 'size', field: c.area.name, title: axisTitle(c.area, c.area.label), maxValue: c.maxArea, maxRadius: c.maxRadius, fill: style.background, stroke: style.lines.axis, ...(c.area.locale ? { locale: c.area.locale } : {}) });
   return legends;
 }

@@ -10,7 +10,7 @@ import type { FormDef } from './types.js';
 /** The legends of a derived scatter: the density's count classes, or the points' colours, shapes and sizes. */
 function legendsOf(derived: DerivedScatter, style: Parameters<typeof pointLegends>[1]): LegendSpec[] {
   const { plan } = derived;
-  if (derived.classes) return [{ kind: 'binned', field: 'count', title: 'Points per hexagon', bins: derived.classes }];
+  if (derived.classes) return [{ kind: 'binned', field: 'count', title: 'Points per hexagon', bins: derived.classes, ...(plan.x.locale ? { locale: plan.x.locale } : {}) }];
   return pointLegends({
     ...(plan.color ? { color: plan.color } : {}), ...(plan.shape ? { shape: plan.shape } : {}), ...(plan.area ? { area: plan.area } : {}),
     colorLevels: plan.color?.levels ?? [], shapeLevels: plan.shape?.levels ?? [], maxArea: derived.maxArea, maxRadius: plan.radius,

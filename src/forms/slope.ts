@@ -2,7 +2,7 @@ import { extent, max } from 'd3-array';
 import { deriveSlopes, type Direction, type SlopeItem, type SlopeQuery } from '../derive/slopes.js';
 import { axisTitle } from '../layout/axis.js';
 import type { CartesianDomains, LayoutContext, PlotArea } from '../layout/kit-types.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import { asBand, asLinear } from '../layout/scales.js';
 import type { Datum, SceneNode, TextNode } from '../scene/types.js';
 import { segment } from '../svg/path.js';
@@ -88,7 +88,7 @@ function lineMarks(d: DerivedSlope, item: SlopeItem, xs: [number, number], y: (v
 }
 
 function endSpecs(d: DerivedSlope, xs: [number, number], y: (v: number) => number): [EndSpec, EndSpec] {
-  const fmt = valueFormatter(d.items.flatMap((i) => [i.before, i.after]), valueField(d.plan.query).format);
+  const fmt = valueFormatter(d.items.flatMap((i) => [i.before, i.after]), labelStyle(valueField(d.plan.query)));
   const spec = (side: 'left' | 'right', i: 0 | 1, v: (it: SlopeItem) => number): EndSpec => ({
     side, axisX: xs[i], name: d.ends[i], y: (it) => y(v(it)), value: (it) => fmt(v(it)),
     text: (it) => (side === 'left' ? `${it.label} ${fmt(v(it))}` : `${fmt(v(it))} ${it.label}`),
@@ -130,7 +130,7 @@ function words(d: DerivedSlope) {
   const count = (dir: Direction) => d.items.filter((i) => i.direction === dir).length;
   const notes: string[] = [];
   if (q.width) {
-    const fmt = valueFormatter(d.items.map((i) => i.width ?? 0), q.width.format);
+    const fmt = valueFormatter(d.items.map((i) => i.width ?? 0), labelStyle(q.width));
     const unit = q.width.unit ? ` ${q.width.unit}` : '';
     notes.push(`Line width shows ${inSentence(q.width.label)}: the thickest line is ${fmt(max(d.items, (i) => i.width ?? 0) ?? 0)}${unit}.`);
   }

@@ -4,7 +4,7 @@ import { plotFor } from '../layout/compose.js';
 import { inkOn } from '../layout/ink.js';
 import { memoized, ticksFor, type BandChannel, type CartesianDomains, type FormMarks, type LayoutContext, type LinearChannel, type PlotArea } from '../layout/kit-types.js';
 import type { LegendSpec } from '../layout/legend.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import { asBand, asLinear, bandScale } from '../layout/scales.js';
 import { textBoxHeight, textNode } from '../layout/text.js';
 import type { Datum, RectNode, SceneNode, TextNode } from '../scene/types.js';
@@ -42,7 +42,7 @@ export function domainsWith(derived: StackDerived, legend: LegendSpec | undefine
 }
 
 /** The text of a segment's label: the part's name on absolute stacks, its percent on normalized ones. */
-const labelText = (derived: StackDerived, seg: Segment) => (derived.query.normalized ? percentText(seg.share) : seg.part);
+const labelText = (derived: StackDerived, seg: Segment) => (derived.query.normalized ? percentText(seg.share, derived.query.group.locale) : seg.part);
 
 /** Whether a label fits inside a segment `length` px long (along the value axis) and `thickness` px across. */
 function fits(derived: StackDerived, text: string, length: number, thickness: number, ctx: LayoutContext): boolean {
@@ -96,9 +96,9 @@ function segmentDatum(derived: StackDerived, stack: Stack, seg: Segment): Datum 
 /** A segment's tooltip: its group and part by their labels, and its value as the chart prints it (a percent on normalized stacks). */
 function segmentTooltip(derived: StackDerived): (stack: Stack, seg: Segment) => string {
   const { query } = derived;
-  const fmt = valueFormatter(derived.stacks.flatMap((s) => s.segments.map((g) => g.value)), query.value?.format);
+  const fmt = valueFormatter(derived.stacks.flatMap((s) => s.segments.map((g) => g.value)), labelStyle(query.value, query.group));
   const title = stackValueTitle(derived);
-  return (stack, seg) => tooltipText([[query.group.label, stack.group], [query.part.label, seg.part], [title, query.normalized ? percentText(seg.share) : fmt(seg.value)]]);
+  return (stack, seg) => tooltipText([[query.group.label, stack.group], [query.part.label, seg.part], [title, query.normalized ? percentText(seg.share, query.group.locale) : fmt(seg.value)]]);
 }
 
 /** One segment from its start to its end along the value scale, across its group's band. */

@@ -1,7 +1,9 @@
+import type { Locale } from '../brief/types.js';
+import { localeDef } from '../fields/locales.js';
 import type { DerivedStacks } from '../derive/stacks.js';
 import { axisTitle } from '../layout/axis.js';
 import type { FormWords } from '../layout/kit-types.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import type { StackPlan } from './stack-plan.js';
 import { inSentence } from '../fields/labels.js';
 
@@ -18,9 +20,10 @@ export function stackValueTitle(derived: StackDerived): string {
 }
 
 /** A share as a label: whole percents, "<1%" for a sliver that would round to nothing. */
-export function percentText(share: number): string {
-  if (share > 0 && share < 0.005) return '<1%';
-  return `${Math.round(share * 100)}%`;
+export function percentText(share: number, locale?: Locale): string {
+  const percent = localeDef(locale).percent;
+  if (share > 0 && share < 0.005) return `<1${percent}`;
+  return `${Math.round(share * 100)}${percent}`;
 }
 
 /** Notes under the chart: what "Other" holds, and which groups were left out. */
@@ -46,9 +49,9 @@ function stackDescription(derived: StackDerived): string {
   if (!first) return `${what}.`;
   if (query.normalized) {
     const base = first.segments.find((s) => s.part === parts[0]);
-    return `${what}: ${parts[0]} is ${percentText(base?.share ?? 0)} of ${first.group}.`;
+    return `${what}: ${parts[0]} is ${percentText(base?.share ?? 0, query.group.locale)} of ${first.group}.`;
   }
-  const fmt = valueFormatter(stacks.map((s) => s.total), query.value?.format);
+  const fmt = valueFormatter(stacks.map((s) => s.total), labelStyle(query.value, query.group));
   return `${what}: ${first.group} totals ${fmt(first.total)}.`;
 }
 

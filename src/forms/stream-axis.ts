@@ -44,9 +44,9 @@ export function streamAxis(derived: DerivedStream, plot: Box, body: Box, ctx: La
   const base = { name: 'key', field: time.name, title: time.label };
   if (time.type === 'temporal') {
     const finest = finestFor(derived, extent, plot.width);
-    const probe = timeScale(extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'), finest);
+    const probe = timeScale(extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'), finest, ctx.brief.locale);
     const [l, r] = inset(plot, probe.labels, ctx);
-    const scale = timeScale(extent, [l, r], tickCount(r - l, 'horizontal'), finest);
+    const scale = timeScale(extent, [l, r], tickCount(r - l, 'horizontal'), finest, ctx.brief.locale);
     return { xs: keys.map((k) => scale.map(k.at)), axis: drawTimeAxis('bottom', scale, { kind: 'time', ...base, extent, ...(derived.grain ? { grain: derived.grain } : {}) }, plot, body, ctx) };
   }
   if (time.type === 'quantitative') {

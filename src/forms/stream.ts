@@ -5,7 +5,7 @@ import { axisTitle } from '../layout/axis.js';
 import type { BodyMarks } from '../layout/chart.js';
 import type { LayoutContext } from '../layout/kit-types.js';
 import type { LegendSpec } from '../layout/legend.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import { lineHeight, textBoxHeight, textNode } from '../layout/text.js';
 import type { Box, SceneNode } from '../scene/types.js';
 import { bottomAxisHeight, streamAxis } from './stream-axis.js';
@@ -31,8 +31,8 @@ function fillsOf(derived: Derived, ctx: LayoutContext): string[] {
 function scaleBar(derived: Derived): { value: number; text: string } {
   const span = derived.extent[1] - derived.extent[0];
   const value = ticks(0, span / 3, 4).filter((t) => t > 0).at(-1) ?? span / 3;
-  const { unit, format } = derived.query.value;
-  return { value, text: `${valueFormatter([value], format)(value)}${unit ? ` ${unit}` : ''}` };
+  const { unit } = derived.query.value;
+  return { value, text: `${valueFormatter([value], labelStyle(derived.query.value))(value)}${unit ? ` ${unit}` : ''}` };
 }
 
 /** A vertical bar at the right of the plot, as long as the scale bar's value, with its text beside it. */

@@ -27,18 +27,18 @@ export function bottomRange(plot: Box, probeLabels: readonly string[], room: Lab
  */
 export function bottomTime(channel: TimeChannel, plot: Box, ctx: LayoutContext): TimeScale {
   const finest = finestTick(channel);
-  const probe = timeScale(channel.extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'), finest);
+  const probe = timeScale(channel.extent, [plot.x, plot.x + plot.width], tickCount(plot.width, 'horizontal'), finest, ctx.brief.locale);
   let [rangeLeft, rangeRight] = bottomRange(plot, probe.labels, NO_ROOM, ctx);
   const { tick } = ctx.style.text;
   const half = (l: string | undefined) => ctx.measure.width(l ?? '', tick.size, tick.weight) / 2;
-  let scale = timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'), finest);
+  let scale = timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'), finest, ctx.brief.locale);
   for (let i = 0; i < 3; i++) {
     const over = Math.max(0, plot.x - ctx.style.spacing.tickGap - (scale.map(scale.ticks[0] ?? 0) - half(scale.labels[0])));
     const end = scale.ticks.length - 1;
     const past = Math.max(0, scale.map(scale.ticks[end] ?? 0) + half(scale.labels[end]) - (plot.x + plot.width));
     if (over <= 1e-9 && past <= 1e-9) break;
     [rangeLeft, rangeRight] = [rangeLeft + over, rangeRight - past];
-    scale = timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'), finest);
+    scale = timeScale(channel.extent, [rangeLeft, rangeRight], tickCount(rangeRight - rangeLeft, 'horizontal'), finest, ctx.brief.locale);
   }
   return scale;
 }

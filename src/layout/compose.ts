@@ -65,7 +65,7 @@ function scalesWith(domains: CartesianDomains, box: PlotBox, bottomProbe: ValueT
   const { plot, left } = box;
   const leftBand: BandScale | undefined = left.kind === 'band' ? left.band : undefined;
   const y = domains.left.kind === 'linear' ? leftLinear(domains.left, plot, side === 'left' ? room : NO_ROOM, ctx)
-    : domains.left.kind === 'time' ? timeScale(domains.left.extent, [plot.y + plot.height, plot.y], tickCount(plot.height, 'vertical')) : leftBand!;
+    : domains.left.kind === 'time' ? timeScale(domains.left.extent, [plot.y + plot.height, plot.y], tickCount(plot.height, 'vertical'), undefined, ctx.brief.locale) : leftBand!;
   const x = domains.bottom.kind === 'linear' ? bottomLinear(domains.bottom, plot, bottomProbe!.labels, side === 'bottom' ? room : NO_ROOM, ctx, domains.left.kind === 'linear')
     : domains.bottom.kind === 'time' ? bottomTime(domains.bottom, plot, ctx) : bottomBand!;
   return { x, y, room };

@@ -134,11 +134,11 @@ export interface FormWords {
 /** The ticks of a value axis of this extent and length, chosen once per render (the tick search is the costly part of layout). */
 export function ticksFor(ctx: LayoutContext, lo: number, hi: number, length: number, direction: 'vertical' | 'horizontal', number: string | NumberStyle | undefined): ValueTicks {
   const style = numberStyleIn(ctx, number);
-  return memoized(ctx, `ticks\u0000${lo}\u0000${hi}\u0000${length}\u0000${direction}\u0000${style.format ?? ''}\u0000${style.unit ?? ''}\u0000${style.notation ?? ''}`, () => valueTicks(lo, hi, length, direction, ctx.style.text.tick, ctx.measure, style));
+  return memoized(ctx, `ticks\u0000${lo}\u0000${hi}\u0000${length}\u0000${direction}\u0000${style.format ?? ''}\u0000${style.unit ?? ''}\u0000${style.notation ?? ''}\u0000${style.locale ?? ''}`, () => valueTicks(lo, hi, length, direction, ctx.style.text.tick, ctx.measure, style));
 }
 
-/** How a channel's numbers are written in this chart: its format and unit, and the brief's notation. */
+/** How a channel's numbers are written in this chart: its format and unit, and the brief's notation and locale. */
 export function numberStyleIn(ctx: Pick<LayoutContext, 'brief'>, number: string | NumberStyle | undefined): NumberStyle {
   const style = typeof number === 'object' ? number : { format: number };
-  return { ...style, notation: style.notation ?? ctx.brief.notation };
+  return { ...style, notation: style.notation ?? ctx.brief.notation, locale: style.locale ?? ctx.brief.locale };
 }

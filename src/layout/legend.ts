@@ -2,6 +2,7 @@ import { ticks } from 'd3-array';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { LegendEntry, LegendInfo, SceneNode, TextNode } from '../scene/types.js';
 import type { Style } from '../style/types.js';
+import type { Locale } from '../brief/types.js';
 import { valueFormatter } from './number-format.js';
 import { symbolNode, type ShapeName } from './symbols.js';
 import { lineHeight, textBoxHeight, textNode, truncateText, wrapText } from './text.js';
@@ -9,8 +10,8 @@ import { lineHeight, textBoxHeight, textNode, truncateText, wrapText } from './t
 /** What a legend explains: colours by category or by class, circle sizes, or point shapes. */
 export type LegendSpec =
   | { kind: 'categorical'; field: string; title: string; entries: { label: string; fill: string; stroke?: string }[] }
-  | { kind: 'binned'; field: string; title: string; bins: { from: number; to: number; fill: string }[]; format?: (n: number) => string }
-  | { kind: 'size'; field: string; title: string; maxValue: number; maxRadius: number; fill: string; stroke?: string; format?: (n: number) => string }
+  | { kind: 'binned'; field: string; title: string; bins: { from: number; to: number; fill: string }[]; format?: (n: number) => string; locale?: Locale }
+  | { kind: 'size'; field: string; title: string; maxValue: number; maxRadius: number; fill: string; stroke?: string; format?: (n: number) => string; locale?: Locale }
   | { kind: 'shape'; field: string; title: string; entries: { label: string; shape: ShapeName; fill: string }[] };
 
 /** Where a legend goes: its top-left corner, the width it may use, and how its entries run. */
@@ -79,7 +80,7 @@ function keysOf(spec: LegendSpec, swatch: number): Key[] {
     case 'categorical':
       return spec.entries.map((e) => ({ entry: { label: e.label, fill: e.fill, ...(e.stroke ? { stroke: e.stroke } : {}) }, keyWidth: swatch, keyHeight: swatch, draw: square(e.fill, e.stroke) }));
     case 'binned': {
-      const f = spec.format ?? valueFormatter(spec.bins.flatMap((b) => [b.from, b.to]));
+      const f = spec.format ?? valueFormatter(spec.bins.flatMap((b) => [b.from, b.to]), { locale: spec.locale });
       const signed = spec.bins.some((b) => b.from < 0 || b.to < 0);
       return spec.bins.map((b) => ({ entry: { label: binLabel(b.from, b.to, f, signed), fill: b.fill, from: b.from, to: b.to }, keyWidth: swatch, keyHeight: swatch, draw: square(b.fill) }));
     }
@@ -90,7 +91,7 @@ function keysOf(spec: LegendSpec, swatch: number): Key[] {
       }));
     case 'size': {
       const values = sizeLegendValues(spec.maxValue, spec.maxRadius);
-      const f = spec.format ?? valueFormatter(values);
+      const f = spec.format ?? valueFormatter(values, { locale: spec.locale });
       return values.map((value) => {
         // Area-true: the area, not the radius, is proportional to the value.
         const r = spec.maxRadius * Math.sqrt(value / spec.maxValue);

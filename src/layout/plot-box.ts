@@ -77,7 +77,7 @@ export function plotBox(body: Box, domains: CartesianDomains, ctx: LayoutContext
     left = { kind: 'linear', probe };
     leftWidth = max(probe.labels, (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
   } else if (domains.left.kind === 'time') {
-    const probe = timeScale(domains.left.extent, [bottom, top], tickCount(bottom - top, 'vertical'));
+    const probe = timeScale(domains.left.extent, [bottom, top], tickCount(bottom - top, 'vertical'), undefined, ctx.brief.locale);
     left = { kind: 'time', probe };
     leftWidth = max(probe.labels, (l) => measure.width(l, tick.size, tick.weight)) ?? 0;
   } else {

@@ -2,6 +2,9 @@ import { tickStep } from 'd3-array';
 import { utcDay, utcHour, utcMinute, utcMonday, utcMonth, utcYear, type CountableTimeInterval, type TimeInterval } from 'd3-time';
 import { timeFormatLocale } from 'd3-time-format';
 
+import type { Locale } from '../brief/types.js';
+import { localeDef } from '../fields/locales.js';
+
 /** The calendar unit a time axis is labelled in. */
 export type TimeGrain = 'minute' | 'hour' | 'day' | 'week' | 'month' | 'quarter' | 'year';
 
@@ -21,26 +24,23 @@ export interface TimeScale {
 }
 
 /**
- * English names, stated here rather than taken from d3-time-format's default locale, which
- * is module state any library in the process may replace.
+ * The label formats of a locale, from our own table (src/fields/locales.ts) rather than
+ * d3-time-format's default locale, which is module state any library in the process may
+ * replace. Made on first use (not at module load: a cold start that draws no time axis pays nothing).
  */
-function englishLocale() {
-  return timeFormatLocale({
-  dateTime: '%a %e %b %Y %H:%M:%S', date: '%Y-%m-%d', time: '%H:%M:%S',
-  periods: ['AM', 'PM'],
-  days: ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'],
-  shortDays: ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'],
-  months: ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'],
-  shortMonths: ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'],
+function formats(name: Locale | undefined) {
+  const def = localeDef(name);
+  const locale = timeFormatLocale({
+    dateTime: '%a %e %b %Y %H:%M:%S', date: '%Y-%m-%d', time: '%H:%M:%S', periods: ['AM', 'PM'],
+    days: [...def.days] as TimeDays, shortDays: [...def.shortDays] as TimeDays,
+    months: [...def.months] as TimeMonths, shortMonths: [...def.shortMonths] as TimeMonths,
   });
+  // Only utcFormat: a label must never depend on the zone of the machine drawing it.
+  return { year: locale.utcFormat('%Y'), month: locale.utcFormat('%b'), monthYear: locale.utcFormat(def.patterns.monthYear), day: locale.utcFormat(def.patterns.day), clock: locale.utcFormat('%H:%M'), quarter: def.quarter };
 }
 
-/** The label formats, made on first use (not at module load: a cold start that draws no time axis pays nothing). */
-function formats() {
-  const locale = englishLocale();
-  // Only utcFormat: a label must never depend on the zone of the machine drawing it.
-  return { year: locale.utcFormat('%Y'), month: locale.utcFormat('%b'), monthYear: locale.utcFormat('%b %Y'), day: locale.utcFormat('%-d %b'), clock: locale.utcFormat('%H:%M') };
-}
+type TimeDays = [string, string, string, string, string, string, string];
+type TimeMonths = [string, string, string, string, string, string, string, string, string, string, string, string];
 
 const MINUTE = 60_000;
 const HOUR = 60 * MINUTE;
@@ -93,14 +93,14 @@ export function timeStep(start: number, stop: number, approxTicks: number, fines
   return best;
 }
 
-/** Labels for ticks at a grain; months (and half years) print the year only where it changes. */
-export function timeLabels(ticks: readonly number[], grain: TimeGrain): string[] {
-  const f = formats();
+/** Labels for ticks at a grain, in a locale's names (default English); months (and half years) print the year only where it changes. */
+export function timeLabels(ticks: readonly number[], grain: TimeGrain, locale?: Locale): string[] {
+  const f = formats(locale);
   return ticks.map((t, i) => {
     const d = new Date(t);
     switch (grain) {
       case 'year': return f.year(d);
-      case 'quarter': return `Q${Math.floor(d.getUTCMonth() / 3) + 1} ${f.year(d)}`;
+      case 'quarter': return f.quarter(Math.floor(d.getUTCMonth() / 3) + 1, f.year(d));
       case 'month': {
         const yearChanged = i === 0 || new Date(ticks[i - 1]!).getUTCFullYear() !== d.getUTCFullYear();
         return yearChanged ? f.monthYear(d) : f.month(d);
@@ -131,8 +131,9 @@ export function monthUnits(t: number): number {
  * "06:00"). A domain given high-to-low maps high-to-low; ticks are always ascending. A
  * non-finite domain gets no ticks. `finest` is the finest grain ticks may take (the data's own);
  * at month grain or coarser, positions are in calendar months (each month the same width).
+ * `locale` names the months ("Okt. 2026" in de). Default: English.
  */
-export function timeScale(domain: [number, number], range: [number, number], approxTicks: number, finest: TimeGrain = 'minute'): TimeScale {
+export function timeScale(domain: [number, number], range: [number, number], approxTicks: number, finest: TimeGrain = 'minute', locale?: Locale): TimeScale {
   const [r0, r1] = range;
   // Data given by month, quarter or year is placed in calendar months, each the same width, so
   // three months are three times one month whatever their days (February is not 10% shorter).
@@ -147,5 +148,5 @@ export function timeScale(domain: [number, number], range: [number, number], app
   const ticks = Number.isFinite(lo) && Number.isFinite(hi)
     ? chosen.interval.range(new Date(lo), new Date(hi + 1)).map((d) => d.getTime())
     : [];
-  return { kind: 'time', domain: [d0, d1], range: [r0, r1], map, ticks, labels: timeLabels(ticks, chosen.grain), grain: chosen.grain };
+  return { kind: 'time', domain: [d0, d1], range: [r0, r1], map, ticks, labels: timeLabels(ticks, chosen.grain, locale), grain: chosen.grain };
 }

@@ -1,7 +1,7 @@
 import { checkBriefValue, readBrief, withPositions } from '../brief/resolve.js';
 import { capProblems } from '../brief/validate.js';
 import type { ParsedBrief } from '../brief/parse.js';
-import type { ResolvedBrief } from '../brief/types.js';
+import type { Locale, ResolvedBrief } from '../brief/types.js';
 import { checkBriefRules } from '../choose/checks.js';
 import { choose } from '../choose/choose.js';
 import type { Choice, Decision } from '../choose/types.js';
@@ -45,6 +45,8 @@ export interface RenderRequest {
   lenient?: boolean;
   /** Treat warnings as errors. Default: false. */
   strict?: boolean;
+  /** Write the chart's numbers and dates in this locale instead of the brief's `locale:` (the CLI's --locale). Default: the brief's. */
+  locale?: Locale;
   /**
    * A clock in milliseconds, to time each stage (the CLI's --timings). Only measured, never
    * used for output. Default: none (no timings).
@@ -119,9 +121,10 @@ export async function loadInputs(req: RenderRequest, env: RenderEnv, lap: (stage
   lap('brief');
   if (!briefOutcome.ok) return { diagnostics };
   const { parsed } = briefOutcome.value;
+  const base = req.locale ? { ...briefOutcome.value.brief, locale: req.locale } : briefOutcome.value.brief;
   const locate = (ds: Diagnostic[]) => inFile(withPositions(ds, parsed), req.file);
-  const style = env.style(req.style ?? briefOutcome.value.brief.style, req.file);
-  const stated = req.style === undefined ? briefOutcome.value.brief : { ...briefOutcome.value.brief, style: req.style };
+  const style = env.style(req.style ?? base.style, req.file);
+  const stated = req.style === undefined ? base : { ...base, style: req.style };
   const brief = style.ok ? withStyleSize(stated, style.value) : stated;
   // A style named on the command line is not in the brief: its problems point at no line of it.
   diagnostics.push(...(req.style === undefined ? locate(style.diagnostics) : style.diagnostics));

@@ -4,18 +4,28 @@ import { tickFormatter, valueFormatter } from '../../src/layout/number-format.js
 import { niceTicks } from '../../src/layout/ticks.js';
 import { runs } from '../helpers.js';
 
-/** What a label reads as, by the words and prefixes a reader knows (short scale; SI prefixes, BIPM SI Brochure table 7). */
-function readLabel(label: string, unit = ''): number {
-  const words: Record<string, number> = { k: 1e3, m: 1e6, bn: 1e9, tn: 1e12 };
+/**
+ * How a reader of each locale reads marks and scale words: English short scale; German from
+ * CLDR 48 (de.xml: decimal ",", group ".", compact short "Mio.", "Mrd.", "Bio.", thousands in
+ * digits), the words after a no-break space. SI prefixes from the BIPM SI Brochure, table 7.
+ */
+const READERS = {
+  en: { decimal: '.', thousands: ',', words: { k: 1e3, m: 1e6, bn: 1e9, tn: 1e12 } as Record<string, number>, join: '' },
+  de: { decimal: ',', thousands: '.', words: { 'Mio.': 1e6, 'Mrd.': 1e9, 'Bio.': 1e12 } as Record<string, number>, join: '\u00a0' },
+} as const;
+
+/** What a label reads as, by the marks, words and prefixes a reader of the locale knows. */
+function readLabel(label: string, unit = '', locale: keyof typeof READERS = 'en'): number {
+  const r = READERS[locale];
   const prefixes: Record<string, number> = { '': 1, k: 1e3, M: 1e6, G: 1e9, T: 1e12, P: 1e15, m: 1e-3, 'µ': 1e-6, n: 1e-9, p: 1e-12 };
-  const text = label.replaceAll('\u2212', '-').replaceAll(',', '');
-  if (unit && text.endsWith(unit) && text.includes(' ')) {
-    const [num, rest] = text.split(' ') as [string, string];
-    return Number(num) * prefixes[rest.slice(0, rest.length - unit.length)]!;
+  const digits = (t: string) => t.replaceAll('\u2212', '-').replaceAll(r.thousands, '').replace(r.decimal, '.');
+  if (unit && label.endsWith(unit) && label.includes(' ')) {
+    const [num, rest] = label.split(' ') as [string, string];
+    return Number(digits(num)) * prefixes[rest.slice(0, rest.length - unit.length)]!;
   }
-  const m = /^(-?[\d.e+-]+)(k|m|bn|tn)?$/.exec(text);
-  if (!m) throw new Error(`unreadable label ${label}`);
-  return Number(m[1]) * (m[2] ? words[m[2]]! : 1);
+  const [num, word] = r.join ? label.split(r.join) as [string, string | undefined] : /^([^a-df-z]+)([a-z]*)$/.exec(label)?.slice(1) ?? [];
+  if (num === undefined || !/^-?[\d.e+-]+$/.test(digits(num)) || (word && !r.words[word])) throw new Error(`unreadable label ${label}`);
+  return Number(digits(num)) * (word ? r.words[word]! : 1);
 }
 
 describe('number labels never lie', () => {
@@ -75,27 +85,29 @@ describe('number labels never lie', () => {
     expect(valueFormatter([0.004, 500, 22.13])(0.004)).toBe('0.004');
   });
 
-  it('property: every value label reads back within half a unit of its third significant digit, never as 0 when non-zero', () => {
-    const value = fc.oneof(fc.double({ min: -1e14, max: 1e14, noNaN: true }), fc.integer({ min: -5_000_000, max: 5_000_000 }));
-    fc.assert(fc.property(fc.array(value, { minLength: 1, maxLength: 12 }), (values) => {
-      const f = valueFormatter(values);
-      for (const v of values) {
-        const read = readLabel(f(v));
-        if (v !== 0) expect(read).not.toBe(0);
-        // Up to 2 decimals below a million, 3 significant digits from there (common practice).
-        const tolerance = Math.abs(v) < 1e6 ? Math.max(0.005, Math.abs(v) * 0.005) : Math.abs(v) * 0.005;
-        expect(Math.abs(read - v)).toBeLessThanOrEqual(tolerance * (1 + 1e-9));
-      }
-    }), { numRuns: runs(200) });
-  });
+  for (const locale of ['en', 'de'] as const) {
+    it(`property (${locale}): every value label reads back within half a unit of its third significant digit, never as 0 when non-zero`, () => {
+      const value = fc.oneof(fc.double({ min: -1e14, max: 1e14, noNaN: true }), fc.integer({ min: -5_000_000, max: 5_000_000 }));
+      fc.assert(fc.property(fc.array(value, { minLength: 1, maxLength: 12 }), (values) => {
+        const f = valueFormatter(values, { locale });
+        for (const v of values) {
+          const read = readLabel(f(v), '', locale);
+          if (v !== 0) expect(read).not.toBe(0);
+          // Up to 2 decimals below a million, 3 significant digits from there (common practice).
+          const tolerance = Math.abs(v) < 1e6 ? Math.max(0.005, Math.abs(v) * 0.005) : Math.abs(v) * 0.005;
+          expect(Math.abs(read - v)).toBeLessThanOrEqual(tolerance * (1 + 1e-9));
+        }
+      }), { numRuns: runs(200) });
+    });
 
-  it('property: tick labels read back exactly and are distinct, in words and in SI', () => {
-    fc.assert(fc.property(fc.double({ min: 1, max: 1e14, noNaN: true }), fc.integer({ min: 2, max: 10 }), fc.boolean(), (hi, m, si) => {
-      const ticks = niceTicks(0, hi, m, true);
-      const unit = si ? 'Wh' : '';
-      const labels = ticks.map(tickFormatter(ticks, { unit: unit || undefined }));
-      expect(new Set(labels).size).toBe(ticks.length);
-      ticks.forEach((t, i) => expect(readLabel(labels[i]!, unit)).toBeCloseTo(t, 6 - Math.max(0, Math.floor(Math.log10(Math.max(1, Math.abs(t)))))));
-    }), { numRuns: runs(200) });
-  });
+    it(`property (${locale}): tick labels read back exactly and are distinct, in words and in SI`, () => {
+      fc.assert(fc.property(fc.double({ min: 1, max: 1e14, noNaN: true }), fc.integer({ min: 2, max: 10 }), fc.boolean(), (hi, m, si) => {
+        const ticks = niceTicks(0, hi, m, true);
+        const unit = si ? 'Wh' : '';
+        const labels = ticks.map(tickFormatter(ticks, { unit: unit || undefined, locale }));
+        expect(new Set(labels).size).toBe(ticks.length);
+        ticks.forEach((t, i) => expect(readLabel(labels[i]!, unit, locale)).toBeCloseTo(t, 6 - Math.max(0, Math.floor(Math.log10(Math.max(1, Math.abs(t)))))));
+      }), { numRuns: runs(200) });
+    });
+  }
 });

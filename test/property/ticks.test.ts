@@ -5,7 +5,7 @@ import { tickFormatter } from '../../src/layout/number-format.js';
 import { runs } from '../helpers.js';
 
 describe('property: ticks', () => {
-  it('are ascending, evenly spaced, cover the range, and label distinctly', () => {
+  it('are ascending, evenly spaced, cover the range, and label distinctly (in en and de)', () => {
     const range = fc.tuple(fc.double({ min: -1e9, max: 1e9, noNaN: true }), fc.double({ min: 1e-6, max: 1e9, noNaN: true }), fc.integer({ min: 2, max: 10 }));
     fc.assert(fc.property(range, ([lo, span, m]) => {
       const hi = lo + span;
@@ -23,8 +23,10 @@ describe('property: ticks', () => {
       const slack = Math.max(Math.abs(lo), Math.abs(hi)) * 1e-12;
       expect(ticks[0]!).toBeLessThanOrEqual(lo + slack);
       expect(ticks[ticks.length - 1]!).toBeGreaterThanOrEqual(hi - slack);
-      const labels = ticks.map(tickFormatter(ticks));
-      expect(new Set(labels).size).toBe(labels.length);
+      for (const locale of ['en', 'de'] as const) {
+        const labels = ticks.map(tickFormatter(ticks, { locale }));
+        expect(new Set(labels).size).toBe(labels.length);
+      }
     }), { numRuns: runs(2000) });
   });
 });
