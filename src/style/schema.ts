@@ -61,5 +61,6 @@ export const STYLE_SCHEMA: SchemaNode = {
         lineHeight: { type: 'number', minimum: 1.326, maximum: 3, description: 'At least the font\'s ascent + descent (1.326 em for Source Sans 3).' },
       },
     },
+    textMode: { type: 'string', enum: ['embed', 'outline', 'live'], description: 'How the SVG writes text: embed (the fonts used, inside the SVG), outline (glyph paths), live (the family list of font.family).' },
   },
 };

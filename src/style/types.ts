@@ -44,4 +44,9 @@ export interface Style {
     /** Line height as a multiple of the font size; at least the font's ascent + descent (1.326 em for Source Sans 3), so text boxes never overlap. */
     lineHeight: number;
   };
+  /** How the SVG writes its text (the command line's --text wins). Default: embed. */
+  textMode?: TextModeName;
 }
+
+/** How an SVG writes its text: `embed` (live text, the fonts it needs inside), `outline` (glyph paths), `live` (live text in the style's family list). */
+export type TextModeName = 'embed' | 'outline' | 'live';
