@@ -74,6 +74,14 @@ describe('the published package', () => {
     expect(packed).toContain('templates/fonts/OFL.txt');
   });
 
+  it('ships the fonts an embedded-text SVG needs: the renamed base faces and every prebuilt subset the index names', () => {
+    const index = JSON.parse(read('templates/fonts/subsets/index.json')) as { faces: { base: string; blocks: Record<string, { file: string }> }[] };
+    const needed = ['templates/fonts/subsets/index.json', ...index.faces.flatMap((f) => [f.base, ...Object.values(f.blocks).map((b) => b.file)].map((file) => `templates/fonts/${file}`))];
+    expect(needed.filter((file) => !packed.includes(file))).toEqual([]);
+    expect(needed.length).toBeGreaterThan(10);
+    expect(read('dist/THIRD-PARTY-NOTICES.txt')).toContain('renamed "chartwright sans"');
+  });
+
   it('ships the brief JSON Schema the code builds, exported as chartwright/brief.schema.json', () => {
     expect(read('schema/brief.schema.json')).toBe(`${JSON.stringify(BRIEF_SCHEMA, null, 2)}\n`);
     expect(pkg.exports['./brief.schema.json']).toBe('./schema/brief.schema.json');
