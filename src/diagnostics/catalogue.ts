@@ -152,6 +152,7 @@ export const CATALOGUE = {
   // a defect in chartwright itself, never the user's fault
   'render.internal': 'error',
   'render.bad-id-prefix': 'error',
+  'render.embed-failed': 'error',
 } as const;
 
 /** A stable diagnostic code, namespaced by the stage that raises it. */

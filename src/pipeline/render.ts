@@ -202,8 +202,15 @@ async function textModeOf(name: TextModeName, scene: Scene, style: Style, env: R
 /** The SVG of a finished scene, or the coded defect that stopped it (a bad coordinate is never written). */
 async function svgOf(scene: Scene, style: Style, req: RenderRequest, env: RenderEnv): Promise<{ svg?: string; diagnostics: Diagnostic[] }> {
   const options: SvgOptions = req.idPrefix !== undefined ? { idPrefix: req.idPrefix } : {};
+  let mode: TextMode;
   try {
-    return { svg: writeSvg(scene, await textModeOf(req.textMode ?? style.textMode ?? 'embed', scene, style, env), options), diagnostics: [] };
+    mode = await textModeOf(req.textMode ?? style.textMode ?? 'embed', scene, style, env);
+  } catch (e) {
+    // Only a run-time subset can fail here (the subsetter missing or refusing a font file).
+    return { diagnostics: [diagnostic('render.embed-failed', `could not embed the fonts the chart's text needs: ${(e as Error).message}`, { file: req.file, hint: 'write the text another way (--text outline or --text live), or reinstall chartwright so that subset-font is present' })] };
+  }
+  try {
+    return { svg: writeSvg(scene, mode, options), diagnostics: [] };
   } catch (e) {
     // fmt refuses non-finite and absurd coordinates: a layout defect, reported, never written.
     if (!(e instanceof RangeError)) throw e;

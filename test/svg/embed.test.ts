@@ -86,6 +86,19 @@ describe('embedded fonts', () => {
   });
 });
 
+describe('a font that cannot be embedded', () => {
+  it('is a coded error naming the way around it, never a crash', async () => {
+    const failing = { ...env, embedFonts: () => ({ ...env.embedFonts(), subset: () => Promise.reject(new Error('no subsetter')) }) };
+    const rare = String.fromCodePoint(outsideBlocks('regular')[0]!);
+    const r = await renderBrief({ brief: { intent: 'compare', keys: 'k', values: 'v', fields: { v: { unit: 'kg' } }, rows: [{ k: `A${rare}`, v: 1 }, { k: 'B', v: 2 }] } }, failing);
+    expect(r.ok).toBe(false);
+    expect(r.svg).toBeUndefined();
+    expect(r.diagnostics.map((d) => d.code)).toEqual(['render.embed-failed']);
+    const live = await renderBrief({ brief: { intent: 'compare', keys: 'k', values: 'v', fields: { v: { unit: 'kg' } }, rows: [{ k: `A${rare}`, v: 1 }, { k: 'B', v: 2 }] }, textMode: 'live' }, failing);
+    expect(live.ok).toBe(true);
+  });
+});
+
 describe('unicode-range', () => {
   it('writes runs of code points as CSS Fonts 4 unicode-range values', () => {
     // CSS Fonts Module Level 4, the unicode-range descriptor: U+<hex> or U+<hex>-<hex>, comma-separated.
