@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { join } from 'node:path';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Weight } from '../style/types.js';
@@ -74,8 +75,13 @@ export function nodeEmbedFonts(root: string, measure: TextMeasurer, provider?: F
     blocks.set(faces[f.weight].key, index.blocks.filter((b) => f.blocks[b.name]).map((b) => ({ name: b.name, ranges: b.ranges, data: () => read(join(fonts, f.blocks[b.name]!.file)) })));
   }
   let subsetter: Promise<SubsetFont> | undefined;
-  // A runtime dependency, not bundled (it reads its wasm beside itself); imported only here, on first need.
-  const load = () => (subsetter ??= import('subset-font').then((m) => ((m as { default?: SubsetFont }).default ?? m) as SubsetFont));
+  // A runtime dependency, not bundled (it reads its wasm beside itself), loaded only here, on
+  // first need; required, not import()ed: bin/ runs the CommonJS bundle in a vm.Script, which
+  // has no dynamic import.
+  const load = () => (subsetter ??= Promise.resolve().then(() => {
+    const require = createRequire(import.meta.url);
+    return require('subset-font') as SubsetFont;
+  }));
   const cache = boundedCache<Uint8Array>(SUBSET_CACHE_LIMIT);
   return {
     faces: provider ?? bundledProvider(faces, measure),

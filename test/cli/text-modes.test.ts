@@ -94,6 +94,16 @@ describe('live family lists', () => {
   });
 });
 
+describe('the installed command line', () => {
+  it('embeds a run-time subset for a rare glyph (guards a defect: the CommonJS bundle bin/ runs in a vm.Script has no dynamic import, and the subsetter failed to load)', () => {
+    const dir = tempDir();
+    writeFileSync(join(dir, 'r.csv'), 'k,v\nNorth \u{1F10D},3\nSouth,2\n');
+    writeFileSync(join(dir, 'r.yaml'), 'data: r.csv\nintent: compare\nkeys: k\nvalues: v\nfields: { v: { unit: kg } }\n');
+    execFileSync(process.execPath, [join(root, 'bin', 'chartwright.js'), 'render', join(dir, 'r.yaml')], { cwd: dir, stdio: 'pipe' });
+    expect(readFileSync(join(dir, 'r.svg'), 'utf8')).toContain('unicode-range:U+1F10D}');
+  });
+});
+
 describe('lazy font loading', () => {
   it('loads the subsetter only when a chart needs a glyph outside the prebuilt blocks', () => {
     // A fresh process over the bundle: what it has loaded is what require.cache holds.
