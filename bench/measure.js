@@ -53,7 +53,8 @@ if (group === 'svg') {
   const require = createRequire(import.meta.url);
   const { Resvg } = require('@resvg/resvg-js');
   const ttf = (f) => join(dirname(require.resolve('source-sans/package.json')), 'TTF', f);
-  const r = await renderBrief({ brief: briefText, file: briefFile }, env);
+  // The plain route is resvg drawing live text from the font files (no embedded fonts to parse).
+  const r = await renderBrief({ brief: briefText, file: briefFile, textMode: 'live' }, env);
   const fontFiles = [ttf('SourceSans3-Regular.ttf'), ttf('SourceSans3-Semibold.ttf')];
   const opts = (font) => ({ fitTo: { mode: 'zoom', value: 2 }, font: { loadSystemFonts: false, defaultFontFamily: 'Source Sans 3', ...font } });
   console.log(JSON.stringify({

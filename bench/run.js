@@ -30,6 +30,7 @@ const png = node(['bench/measure.js', 'png']);
 const cold = coldRuns({
   bare: ['-e', ''],
   renderSvg: ['bin/chartwright.js', 'render', brief, '-o', '/tmp/chartwright-bench'],
+  renderSvgLive: ['bin/chartwright.js', 'render', brief, '-o', '/tmp/chartwright-bench', '--text', 'live'],
   renderPng: ['bin/chartwright.js', 'render', brief, '-o', '/tmp/chartwright-bench', '--png'],
   jsdomCold: ['bench/cold-jsdom.js'],
 }, 15);
@@ -37,6 +38,8 @@ const memory = node(['bench/memory-loop.js', '500']);
 const line = node(['bench/line.js']);
 const mb = (bytes) => `${(bytes / 1e6).toFixed(2)} MB`;
 const matrix = node(['bench/matrix.js']);
+const embed = node(['bench/embed.js']);
+const kb = (bytes) => `${(bytes / 1024).toFixed(1)} kB`;
 
 const f = (ms) => (ms < 1 ? ms.toFixed(2) : ms < 10 ? ms.toFixed(1) : ms.toFixed(0));
 const x = (a, b) => `${(a / b).toFixed(2)}×`;
@@ -51,6 +54,7 @@ const table = [
   `| | | string template with d3-scale alone (the floor): ${f(svg.template)} ms | ${x(svg.chartwrightFromRows, svg.template)} the floor |`,
   `| SVG in process, from the brief file (YAML, CSV, typing) | ${f(svg.chartwrightFromFile)} ms | jsdom, shared document: ${f(svg.jsdomShared)} ms | ${x(svg.jsdomShared, svg.chartwrightFromFile)} faster |`,
   `| \`render\` of one brief, cold process, SVG | ${f(cold.renderSvg)} ms | bare \`node -e ''\`: ${f(cold.bare)} ms | ${x(cold.renderSvg, cold.bare)} bare node |`,
+  `| … with \`--text live\` (no fonts embedded) | ${f(cold.renderSvgLive)} ms | | embedding adds ${f(cold.renderSvg - cold.renderSvgLive)} ms |`,
   `| \`render --png\`, cold process | ${f(cold.renderPng)} ms | jsdom route, cold process, SVG only: ${f(cold.jsdomCold)} ms | ${x(cold.renderPng, cold.jsdomCold)} of it |`,
   `| PNG at scale 2, in process | ${f(png.chartwright)} ms | resvg alone, live-text SVG, font files loaded: ${f(png.plain)} ms | ${x(png.chartwright, png.plain)} of it |`,
   `| … text as glyph outlines only (resvg's encoder) | ${f(png.outlinesOnly)} ms | | ${x(png.outlinesOnly, png.plain)} of plain |`,
@@ -61,6 +65,9 @@ const table = [
   `| clustering + optimal leaf order, 1,000 × 50 matrix (rows and columns) | ${s(matrix.clusterMs)} | target < 5 s | |`,
   `| heat map 1,000 × 1,000 from CSV to SVG (clustered, one raster) | ${s(matrix.heatMs)}, SVG ${mb(matrix.heatSvgBytes)} | target < 5 s, < 2 MB | CSV ${mb(matrix.heatCsvBytes)} |`,
   `| dense layout of 100,000 items from CSV to SVG | ${s(matrix.denseMs)}, SVG ${mb(matrix.denseSvgBytes)} | | |`,
+  `| SVG text modes in process, ${embed.chart} (brief file → SVG): embed / outline / live | ${f(embed.times.embed)} / ${f(embed.times.outline)} / ${f(embed.times.live)} ms | SVG ${kb(embed.bytes.embed)} / ${kb(embed.bytes.outline)} / ${kb(embed.bytes.live)} | embed ${x(embed.times.embed, embed.times.live)} live's time |`,
+  `| bytes embedding adds to an SVG, mean over the ${embed.galleryCharts} gallery charts | ${kb(embed.addedPerGallerySvg)} | prebuilt blocks only (no run-time subset) | |`,
+  `| chart with glyphs outside the prebuilt blocks: first render (loads the subsetter) / a new glyph set / cached | ${f(embed.rare.firstMs)} / ${f(embed.rare.newSetMs)} / ${f(embed.rare.cachedMs)} ms | live text: ${f(embed.rare.liveMs)} ms | adds ${kb(embed.rare.addedBytes)} |`,
 ].join('\n');
 writeFileSync(join(root, 'bench', 'results.md'), `${table}\n`);
 console.log(table);

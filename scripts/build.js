@@ -20,7 +20,7 @@ const common = {
   bundle: true,
   platform: 'node',
   target: 'node20',
-  external: ['@resvg/resvg-js'],
+  external: ['@resvg/resvg-js', 'subset-font'],
   legalComments: 'linked',
   logLevel: 'warning',
 };

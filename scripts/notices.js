@@ -43,6 +43,8 @@ export function noticesText(metafile) {
   const dirs = bundledPackageDirs(metafile);
   const head =
     'chartwright bundles the following npm packages into dist/. Their licences follow.\n' +
-    'The font data in templates/fonts/ is derived from Source Sans 3 (SIL Open Font License 1.1, templates/fonts/OFL.txt).\n';
+    'The font data in templates/fonts/ is derived from Source Sans 3 (SIL Open Font License 1.1, templates/fonts/OFL.txt).\n' +
+    'The fonts embedded in SVG output (templates/fonts/chartwright-sans-*.ttf and templates/fonts/subsets/) are modified\n' +
+    'versions of it, renamed "chartwright sans" as the licence asks; the same licence applies.\n';
   return [head, ...dirs.map(section)].join('\n');
 }

@@ -4,7 +4,7 @@
  */
 import { createNodeEnv } from './io/node-env.js';
 import type { RenderEnv } from './pipeline/env.js';
-import { outlineSvg, renderBrief, type RenderResult } from './pipeline/render.js';
+import { outlineSvg, renderBrief, type RenderRequest, type RenderResult } from './pipeline/render.js';
 import { rasterize } from './raster/rasterize.js';
 import { dumpScene } from './scene/dump.js';
 
@@ -32,6 +32,8 @@ export type { SceneDump } from './scene/dump.js';
 export type { RenderEnv } from './pipeline/env.js';
 export type { RenderRequest, RenderResult, RenderInputs } from './pipeline/render.js';
 export type { FormDef } from './forms/types.js';
+export type { EmbedFace, EmbedFonts, FaceProvider } from './svg/embed.js';
+export type { TextModeName } from './style/types.js';
 
 /** Options of `render`. */
 export interface RenderOptions {
@@ -41,6 +43,10 @@ export interface RenderOptions {
   pngScale?: number;
   lenient?: boolean;
   strict?: boolean;
+  /** How the SVG writes its text: embed, outline or live (see RenderRequest). Default: the style's, else embed. */
+  textMode?: RenderRequest['textMode'];
+  /** Starts every id in the SVG (see RenderRequest). Default: a hash of the chart's words. */
+  idPrefix?: string;
   /** An environment to reuse across calls (fonts are read once per environment, about 7 ms). Default: a new one per call. */
   env?: RenderEnv;
 }
@@ -59,7 +65,7 @@ export class RenderError extends Error {
  */
 export async function render(brief: string | Record<string, unknown>, rows?: Record<string, unknown>[], options: RenderOptions = {}) {
   const env = options.env ?? createNodeEnv();
-  const result = await renderBrief({ brief, rows, file: options.file, lenient: options.lenient, strict: options.strict }, env);
+  const result = await renderBrief({ brief, rows, file: options.file, lenient: options.lenient, strict: options.strict, textMode: options.textMode, idPrefix: options.idPrefix }, env);
   if (!result.ok || !result.svg || !result.scene) throw new RenderError(result.diagnostics);
   const png = options.pngScale ? rasterize(outlineSvg(result.scene, env), { scale: options.pngScale, fontFiles: [] }) : undefined;
   // Yield once after a raster: resvg's native memory is reclaimed only when the event loop turns,

@@ -35,14 +35,14 @@ const ALLOWED: Record<string, RegExp> = {
   choose: /^(choose\/|font\/measurer$|fields\/(notation|locales)$)/,
   derive: /^(derive|fields\/(labels|locales))/,
   scene: /^(scene|svg\/path)/,
-  svg: /^(svg|scene\/ids|font\/measurer|font\/metrics)/,
+  svg: /^(svg|scene\/(ids|walk)|font\/measurer|font\/metrics)/,
   layout: /^(layout|svg\/path|scene\/(ids|walk)|font\/measurer|fields\/(notation|labels|locales)$|color\/wcag$|raster\/png-encode$)/,
   // A form: the layout kit, the scene, derive operations, field helpers and types.
-  forms: /^(forms\/|layout\/|scene\/|derive\/|svg\/path$|fields\/(labels|notation|locales)$|color\/wcag$)/,
+  forms: /^(forms\/|layout\/|scene\/|derive\/|svg\/path$|fields\/(labels|notation|locales)$|color\/(wcag|srgb)$)/,
   raster: /^raster\//,
   pipeline: /^(pipeline|brief|table|fields|choose|derive|forms|layout|scene|svg|font|style)\//,
   io: /^(io|pipeline|font|style|color|svg|table|diagnostics)\//,
-  cli: /^(cli|io|pipeline|raster|scene|diagnostics|brief)\//,
+  cli: /^(cli|io|pipeline|raster|scene|diagnostics|brief)\/|^svg\/id-prefix$/,
 };
 
 describe('architecture', () => {

@@ -6,7 +6,7 @@ import { parse as parseYaml } from 'yaml';
 import { createNodeEnv } from '../src/io/node-env.js';
 import { packageRoot } from '../src/io/package-root.js';
 import type { RenderEnv } from '../src/pipeline/env.js';
-import { renderBrief, type RenderResult } from '../src/pipeline/render.js';
+import { renderBrief, type RenderRequest, type RenderResult } from '../src/pipeline/render.js';
 import { dumpScene, type SceneDump } from '../src/scene/dump.js';
 import type { TableEnv } from '../src/table/load.js';
 
@@ -44,7 +44,7 @@ export function utf16Bytes(text: string, bigEndian: boolean): Uint8Array {
 }
 
 /** Renders a brief object (YAML text or object) with inline rows through the whole pipeline. */
-export async function renderRows(brief: Record<string, unknown>, rows: Record<string, unknown>[], opts: { lenient?: boolean; strict?: boolean } = {}): Promise<RenderResult> {
+export async function renderRows(brief: Record<string, unknown>, rows: Record<string, unknown>[], opts: Omit<RenderRequest, 'brief' | 'rows'> = {}): Promise<RenderResult> {
   return renderBrief({ brief: { ...brief, rows }, ...opts }, env);
 }
 

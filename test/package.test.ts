@@ -44,8 +44,12 @@ describe('the published package', () => {
   });
 
   it('lists as runtime dependencies exactly the packages dist/ loads at run time (everything else is bundled)', () => {
+    // Besides them, the subsetter's own dependencies whose versions decide the bytes of an
+    // embedded font (harfbuzz, brotli), pinned exactly so an install cannot float them.
+    const pins = ['harfbuzzjs', 'wawoff2'];
+    expect(pins.map((p) => pkg.dependencies[p])).toEqual(pins.map((p) => JSON.parse(read(`node_modules/${p}/package.json`)).version));
     for (const bundle of ['dist/chartwright.js', 'dist/chartwright.cjs']) {
-      expect(loadedPackages(read(bundle)), bundle).toEqual(sorted(Object.keys(pkg.dependencies)));
+      expect(loadedPackages(read(bundle)), bundle).toEqual(sorted(Object.keys(pkg.dependencies).filter((d) => !pins.includes(d))));
     }
   });
 
@@ -68,6 +72,14 @@ describe('the published package', () => {
     expect(read('templates/fonts/OFL.txt')).toBe(read('node_modules/source-sans/LICENSE.md'));
     expect(read('templates/fonts/OFL.txt')).toContain('SIL OPEN FONT LICENSE Version 1.1');
     expect(packed).toContain('templates/fonts/OFL.txt');
+  });
+
+  it('ships the fonts an embedded-text SVG needs: the renamed base faces and every prebuilt subset the index names', () => {
+    const index = JSON.parse(read('templates/fonts/subsets/index.json')) as { faces: { base: string; blocks: Record<string, { file: string }> }[] };
+    const needed = ['templates/fonts/subsets/index.json', ...index.faces.flatMap((f) => [f.base, ...Object.values(f.blocks).map((b) => b.file)].map((file) => `templates/fonts/${file}`))];
+    expect(needed.filter((file) => !packed.includes(file))).toEqual([]);
+    expect(needed.length).toBeGreaterThan(10);
+    expect(read('dist/THIRD-PARTY-NOTICES.txt')).toContain('renamed "chartwright sans"');
   });
 
   it('ships the brief JSON Schema the code builds, exported as chartwright/brief.schema.json', () => {

@@ -5,6 +5,7 @@ import { outlineSvg, renderBrief, type RenderResult, type StageTiming } from '..
 import { rasterize } from '../raster/rasterize.js';
 import { dumpScene } from '../scene/dump.js';
 import type { Scene } from '../scene/types.js';
+import type { TextModeName } from '../style/types.js';
 import { readBriefFile, type BriefSource } from './briefs.js';
 import { createCommitter, type FileContent, type Housekeeping, type OutputFs } from './commit.js';
 import { pngSizeProblem } from './png-size.js';
@@ -20,8 +21,12 @@ export interface BatchOptions extends PlanOptions {
   locale?: Locale;
   /** Names this process's temporary files (its pid), apart from another's writing the same folder. */
   tempTag: string;
-  /** Write the SVG file with text as glyph outlines, for viewers without the font (--outline-text). */
+  /** Write the SVG file with text as glyph outlines, for viewers without the font (--outline-text; the same as textMode outline). */
   outlineText: boolean;
+  /** How the SVG writes its text (--text). Default: the style's, else embed. */
+  textMode?: TextModeName;
+  /** Starts every id in each SVG (--id-prefix). Default: a hash of each chart's words. */
+  idPrefix?: string;
   /** When given, each stage is timed with it (--timings). */
   clock?: () => number;
   /** The file system outputs are written through. Default: the real one. */
@@ -40,15 +45,19 @@ export interface BriefReport {
   timings?: StageTiming[];
 }
 
+/** What rendering one brief file needs of the batch options. */
+type RenderFileOptions = Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style' | 'locale'> & Partial<Pick<BatchOptions, 'outlineText' | 'textMode' | 'idPrefix'>>;
+
 /**
  * Reads a brief file and renders it; a missing file or unexpected failure becomes a diagnostic.
  * A brief already read and parsed (when its outputs were planned) is rendered as it was read.
  */
-export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style' | 'locale'>, source?: BriefSource): Promise<RenderResult> {
+export async function renderFile(file: string, env: RenderEnv, opts: RenderFileOptions, source?: BriefSource): Promise<RenderResult> {
   const read = source ?? readBriefFile(file, opts.maxBriefBytes);
   if ('problem' in read) return { ok: false, rationale: [], diagnostics: [read.problem] };
+  const textMode = opts.textMode ?? (opts.outlineText ? 'outline' : undefined);
   try {
-    return await renderBrief({ brief: read.text, ...(source ? { parsed: source.parsed } : {}), file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock, ...(opts.style !== undefined ? { style: opts.style } : {}), ...(opts.locale ? { locale: opts.locale } : {}) }, env);
+    return await renderBrief({ brief: read.text, ...(source ? { parsed: source.parsed } : {}), file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock, ...(textMode ? { textMode } : {}), ...(opts.idPrefix !== undefined ? { idPrefix: opts.idPrefix } : {}), ...(opts.style !== undefined ? { style: opts.style } : {}), ...(opts.locale ? { locale: opts.locale } : {}) }, env);
   } catch (e) {
     const detail = opts.debug ? `\n${(e as Error).stack}` : '';
     return { ok: false, rationale: [], diagnostics: [diagnostic('render.internal', `chartwright failed unexpectedly: ${(e as Error).message}${detail}`, { file, hint: 'rerun with --debug and report it with the brief and data' })] };
@@ -56,7 +65,7 @@ export async function renderFile(file: string, env: RenderEnv, opts: Pick<BatchO
 }
 
 /** Renders a planned brief without writing: its own diagnostics, then the problems with where it would write. */
-export async function renderPlan(plan: BriefPlan, env: RenderEnv, opts: Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style' | 'locale'>): Promise<RenderResult> {
+export async function renderPlan(plan: BriefPlan, env: RenderEnv, opts: RenderFileOptions): Promise<RenderResult> {
   if (plan.failed) return { ok: false, rationale: [], diagnostics: [plan.failed] };
   const result = await renderFile(plan.file, env, opts, plan.source);
   if (!plan.problems.length) return result;
@@ -66,13 +75,14 @@ export async function renderPlan(plan: BriefPlan, env: RenderEnv, opts: Pick<Bat
 /** Yields to the event loop so resvg's native memory is reclaimed between renders (a tight loop grows it fast). */
 const breathe = () => new Promise<void>((r) => setImmediate(r));
 
-/** The bytes of each planned file; a PNG is drawn from the outline SVG, made once and reused. */
+/** The bytes of each planned file; a PNG is drawn from an outline SVG (whatever the SVG file's text mode), made once and reused. */
 async function produceFiles(result: RenderResult & { svg: string; scene: Scene }, plan: BriefPlan, env: RenderEnv, opts: BatchOptions, report: BriefReport): Promise<FileContent[]> {
   let outlines: string | undefined;
   const outlined = () => (outlines ??= outlineSvg(result.scene, env));
   const files: FileContent[] = [];
   for (const p of plan.files) {
-    if (p.kind === 'svg') files.push({ path: p.path, data: opts.outlineText ? outlined() : result.svg });
+    // The SVG's text mode (--text, --outline-text) was applied by the render.
+    if (p.kind === 'svg') files.push({ path: p.path, data: result.svg });
     if (p.kind === 'scene') files.push({ path: p.path, data: `${JSON.stringify(dumpScene(result.scene), null, 2)}\n` });
     if (p.kind !== 'png') continue;
     const started = opts.clock?.();

@@ -8,6 +8,8 @@ import { inputLimit } from '../io/bounded-read.js';
 import { createNodeEnv } from '../io/node-env.js';
 import { packageRoot } from '../io/package-root.js';
 import type { RenderEnv } from '../pipeline/env.js';
+import type { TextModeName } from '../style/types.js';
+import { idPrefixProblem } from '../svg/id-prefix.js';
 import { renderFile, renderPlan, renderPlanned, type BatchOptions, type BriefReport } from './batch.js';
 import { expandBriefs, type BriefEntry } from './briefs.js';
 import { createCommitter, type OutputFs } from './commit.js';
@@ -28,6 +30,19 @@ function parseScale(value: string): number {
   const n = Number(value);
   if (!Number.isFinite(n) || n <= 0 || n > 8) throw new InvalidArgumentError('expected a number above 0 and at most 8, e.g. 2');
   return n;
+}
+
+const TEXT_MODES: readonly TextModeName[] = ['embed', 'outline', 'live'];
+
+function parseTextMode(value: string): TextModeName {
+  if (!(TEXT_MODES as readonly string[]).includes(value)) throw new InvalidArgumentError(`expected one of ${TEXT_MODES.join(', ')}`);
+  return value as TextModeName;
+}
+
+function parseIdPrefix(value: string): string {
+  const problem = idPrefixProblem(value, '--id-prefix');
+  if (problem) throw new InvalidArgumentError(`${problem.message}: expected ${problem.expected}; ${problem.hint}`);
+  return value;
 }
 
 /** Diagnostics with their files relative to the working folder, as people typed them. */
@@ -58,12 +73,13 @@ function styleFlag(style: string | undefined, io: CliIo): { style?: string } {
   if (style === undefined) return {};
   return { style: style.includes('/') || style.endsWith('.json') ? resolve(io.cwd, style) : style };
 }
-interface RenderFlags extends CommonFlags { outDir?: string; png?: boolean; outlineText?: boolean; scale: number; scene?: string; debug?: boolean; timings?: boolean; report?: string }
+interface RenderFlags extends CommonFlags { outDir?: string; png?: boolean; outlineText?: boolean; text?: TextModeName; idPrefix?: string; scale: number; scene?: string; debug?: boolean; timings?: boolean; report?: string }
 
 function batchOptions(flags: RenderFlags, io: CliIo, deps: CliDeps): BatchOptions {
   return {
     outDir: flags.outDir ? resolve(io.cwd, flags.outDir) : undefined, png: !!flags.png, scale: flags.scale, scene: flags.scene, allowOutside: !!flags.allowOutside,
     strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, outlineText: !!flags.outlineText, tempTag: String(io.pid), ...(flags.locale ? { locale: flags.locale } : {}),
+    ...(flags.text ? { textMode: flags.text } : {}), ...(flags.idPrefix !== undefined ? { idPrefix: flags.idPrefix } : {}),
     maxBriefBytes: inputLimit('brief', io.env), fs: deps.fs, ...styleFlag(flags.style, io),
     housekeeping: { alive: io.alive ?? (() => true), now: io.now ?? (() => Date.now()) },
     ...(flags.timings ? { clock: io.clock } : {}),
@@ -156,7 +172,9 @@ const withCommonFlags = (c: Command) => c
 const withRenderFlags = (c: Command) => withCommonFlags(c)
   .option('-o, --out-dir <dir>', 'write outputs under this folder instead of beside each brief')
   .option('--png', 'also write a PNG beside each SVG')
-  .option('--outline-text', 'write SVG text as glyph outlines, exact without the font (not selectable)')
+  .option('--outline-text', 'the same as --text outline')
+  .option('--text <mode>', 'how the SVG writes text: embed (default: live text, the glyphs used embedded), outline (glyph paths), live (the style\'s font family list)', parseTextMode)
+  .option('--id-prefix <p>', 'start every id in each SVG with this, so charts inlined in one page never share an id', parseIdPrefix)
   .option('--scale <n>', 'PNG pixels per CSS pixel (at most 100 megapixels per PNG)', parseScale, 2)
   .option('--scene <path>', 'dump the scene as JSON: a file for one brief, a folder for several')
   .option('--debug', 'show stack traces of unexpected failures')

@@ -153,6 +153,8 @@ export const CATALOGUE = {
   'cli.style-too-large': 'error',
   // a defect in chartwright itself, never the user's fault
   'render.internal': 'error',
+  'render.bad-id-prefix': 'error',
+  'render.embed-failed': 'error',
 } as const;
 
 /** A stable diagnostic code, namespaced by the stage that raises it. */

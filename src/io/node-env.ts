@@ -9,7 +9,9 @@ import type { RenderEnv } from '../pipeline/env.js';
 import type { PaletteFile } from '../color/palette.js';
 import { resolveStyle } from '../style/resolve.js';
 import type { Style, Weight } from '../style/types.js';
+import type { EmbedFonts } from '../svg/embed.js';
 import type { OutlineSet } from '../svg/glyphs.js';
+import { nodeEmbedFonts } from './embed-fonts.js';
 import { DEFAULT_MAX_DATA_BYTES, type TableEnv } from '../table/load.js';
 import { describeBytes, INPUT_LIMITS, readBounded, readUpTo } from './bounded-read.js';
 import { packageRoot } from './package-root.js';
@@ -137,6 +139,7 @@ export function createNodeEnv(root: string = packageRoot(), options: NodeEnvOpti
   const measure: TextMeasurer = createMeasurer(faces);
   const styles = new Map<string, Outcome<Style>>();
   let outlines: OutlineSet | undefined;
+  let embed: EmbedFonts | undefined;
   const require = createRequire(join(root, 'package.json'));
   const table = nodeTableEnv();
   return {
@@ -156,5 +159,6 @@ export function createNodeEnv(root: string = packageRoot(), options: NodeEnvOpti
       return outlines;
     },
     fontFiles: () => sourceSansFiles(require),
+    embedFonts: () => (embed ??= nodeEmbedFonts(root, measure)),
   };
 }

@@ -1,6 +1,7 @@
 import type { Outcome } from '../diagnostics/diagnostic.js';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Style } from '../style/types.js';
+import type { EmbedFonts } from '../svg/embed.js';
 import type { OutlineSet } from '../svg/glyphs.js';
 import type { TableEnv } from '../table/load.js';
 
@@ -14,4 +15,6 @@ export interface RenderEnv {
   outlines(): OutlineSet;
   /** The TTF files, for SVG that still has live text ([] where the dev-only font package is not installed). */
   fontFiles(): string[];
+  /** The fonts an `embed` SVG carries: faces, prebuilt subsets, run-time subsetting (set up on first use). */
+  embedFonts(): EmbedFonts;
 }

@@ -14,8 +14,10 @@ import type { LayoutContext } from '../layout/kit-types.js';
 import { idMaker } from '../scene/ids.js';
 import type { Scene } from '../scene/types.js';
 import { withStyleSize } from '../style/frame-size.js';
-import type { Style } from '../style/types.js';
-import { writeSvg } from '../svg/write.js';
+import type { Style, TextModeName } from '../style/types.js';
+import { embeddedFonts } from '../svg/embed.js';
+import { idPrefixProblem } from '../svg/id-prefix.js';
+import { writeSvg, type SvgOptions, type TextMode } from '../svg/write.js';
 import { readTable } from '../table/load.js';
 import type { Table } from '../table/types.js';
 import type { RenderEnv } from './env.js';
@@ -52,6 +54,18 @@ export interface RenderRequest {
    * used for output. Default: none (no timings).
    */
   clock?: () => number;
+  /**
+   * How the SVG writes its text: `embed` (live text with the glyphs it uses embedded as WOFF2),
+   * `outline` (glyph paths), `live` (live text in the style's family list). Default: the
+   * style's `textMode`, else embed.
+   */
+  textMode?: TextModeName;
+  /**
+   * Starts every id in the SVG, so charts inlined in one HTML page never share one: a letter or
+   * `_`, then letters, digits, `_`, `-`, `.`; at most 64 characters. Default: `cw` and a hash of
+   * the chart's words.
+   */
+  idPrefix?: string;
 }
 
 /** How long one stage took. */
@@ -66,7 +80,7 @@ export interface RenderResult {
   brief?: ResolvedBrief;
   choice?: Choice;
   scene?: Scene;
-  /** SVG with live text: selectable, searchable, accessible. */
+  /** The SVG, its text as the request's text mode says (by default live text with its fonts embedded: selectable, searchable, accessible). */
   svg?: string;
   rationale: Decision[];
   diagnostics: Diagnostic[];
@@ -190,14 +204,29 @@ function renderCore(inputs: RenderInputs, measure: TextMeasurer, opts: { lenient
   return { brief, choice: choice.value, rationale, scene: laid.scene, diagnostics: all };
 }
 
+/** The text mode of a render: the request's, else the style's, else embed. */
+async function textModeOf(name: TextModeName, scene: Scene, style: Style, env: RenderEnv): Promise<TextMode> {
+  if (name === 'live') return { kind: 'live', family: style.font.family };
+  if (name === 'outline') return { kind: 'outlines', set: env.outlines(), measure: env.measure };
+  return { kind: 'embed', fonts: await embeddedFonts(scene, env.embedFonts()) };
+}
+
 /** The SVG of a finished scene, or the coded defect that stopped it (a bad coordinate is never written). */
-function svgOf(scene: Scene, family: string, file: string | undefined): { svg?: string; diagnostics: Diagnostic[] } {
+async function svgOf(scene: Scene, style: Style, req: RenderRequest, env: RenderEnv): Promise<{ svg?: string; diagnostics: Diagnostic[] }> {
+  const options: SvgOptions = req.idPrefix !== undefined ? { idPrefix: req.idPrefix } : {};
+  let mode: TextMode;
   try {
-    return { svg: writeSvg(scene, { kind: 'live', family }), diagnostics: [] };
+    mode = await textModeOf(req.textMode ?? style.textMode ?? 'embed', scene, style, env);
+  } catch (e) {
+    // Only a run-time subset can fail here (the subsetter missing or refusing a font file).
+    return { diagnostics: [diagnostic('render.embed-failed', `could not embed the fonts the chart's text needs: ${(e as Error).message}`, { file: req.file, hint: 'write the text another way (--text outline or --text live), or reinstall chartwright so that subset-font is present' })] };
+  }
+  try {
+    return { svg: writeSvg(scene, mode, options), diagnostics: [] };
   } catch (e) {
     // fmt refuses non-finite and absurd coordinates: a layout defect, reported, never written.
     if (!(e instanceof RangeError)) throw e;
-    return { diagnostics: [diagnostic('render.internal', `the layout produced a bad coordinate (${e.message}); this is a defect in chartwright`, { file, hint: 'please report it with the brief and data' })] };
+    return { diagnostics: [diagnostic('render.internal', `the layout produced a bad coordinate (${e.message}); this is a defect in chartwright`, { file: req.file, hint: 'please report it with the brief and data' })] };
   }
 }
 
@@ -207,6 +236,8 @@ function svgOf(scene: Scene, family: string, file: string | undefined): { svg?: 
  */
 export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<RenderResult> {
   const watch = stopwatch(req.clock);
+  const badPrefix = req.idPrefix !== undefined ? idPrefixProblem(req.idPrefix) : undefined;
+  if (badPrefix) return { ok: false, rationale: [], diagnostics: [badPrefix] };
   const loaded = await loadInputs(req, env, watch.lap);
   const finish = (result: Omit<RenderResult, 'ok' | 'timings'>): RenderResult => {
     // A failing brief reports at most MAX_BRIEF_PROBLEMS problems, however many it has (100,000
@@ -225,12 +256,12 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
   }
   const diagnostics = [...loaded.diagnostics, ...result.diagnostics];
   if (!result.scene || hasErrors(strictly(diagnostics, req.strict, new Set(result.brief?.accept ?? [])))) return finish({ ...result, diagnostics });
-  const svg = svgOf(result.scene, loaded.inputs.style.font.family, req.file);
+  const svg = await svgOf(result.scene, loaded.inputs.style, req, env);
   watch.lap('svg');
   return finish({ ...result, ...(svg.svg !== undefined ? { svg: svg.svg } : {}), diagnostics: [...diagnostics, ...svg.diagnostics] });
 }
 
 /** The SVG of a scene with text as glyph outlines, as the raster stage draws it. */
-export function outlineSvg(scene: Scene, env: RenderEnv): string {
-  return writeSvg(scene, { kind: 'outlines', set: env.outlines(), measure: env.measure });
+export function outlineSvg(scene: Scene, env: RenderEnv, options: SvgOptions = {}): string {
+  return writeSvg(scene, { kind: 'outlines', set: env.outlines(), measure: env.measure }, options);
 }

@@ -66,5 +66,6 @@ export const STYLE_SCHEMA: SchemaNode = {
       description: 'The frame size a brief gets when it sets none; a brief\'s `size:` wins, side by side.',
       properties: { width: { type: 'integer', minimum: 160, maximum: 4000 }, height: { type: 'integer', minimum: 160, maximum: 4000 } },
     },
+    textMode: { type: 'string', enum: ['embed', 'outline', 'live'], description: 'How the SVG writes text: embed (the fonts used, inside the SVG), outline (glyph paths), live (the family list of font.family).' },
   },
 };

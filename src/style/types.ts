@@ -46,4 +46,9 @@ export interface Style {
   };
   /** The frame size a brief gets when it sets none (each side the brief gives wins). Default: the brief's default, 720 × 440. */
   size?: { width: number; height: number };
+  /** How the SVG writes its text (the command line's --text wins). Default: embed. */
+  textMode?: TextModeName;
 }
+
+/** How an SVG writes its text: `embed` (live text, the fonts it needs inside), `outline` (glyph paths), `live` (live text in the style's family list). */
+export type TextModeName = 'embed' | 'outline' | 'live';

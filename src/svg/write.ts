@@ -1,13 +1,45 @@
 import type { TextMeasurer } from '../font/measurer.js';
 import { contentHash } from '../scene/ids.js';
 import type { Datum, Paint, Scene, SceneNode, TextNode } from '../scene/types.js';
+import type { EmbeddedFonts } from './embed.js';
 import { escapeXml } from './escape.js';
 import { fmt } from './fmt.js';
 import { GlyphDefs, outlineText, type OutlineSet } from './glyphs.js';
 import { pathData } from './path.js';
 
-/** How text is written: live `<text>` (selectable, accessible) or glyph outlines (no font needed to draw). */
-export type TextMode = { kind: 'live'; family: string } | { kind: 'outlines'; set: OutlineSet; measure: TextMeasurer };
+/**
+ * How text is written: live `<text>` naming a family list (the reader's fonts draw it), live
+ * `<text>` with the fonts it needs embedded (`embed`: drawn alike everywhere, still selectable),
+ * or glyph outlines (no font needed to draw, not selectable).
+ */
+export type TextMode =
+  | { kind: 'live'; family: string }
+  | { kind: 'embed'; fonts: EmbeddedFonts }
+  | { kind: 'outlines'; set: OutlineSet; measure: TextMeasurer };
+
+/** Options of the SVG writer. */
+export interface SvgOptions {
+  /** Starts every id in the SVG (checked by the caller: `idPrefixProblem`). Default: `cw` and a hash of the chart's words and font. */
+  idPrefix?: string;
+}
+
+const GENERIC_FAMILIES = new Set(['serif', 'sans-serif', 'monospace', 'cursive', 'fantasy', 'system-ui']);
+
+/**
+ * A CSS family list from comma-separated names: each quoted (quotes and markup dropped), ending
+ * in a generic family (sans-serif unless the list names one), so a reader without the fonts
+ * still gets a sans-serif face.
+ */
+export function familyList(names: readonly string[]): string {
+  const clean = names.map((n) => n.replace(/['"<>&]/g, '').trim()).filter((n) => n !== '');
+  const quoted = clean.map((n) => (GENERIC_FAMILIES.has(n) ? n : `'${n}'`));
+  return clean.some((n) => GENERIC_FAMILIES.has(n)) ? quoted.join(', ') : [...quoted, 'sans-serif'].join(', ');
+}
+
+function rootFamily(mode: TextMode): string {
+  if (mode.kind === 'live') return familyList(mode.family.split(','));
+  return mode.kind === 'embed' ? familyList(mode.fonts.families) : '';
+}
 
 const WEIGHT_NUMBER = { regular: 400, semibold: 600 } as const;
 
@@ -68,7 +100,7 @@ function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined)
     case 'circle':
       return withDatum(`<circle${cls} cx="${fmt(node.cx)}" cy="${fmt(node.cy)}" r="${fmt(node.r)}" fill="${node.fill}"${paintAttributes(node)}`, 'circle', node);
     case 'text':
-      return mode.kind === 'live' ? liveText(node, cls) : outlineText(node, mode.measure, defs!, cls, rotation(node), fullTitle(node));
+      return mode.kind !== 'outlines' ? liveText(node, cls) : outlineText(node, mode.measure, defs!, cls, rotation(node), fullTitle(node));
     case 'image':
       // A data raster is drawn without smoothing: optimizeSpeed (SVG 1.1; CSS Images 3 treats it as crisp-edges) is what resvg honours, not `pixelated`.
       return `<image${cls} x="${fmt(node.x)}" y="${fmt(node.y)}" width="${fmt(node.width)}" height="${fmt(node.height)}" href="${escapeXml(node.href)}"${node.grid ? ' preserveAspectRatio="none" image-rendering="optimizeSpeed"' : ''}/>`;
@@ -80,7 +112,7 @@ function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined)
  * ids prefixed with a hash of the chart's title, description and font, so charts inlined in one
  * page never point at each other's different content and the same chart always gets the same ids.
  */
-export function writeSvg(scene: Scene, mode: TextMode): string {
+export function writeSvg(scene: Scene, mode: TextMode, options: SvgOptions = {}): string {
   const w = fmt(scene.width);
   const h = fmt(scene.height);
   const title = escapeXml(scene.title);
@@ -88,15 +120,18 @@ export function writeSvg(scene: Scene, mode: TextMode): string {
   // The ids that elements refer to are the title, the description and (with outlines) glyphs,
   // whose ids name their weight and code point. Hashing those texts and the font family means
   // two charts whose prefixes collide point at identical content.
-  const family = mode.kind === 'live' ? mode.family : mode.set.family;
-  const prefix = `cw${contentHash(`${title}\n${desc}\n${family}`)}`;
+  const family = mode.kind === 'outlines' ? mode.set.family : rootFamily(mode);
+  const prefix = options.idPrefix ?? `cw${contentHash(`${title}\n${desc}\n${mode.kind === 'live' ? mode.family : family}`)}`;
   const defs = mode.kind === 'outlines' ? new GlyphDefs(prefix, mode.set) : undefined;
   const body = writeNode(scene.root, mode, defs);
-  const font = mode.kind === 'live' ? ` font-family="'${mode.family.replace(/['"<>&]/g, '')}', sans-serif"` : '';
+  const font = mode.kind === 'outlines' ? '' : ` font-family="${family}"`;
+  // Embedded fonts need no id: their family names are ours, and identical rules from two charts on one page agree.
+  const style = mode.kind === 'embed' && mode.fonts.css ? `<defs><style>${mode.fonts.css}</style></defs>` : '';
   const parts = [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}" viewBox="0 0 ${w} ${h}" role="img" aria-labelledby="${prefix}-title ${prefix}-desc"${font}>`,
     `<title id="${prefix}-title">${title}</title>`,
     `<desc id="${prefix}-desc">${desc}</desc>`,
+    style,
     defs ? defs.toSvg() : '',
     `<rect class="background" width="${w}" height="${h}" fill="${scene.background}"/>`,
     body,

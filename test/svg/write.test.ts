@@ -50,7 +50,7 @@ describe('SVG writer', () => {
   });
 
   it('quotes the font family, which CSS would drop unquoted because of the bare "3"', async () => {
-    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v' }, rows);
+    const r = await renderRows({ intent: 'compare', keys: 'k', values: 'v' }, rows, { textMode: 'live' });
     expect(parseXml(r.svg!).documentElement.getAttribute('font-family')).toBe("'Source Sans 3', sans-serif");
   });
 
