@@ -1,6 +1,7 @@
 import type { TextMeasurer } from '../font/measurer.js';
 import { contentHash } from '../scene/ids.js';
 import type { Datum, Paint, Scene, SceneNode, TextNode } from '../scene/types.js';
+import { nodesOf } from '../scene/walk.js';
 import { escapeXml } from './escape.js';
 import { fmt } from './fmt.js';
 import { GlyphDefs, outlineText, type OutlineSet } from './glyphs.js';
@@ -76,6 +77,13 @@ function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined)
 }
 
 /**
+ * Browsers draw a data raster unsmoothed only for CSS's `pixelated` (Chromium smooths an image
+ * marked `optimizeSpeed`), which resvg 2.6 does not know and would draw smoothed. resvg skips
+ * at-rules, so the rule inside `@supports` reaches browsers alone, and both draw sharp cells.
+ */
+const RASTER_STYLE = '<style>@supports (image-rendering:pixelated){image.raster{image-rendering:pixelated}}</style>';
+
+/**
  * The svg stage: scene → SVG text. Deterministic: numbers through `fmt`, nodes in scene order,
  * ids prefixed with a hash of the chart's title, description and font, so charts inlined in one
  * page never point at each other's different content and the same chart always gets the same ids.
@@ -98,6 +106,7 @@ export function writeSvg(scene: Scene, mode: TextMode): string {
     `<title id="${prefix}-title">${title}</title>`,
     `<desc id="${prefix}-desc">${desc}</desc>`,
     defs ? defs.toSvg() : '',
+    nodesOf(scene.root).some((n) => n.kind === 'image' && n.grid) ? RASTER_STYLE : '',
     `<rect class="background" width="${w}" height="${h}" fill="${scene.background}"/>`,
     body,
     '</svg>',
