@@ -1,7 +1,6 @@
 import type { TextMeasurer } from '../font/measurer.js';
 import { contentHash } from '../scene/ids.js';
 import type { Datum, Paint, Scene, SceneNode, TextNode } from '../scene/types.js';
-import { nodesOf } from '../scene/walk.js';
 import { escapeXml } from './escape.js';
 import { fmt } from './fmt.js';
 import { GlyphDefs, outlineText, type OutlineSet } from './glyphs.js';
@@ -83,6 +82,8 @@ function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined)
  */
 const RASTER_STYLE = '<style>@supports (image-rendering:pixelated){image.raster{image-rendering:pixelated}}</style>';
 
+const hasRaster = (node: SceneNode): boolean => (node.kind === 'image' ? node.grid !== undefined : node.kind === 'group' && node.children.some(hasRaster));
+
 /**
  * The svg stage: scene → SVG text. Deterministic: numbers through `fmt`, nodes in scene order,
  * ids prefixed with a hash of the chart's title, description and font, so charts inlined in one
@@ -106,7 +107,7 @@ export function writeSvg(scene: Scene, mode: TextMode): string {
     `<title id="${prefix}-title">${title}</title>`,
     `<desc id="${prefix}-desc">${desc}</desc>`,
     defs ? defs.toSvg() : '',
-    nodesOf(scene.root).some((n) => n.kind === 'image' && n.grid) ? RASTER_STYLE : '',
+    hasRaster(scene.root) ? RASTER_STYLE : '',
     `<rect class="background" width="${w}" height="${h}" fill="${scene.background}"/>`,
     body,
     '</svg>',
