@@ -46,7 +46,8 @@ export async function openChartPage(browser: Browser, scale: number): Promise<Ch
       await page.setViewportSize({ width: Math.ceil(width), height: Math.ceil(height) });
       await page.setContent(`<!doctype html><html><head><meta charset="utf-8"><style>html,body{margin:0;padding:0;background:#fff}svg{display:block}</style>${head}</head><body>${svg}</body></html>`, { waitUntil: 'load' });
       await page.evaluate(() => document.fonts.ready.then(() => undefined));
-      // CDP's own capture of the viewport, encoded for speed: decoding the PNG is most of a shot's cost.
+      // CDP's own capture of the viewport, encoded for speed (decoding the PNG is most of a shot's
+      // cost); without the clip's scale it comes out at one pixel per CSS pixel.
       const clip = { x: 0, y: 0, width: Math.ceil(width), height: Math.ceil(height), scale };
       const { data } = await cdp.send('Page.captureScreenshot', { format: 'png', optimizeForSpeed: true, captureBeyondViewport: false, clip });
       return PNG.sync.read(Buffer.from(data, 'base64'));
@@ -106,7 +107,8 @@ export function textShift(scene: Scene, drawn: DrawnText[], boxes: 'ink' | 'adva
   let worst: TextShift = { px: 0, text: '', offCanvas: 0 };
   let offCanvas = 0;
   texts.forEach((t, i) => {
-    const box = drawn[i]!.box;
+    const { role, box } = drawn[i]!;
+    if (role !== t.role) throw new Error(`text ${i} is a ${t.role} in the scene but a ${role} on the page`);
     const px = boxes === 'ink' ? overhang(box, t.box) : edgeShift(box, t.box);
     if (px > worst.px) worst = { px, text: t.text, offCanvas: 0 };
     // Half a pixel: a box on the canvas edge may round outside it.
