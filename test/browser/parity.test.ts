@@ -11,9 +11,16 @@ import { MODES, type ParityMode } from './modes.js';
 import { openChartPage, pixelDiff, textShift, type ChartPage, type PixelDiff, type Pixels } from './parity.js';
 import { summarise, type Measured } from './summary.js';
 
-/** The SVG text mode held to resvg's PNG. `outline` until the embedded-font mode lands; then `embed`. */
+/**
+ * The SVG text mode held to resvg's PNG: `outline` until the embedded-font mode lands, then
+ * `embed` (an entry in MODES, bounded by BOUNDS.embed).
+ */
 const TEXT_MODE: ParityMode = MODES.outline;
-/** Modes measured and reported, never asserted: why a chart must not rely on the reader's fonts. */
+/**
+ * Modes measured and reported, never asserted: live text in the reader's fallback face (why a
+ * chart must not rely on the reader's fonts) and with the font supplied by the page (what
+ * embedding gives; redundant once `embed` itself is TEXT_MODE).
+ */
 const REPORTED: ParityMode[] = [MODES.live, MODES['live-font']];
 
 /**
