@@ -24,6 +24,12 @@ function loadResvg(): typeof ResvgClass {
  * they are encoded by `encodePng` (Node's zlib), which is faster than resvg's own encoder.
  */
 export function rasterize(svg: string, options: RasterOptions): Buffer {
+  const image = rasterPixels(svg, options);
+  return encodePng(image.pixels, image.width, image.height);
+}
+
+/** resvg's pixels of an SVG, RGBA row by row, before PNG encoding (what `rasterize` encodes). */
+export function rasterPixels(svg: string, options: RasterOptions): { pixels: Uint8Array; width: number; height: number } {
   const resvg = new (loadResvg())(svg, {
     fitTo: { mode: 'zoom', value: options.scale },
     font: { loadSystemFonts: false, fontFiles: options.fontFiles, defaultFontFamily: 'Source Sans 3' },
@@ -32,5 +38,5 @@ export function rasterize(svg: string, options: RasterOptions): Buffer {
     imageRendering: 0,
   });
   const image = resvg.render();
-  return encodePng(image.pixels, image.width, image.height);
+  return { pixels: image.pixels, width: image.width, height: image.height };
 }

@@ -108,6 +108,15 @@ function writeNode(node: SceneNode, mode: TextMode, defs: GlyphDefs | undefined)
 }
 
 /**
+ * Browsers draw a data raster unsmoothed only for CSS's `pixelated` (Chromium smooths an image
+ * marked `optimizeSpeed`), which resvg 2.6 does not know and would draw smoothed. resvg skips
+ * at-rules, so the rule inside `@supports` reaches browsers alone, and both draw sharp cells.
+ */
+const RASTER_STYLE = '<style>@supports (image-rendering:pixelated){image.raster{image-rendering:pixelated}}</style>';
+
+const hasRaster = (node: SceneNode): boolean => (node.kind === 'image' ? node.grid !== undefined : node.kind === 'group' && node.children.some(hasRaster));
+
+/**
  * The svg stage: scene → SVG text. Deterministic: numbers through `fmt`, nodes in scene order,
  * ids prefixed with a hash of the chart's title, description and font, so charts inlined in one
  * page never point at each other's different content and the same chart always gets the same ids.
@@ -133,6 +142,7 @@ export function writeSvg(scene: Scene, mode: TextMode, options: SvgOptions = {})
     `<desc id="${prefix}-desc">${desc}</desc>`,
     style,
     defs ? defs.toSvg() : '',
+    hasRaster(scene.root) ? RASTER_STYLE : '',
     `<rect class="background" width="${w}" height="${h}" fill="${scene.background}"/>`,
     body,
     '</svg>',
