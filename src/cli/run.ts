@@ -107,7 +107,7 @@ async function runExplain(file: string, flags: { json?: boolean; lenient?: boole
   const result = await renderFile(resolve(io.cwd, file), env, { strict: false, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env) });
   const diagnostics = relativeFiles(result.diagnostics, io.cwd);
   if (flags.json) {
-    io.stdout(`${printable(JSON.stringify({ form: result.choice?.form ?? null, ok: result.ok, rationale: result.rationale, diagnostics }, null, 2), true)}\n`);
+    io.stdout(`${printable(JSON.stringify({ form: result.choice?.form ?? null, ok: result.ok, rationale: result.rationale, diagnostics, alt: result.scene ? result.scene.alt ?? result.scene.description : null }, null, 2), true)}\n`);
   } else {
     io.stdout(`form: ${result.choice?.form ?? '(none)'}\n`);
     for (const r of result.rationale) io.stdout(`- ${printable(r.decision)}\n    because ${printable(r.rule)}\n`);
@@ -158,7 +158,7 @@ function program(io: CliIo, env: () => RenderEnv, deps: CliDeps, exit: { code: n
   withRenderFlags(cli.command('render').description('render briefs to SVG (and PNG)').argument('<brief...>', 'brief files (.yaml, .yml, .json), or folders of them'))
     .action(async (files: string[], flags: RenderFlags) => { exit.code = await runRender(expandBriefs(files, io.cwd, deps.listDir), flags, io, env, deps); });
   cli.command('explain').description('say which chart a brief gets and why').argument('<brief>', 'a brief file')
-    .option('--json', 'print JSON: { form, rationale, diagnostics }')
+    .option('--json', 'print JSON: { form, rationale, diagnostics, alt }')
     .option('--lenient', 'explain the lenient render')
     .action(async (file: string, flags: { json?: boolean; lenient?: boolean }) => { exit.code = await runExplain(file, flags, io, env()); });
   withCommonFlags(cli.command('check').description('validate and lint briefs; non-zero exit on errors').argument('<brief...>', 'brief files, or folders of them'))

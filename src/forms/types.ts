@@ -4,6 +4,7 @@ import type { Outcome } from '../diagnostics/diagnostic.js';
 import type { ChartForm } from '../layout/chart.js';
 import type { LayoutContext } from '../layout/kit-types.js';
 import type { Table } from '../table/types.js';
+import type { AltText } from './alt-words.js';
 
 /** What every form has: its name, traits, plan and derivation. */
 export interface FormCore<Plan, Derived> {
@@ -13,6 +14,12 @@ export interface FormCore<Plan, Derived> {
   traits: FormTraits;
   plan(input: PlanInput): Outcome<Planned<Plan>>;
   derive(table: Table, plan: Plan, ctx: LayoutContext): Outcome<Derived>;
+  /**
+   * The chart's alt text: what it is and its main reading, numbers written as its labels write
+   * them. Optional in the type so a form can be drafted without it; every registered form has one
+   * (test/forms/alt-text.test.ts).
+   */
+  alt?(derived: Derived, ctx: LayoutContext): AltText;
 }
 
 /**

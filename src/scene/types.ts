@@ -191,6 +191,8 @@ export interface Scene {
   /** Accessible name (the brief title) and generated one-sentence description. */
   title: string;
   description: string;
+  /** Alt text: what the chart is and its main reading, with its notes (the SVG's <desc>); the brief's `description` when given. Default: none (the description stands in). */
+  alt?: string;
   root: GroupNode;
   /** The first panel's axes (every panel's are in `panels`). */
   axes: AxisInfo[];

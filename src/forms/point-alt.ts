@@ -1,0 +1,28 @@
+import { quantileSorted7 } from '../derive/quantile.js';
+import type { DotRow } from '../derive/dots.js';
+import { valueFormatter } from '../layout/number-format.js';
+import { count, extremes, extremesReading, type AltText } from './alt-words.js';
+
+/**
+ * Dot plot: the largest and smallest value; a dumbbell (two values per key) also names the
+ * widest gap between its two ends.
+ */
+export function dotAlt(rows: readonly DotRow[], what: string, names: readonly string[], format: string | undefined): AltText {
+  const fmt = valueFormatter(rows.flatMap((r) => r.values.filter((v) => !Number.isNaN(v))), format);
+  if (names.length < 2) return { what, reading: extremesReading(rows.map((r) => ({ label: r.label, value: r.values[0]! })), fmt) };
+  const ends = rows.flatMap((r) => r.values.map((v, i) => ({ label: `${r.label} (${names[i]})`, value: v })));
+  const gaps = rows.filter((r) => r.values.every((v) => !Number.isNaN(v))).map((r) => ({ label: r.label, value: r.values[1]! - r.values[0]!, row: r }));
+  const widest = extremes(gaps.map((g) => ({ ...g, value: Math.abs(g.value) })))?.top;
+  const gap = widest ? `; the widest gap is ${widest.label}, from ${fmt(widest.row.values[0]!)} (${names[0]}) to ${fmt(widest.row.values[1]!)} (${names[1]})` : '';
+  return { what, reading: `${extremesReading(ends, fmt, ['highest', 'lowest'])}${gap}` };
+}
+
+/** Dense pixel layout: the range (with the items at its ends, when named) and the median. */
+export function denseAlt(values: Float64Array, labels: readonly string[] | undefined, what: string, format: string | undefined): AltText {
+  const all = Array.from(values);
+  const fmt = valueFormatter(all, format);
+  const sorted = all.filter((v) => !Number.isNaN(v)).sort((a, b) => a - b);
+  const median = sorted.length ? `; median ${fmt(quantileSorted7(sorted, 0.5))}` : '';
+  const named = labels ? extremesReading(all.map((v, i) => ({ label: labels[i]!, value: v })), fmt, ['highest', 'lowest']) : sorted.length ? `from ${fmt(sorted[0]!)} to ${fmt(sorted[sorted.length - 1]!)}` : '';
+  return { what: `${what}, ${count(values.length, 'item')}`, reading: `${named}${median}` };
+}
