@@ -51,11 +51,11 @@ function demoBriefs(root: string): BriefEntry[] {
 }
 
 interface CommonFlags { strict?: boolean; lenient?: boolean; quiet?: boolean; allowOutside?: boolean }
-interface RenderFlags extends CommonFlags { outDir?: string; png?: boolean; outlineText?: boolean; scale: number; scene?: string; debug?: boolean; timings?: boolean; report?: string }
+interface RenderFlags extends CommonFlags { outDir?: string; png?: boolean; alt?: boolean; data?: boolean; outlineText?: boolean; scale: number; scene?: string; debug?: boolean; timings?: boolean; report?: string }
 
 function batchOptions(flags: RenderFlags, io: CliIo, deps: CliDeps): BatchOptions {
   return {
-    outDir: flags.outDir ? resolve(io.cwd, flags.outDir) : undefined, png: !!flags.png, scale: flags.scale, scene: flags.scene, allowOutside: !!flags.allowOutside,
+    outDir: flags.outDir ? resolve(io.cwd, flags.outDir) : undefined, png: !!flags.png, alt: !!flags.alt, data: !!flags.data, scale: flags.scale, scene: flags.scene, allowOutside: !!flags.allowOutside,
     strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, outlineText: !!flags.outlineText, tempTag: String(io.pid),
     maxBriefBytes: inputLimit('brief', io.env), fs: deps.fs,
     housekeeping: { alive: io.alive ?? (() => true), now: io.now ?? (() => Date.now()) },
@@ -142,6 +142,8 @@ const withCommonFlags = (c: Command) => c
 const withRenderFlags = (c: Command) => withCommonFlags(c)
   .option('-o, --out-dir <dir>', 'write outputs under this folder instead of beside each brief')
   .option('--png', 'also write a PNG beside each SVG')
+  .option('--alt', 'also write the alt text beside each SVG, as <output>.txt')
+  .option('--data', 'also write the numbers drawn beside each SVG, as <output>.csv')
   .option('--outline-text', 'write SVG text as glyph outlines, exact without the font (not selectable)')
   .option('--scale <n>', 'PNG pixels per CSS pixel (at most 100 megapixels per PNG)', parseScale, 2)
   .option('--scene <path>', 'dump the scene as JSON: a file for one brief, a folder for several')

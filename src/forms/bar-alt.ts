@@ -2,6 +2,7 @@ import { fsum } from 'd3-array';
 import type { DerivedBars } from '../derive/bars.js';
 import { inSentence } from '../fields/labels.js';
 import { valueFormatter } from '../layout/number-format.js';
+import type { DataTable } from '../scene/types.js';
 import { count, extremes, extremesReading, type AltText } from './alt-words.js';
 import { barValueTitle } from './bar-text.js';
 import type { BarPlan } from './bar-plan.js';
@@ -62,4 +63,18 @@ export function stackAlt(derived: StackDerived): AltText {
   const fmt = valueFormatter([...stacks.map((s) => s.total), strongest.value], query.value?.format);
   const bars = extremesReading(stacks.map((s) => ({ label: s.group, value: s.total })), fmt, ['largest total', 'smallest']);
   return { what, reading: `the largest part overall is ${strongest.label} (${fmt(strongest.value)}, ${percentText(all ? strongest.value / all : 0)} of all); ${bars}` };
+}
+
+/**
+ * The bars drawn as a table: key, value as drawn (after combining and folding), how many source
+ * rows each bar combines (`rows_combined`), and for the folded "Others" bar how many keys it holds
+ * (`folded_keys`, a column only when a bar folds).
+ */
+export function barData(derived: DerivedBars): DataTable {
+  const key = derived.query.key.name;
+  const value = derived.valueName;
+  const folds = derived.bars.some((b) => b.folds !== undefined);
+  const columns = [key, value, 'rows_combined', ...(folds ? ['folded_keys'] : [])];
+  const rows = derived.bars.map((b) => ({ [key]: b.label, [value]: b.value, rows_combined: b.count, ...(folds ? { folded_keys: b.folds ?? null } : {}) }));
+  return { columns, rows };
 }

@@ -4,6 +4,7 @@ import { axisTitle } from '../layout/axis.js';
 import { valueFormatter } from '../layout/number-format.js';
 import { count, extremesReading, someNames, type AltText } from './alt-words.js';
 import type { DerivedHeatmap } from './heatmap-layout.js';
+import type { DataTable } from '../scene/types.js';
 
 /** The groups of rows named in the alt text, at most; the rest are counted. */
 const GROUPS_NAMED = 3;
@@ -35,4 +36,15 @@ export function heatmapAlt(d: DerivedHeatmap): AltText {
   const fmt = valueFormatter(labelled.map((c) => c.value), d.query.value.format);
   const clusters = clusterSentence(d);
   return { what, reading: extremesReading(labelled, fmt, ['highest', 'lowest']), more: clusters ? [clusters] : [] };
+}
+
+/** The cells drawn, row by row in drawing order: row key, column key, value (empty for a cell with no value). */
+export function heatmapData(d: DerivedHeatmap): DataTable {
+  const { rows, columns, cells } = d.matrix;
+  const [r, c, v] = [d.query.rows.name, d.query.columns.name, d.query.value.name];
+  const out = d.rowOrder.flatMap((i) => d.columnOrder.map((j) => {
+    const value = cells[i * columns.length + j]!;
+    return { [r]: rows[i]!, [c]: columns[j]!, [v]: Number.isNaN(value) ? null : value };
+  }));
+  return { columns: [r, c, v], rows: out };
 }

@@ -1,6 +1,7 @@
 import { quantileSorted7 } from '../derive/quantile.js';
 import type { DotRow } from '../derive/dots.js';
 import { valueFormatter } from '../layout/number-format.js';
+import type { DataTable } from '../scene/types.js';
 import { count, extremes, extremesReading, type AltText } from './alt-words.js';
 
 /**
@@ -25,4 +26,9 @@ export function denseAlt(values: Float64Array, labels: readonly string[] | undef
   const median = sorted.length ? `; median ${fmt(quantileSorted7(sorted, 0.5))}` : '';
   const named = labels ? extremesReading(all.map((v, i) => ({ label: labels[i]!, value: v })), fmt, ['highest', 'lowest']) : sorted.length ? `from ${fmt(sorted[0]!)} to ${fmt(sorted[sorted.length - 1]!)}` : '';
   return { what: `${what}, ${count(values.length, 'item')}`, reading: `${named}${median}` };
+}
+
+/** The items drawn, in drawing order: key (or the item's number without one) and value (empty when missing). */
+export function denseData(values: Float64Array, labels: readonly string[] | undefined, key: string, value: string): DataTable {
+  return { columns: [key, value], rows: Array.from(values, (v, i) => ({ [key]: labels?.[i] ?? i + 1, [value]: Number.isNaN(v) ? null : v })) };
 }

@@ -5,6 +5,7 @@ import type { ChartForm } from '../layout/chart.js';
 import type { LayoutContext } from '../layout/kit-types.js';
 import type { Table } from '../table/types.js';
 import type { AltText } from './alt-words.js';
+import type { DataTable } from '../scene/types.js';
 
 /** What every form has: its name, traits, plan and derivation. */
 export interface FormCore<Plan, Derived> {
@@ -20,6 +21,8 @@ export interface FormCore<Plan, Derived> {
    * (test/forms/alt-text.test.ts).
    */
   alt?(derived: Derived, ctx: LayoutContext): AltText;
+  /** The numbers drawn, as a table, for a form whose marks may carry no datum (a raster). Default: read from the scene's marks. */
+  data?(derived: Derived): DataTable;
 }
 
 /**

@@ -17,10 +17,11 @@ function withAlt(scene: Scene, alt: string | undefined, brief: ResolvedBrief): S
   return text === undefined ? scene : { ...scene, alt: text };
 }
 
-/** The alt text of a single chart: what it is, its main reading, and its notes, at most MAX_ALT_CHARS. */
+/** The alt text of a single chart (what it is, its main reading, and its notes, at most MAX_ALT_CHARS), and the form's own table of what it draws, if it gives one. */
 export function chartAlt(scene: Scene, form: AnyForm, derived: unknown, ctx: LayoutContext): Scene {
   const s = sentencesOf(form, derived, ctx);
-  return withAlt(scene, s && capSentences([...s.head, ...s.notes]), ctx.brief);
+  const data = form.data?.(derived);
+  return withAlt(data ? { ...scene, data } : scene, s && capSentences([...s.head, ...s.notes]), ctx.brief);
 }
 
 /** One panel of small multiples, as the alt text reads it. */
