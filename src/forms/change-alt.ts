@@ -5,7 +5,7 @@ import type { Task } from '../derive/tasks.js';
 import { inSentence } from '../fields/labels.js';
 import { axisTitle } from '../layout/axis.js';
 import { valueFormatter } from '../layout/number-format.js';
-import { count, extremes, percentChange, type AltText } from './alt-words.js';
+import { count, extremes, percentChange, someNames, type AltText } from './alt-words.js';
 import { percentText } from './stack-text.js';
 
 /** "North rose most, from 61 to 74 (+21%)": an item's move, with the percent where it means something. */
@@ -20,10 +20,13 @@ export function slopeAlt(items: readonly SlopeItem[], ends: [string, string], it
   const up = items.filter((i) => i.after > i.before).length;
   const down = items.filter((i) => i.after < i.before).length;
   const what = `Slope chart of ${inSentence(valueTitle)} for ${count(items.length, 'item')} (${inSentence(itemLabel)}) from ${ends[0]} to ${ends[1]}`;
-  const e = extremes(items.map((i) => ({ label: i.label, value: i.after - i.before, item: i })));
+  const e = extremes(items.map((i) => ({ label: i.label, value: i.after - i.before })));
+  // Items tied for the biggest change are all named.
+  const tied = (change: number) => items.filter((i) => i.after - i.before === change).map((i) => move(i, fmt));
+  const named = (noun: string, change: number) => { const t = tied(change); return t.length === 1 ? `the biggest ${noun} is ${t[0]}` : `the biggest ${noun}s, tied, are ${someNames(t)}`; };
   const parts = [`${up} went up, ${down} went down, ${items.length - up - down} stayed the same`];
-  if (e && e.top.value > 0) parts.push(`the biggest riser is ${move(e.top.item, fmt)}`);
-  if (e && e.low.value < 0) parts.push(`the biggest faller is ${move(e.low.item, fmt)}`);
+  if (e && e.top.value > 0) parts.push(named('riser', e.top.value));
+  if (e && e.low.value < 0) parts.push(named('faller', e.low.value));
   return { what, reading: parts.join('; ') };
 }
 
