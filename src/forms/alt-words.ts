@@ -61,13 +61,17 @@ export function extremes<T extends Labelled>(items: readonly T[]): { top: T; low
   };
 }
 
-/** "largest North (212), smallest South (64)"; one value alone as "North (212)". */
+/** "largest North (212), smallest South and West (64 each)": items tied at an end are all named (up to three, then counted); one value alone as "North (212)". */
 export function extremesReading(items: readonly Labelled[], fmt: (n: number) => string, words: [string, string] = ['largest', 'smallest']): string {
   const e = extremes(items);
   if (!e) return '';
   if (e.top === e.low) return `${e.top.label} (${fmt(e.top.value)})`;
   if (e.top.value === e.low.value) return `all at ${fmt(e.top.value)}`;
-  return `${words[0]} ${e.top.label} (${fmt(e.top.value)}), ${words[1]} ${e.low.label} (${fmt(e.low.value)})`;
+  const at = (word: string, value: number) => {
+    const names = items.filter((i) => i.value === value).map((i) => i.label);
+    return names.length === 1 ? `${word} ${names[0]} (${fmt(value)})` : `${word} ${someNames(names, 3)} (${fmt(value)} each)`;
+  };
+  return `${at(words[0], e.top.value)}, ${at(words[1], e.low.value)}`;
 }
 
 /**

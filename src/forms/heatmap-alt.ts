@@ -32,7 +32,17 @@ export function heatmapAlt(d: DerivedHeatmap): AltText {
   const value = axisTitle(d.query.value, d.query.value.label);
   const { rows, columns, cells } = d.matrix;
   const what = `Heat map of ${inSentence(value)}, ${count(rows.length, `${inSentence(d.query.rows.label)} row`)} by ${count(columns.length, `${inSentence(d.query.columns.label)} column`)}`;
-  const labelled = Array.from(cells, (v, i) => ({ label: `${rows[Math.floor(i / columns.length)]}, ${columns[i % columns.length]}`, value: v })).filter((c) => !Number.isNaN(c.value));
+  // The extreme cells found by index first: a raster heat map may hold a million cells.
+  let [lo, hi] = [-1, -1];
+  cells.forEach((v, i) => {
+    if (Number.isNaN(v)) return;
+    if (lo < 0 || v < cells[lo]!) lo = i;
+    if (hi < 0 || v > cells[hi]!) hi = i;
+  });
+  const cell = (i: number) => ({ label: `${rows[Math.floor(i / columns.length)]} at ${columns[i % columns.length]}`, value: cells[i]! });
+  // Every cell tied with an end, so that ties are named (or counted) as such.
+  const ends = lo < 0 ? [] : [...cells.keys()].filter((i) => cells[i] === cells[hi] || cells[i] === cells[lo]);
+  const labelled = ends.map(cell);
   const fmt = valueFormatter(labelled.map((c) => c.value), d.query.value.format);
   const clusters = clusterSentence(d);
   return { what, reading: extremesReading(labelled, fmt, ['highest', 'lowest']), more: clusters ? [clusters] : [] };

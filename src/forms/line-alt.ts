@@ -24,10 +24,15 @@ function seriesTrend(derived: DerivedLines, s: LineSeries): SeriesTrend | undefi
   return { label: s.label, first: at(present[0]!), last: at(present[present.length - 1]!), peak: at(peak) };
 }
 
-/** The trend reading of each line ("Harbour rose 45% from …"), ordered by its last value, highest first. */
-function trends(derived: DerivedLines, fmt: (n: number) => string): { label: string | undefined; text: string }[] {
+/**
+ * The trend reading of each line ("Harbour rose 45% from …"), ordered by its last value, highest
+ * first; the numbers written alike, by the chart's value formatter over the numbers the text
+ * names (a million points need not be formatted to write three).
+ */
+function trends(derived: DerivedLines): { label: string | undefined; text: string }[] {
   const all = derived.series.flatMap((s) => seriesTrend(derived, s) ?? []);
   all.sort((a, b) => b.last.value - a.last.value);
+  const fmt = valueFormatter(all.flatMap((t) => [t.first.value, t.last.value, t.peak.value]), derived.query.value?.format);
   // One line needs no name (a panel of small multiples is named by its level).
   const named = all.length > 1;
   return all.map((t) => ({ label: t.label, text: `${named && t.label !== undefined ? `${t.label} ` : ''}${trendReading(t.first, t.last, t.peak, fmt)}` }));
@@ -42,8 +47,7 @@ export function lineAlt(derived: DerivedLines, noun: string, valueTitle: string)
   const [from, to] = derived.keyExtent;
   const n = derived.series.length;
   const what = `${noun} of ${inSentence(valueTitle)} by ${inSentence(derived.query.key.label)}, ${keyName(derived, from)} to ${keyName(derived, to)}, ${n === 1 ? 'one line' : count(n, 'line')}`;
-  const fmt = valueFormatter(derived.series.flatMap((s) => s.ys.filter((y) => !Number.isNaN(y))), derived.query.value?.format);
-  const read = trends(derived, fmt);
+  const read = trends(derived);
   const rest = read.slice(LINES_READ).map((t) => t.label ?? '');
   const more = rest.length ? [`${count(rest.length, 'more line')} not read out: ${someNames(rest)}.`] : [];
   return { what, reading: read.slice(0, LINES_READ).map((t) => t.text).join('; '), more };

@@ -20,12 +20,15 @@ export function dotAlt(rows: readonly DotRow[], what: string, names: readonly st
 
 /** Dense pixel layout: the range (with the items at its ends, when named) and the median. */
 export function denseAlt(values: Float64Array, labels: readonly string[] | undefined, what: string, format: string | undefined): AltText {
-  const all = Array.from(values);
-  const fmt = valueFormatter(all, format);
-  const sorted = all.filter((v) => !Number.isNaN(v)).sort((a, b) => a - b);
-  const median = sorted.length ? `; median ${fmt(quantileSorted7(sorted, 0.5))}` : '';
-  const named = labels ? extremesReading(all.map((v, i) => ({ label: labels[i]!, value: v })), fmt, ['highest', 'lowest']) : sorted.length ? `from ${fmt(sorted[0]!)} to ${fmt(sorted[sorted.length - 1]!)}` : '';
-  return { what: `${what}, ${count(values.length, 'item')}`, reading: `${named}${median}` };
+  const sorted = values.filter((v) => !Number.isNaN(v)).sort();
+  const head = `${what}, ${count(values.length, 'item')}`;
+  if (sorted.length === 0) return { what: head, reading: '' };
+  const [lo, hi, mid] = [sorted[0]!, sorted[sorted.length - 1]!, quantileSorted7(Array.from(sorted), 0.5)];
+  const fmt = valueFormatter([lo, hi, mid], format);
+  // The first item at each end, in drawing order, names it.
+  const name = (v: number) => (labels ? ` ${labels[values.indexOf(v)]}` : '');
+  const range = lo === hi ? `all at ${fmt(lo)}` : `highest${name(hi)} (${fmt(hi)}), lowest${name(lo)} (${fmt(lo)})`;
+  return { what: head, reading: `${range}; median ${fmt(mid)}` };
 }
 
 /** The items drawn, in drawing order: key (or the item's number without one) and value (empty when missing). */

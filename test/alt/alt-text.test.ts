@@ -108,6 +108,25 @@ describe('alt text', () => {
     expect(await altOf('pier-refit')).toContain(`from ${starts[0]} (Survey the old pier) to ${ends[ends.length - 1]} (Reopen the north berth), ${days} days in all`);
   });
 
+  it('heat map: the highest and lowest cells, and clusters that together hold every row once', async () => {
+    const rows = data('marsh-birds');
+    const byValue = [...rows].sort((a, b) => Number(b.birds) - Number(a.birds));
+    const top = byValue[0]!;
+    // Five cells share the lowest value, 0: three are named in the heat map's drawing order, two counted.
+    const lowest = byValue.filter((r) => r.birds === byValue[byValue.length - 1]!.birds);
+    const alt = await altOf('marsh-birds');
+    expect(lowest.length).toBe(5);
+    expect(alt).toContain(`highest ${top.species} at ${top.plot} (${top.birds}), lowest `);
+    expect(alt).toMatch(/lowest [^(]* and 2 more \(0 each\)/);
+    expect(lowest.filter((r) => alt.includes(`${r.species} at ${r.plot}`)).length).toBe(3);
+    const clusters = /form (\d+) clusters: ([^.]*)\./.exec(alt)!;
+    const groups = clusters[2]!.split('; ');
+    expect(groups.length).toBe(Number(clusters[1]));
+    // Each group is named in full or counted ("and 1 more"): the named and counted rows add up to the species drawn.
+    const size = (g: string) => g.split(/, | and /).filter((n) => !/^\d+ more$/.test(n)).length + Number(/and (\d+) more$/.exec(g)?.[1] ?? 0);
+    expect(groups.reduce((s, g) => s + size(g), 0)).toBe(new Set(rows.map((r) => r.species)).size);
+  });
+
   it('small multiples: one sentence per panel at most, capped, ending with what was left out', async () => {
     const alt = await altOf('dock-rentals');
     expect(alt.length).toBeLessThanOrEqual(MAX_ALT_CHARS);
