@@ -72,7 +72,8 @@ function chainNames(names: readonly string[]): string {
 export function ganttAlt(tasks: readonly Task[], dependencies: number, calendar: boolean, timeText: (t: number) => string): AltText {
   const first = tasks.reduce((a, b) => (b.start < a.start ? b : a));
   const last = tasks.reduce((a, b) => (b.end > a.end ? b : a));
-  const days = (n: number) => (calendar ? count(Math.round(n * 10) / 10, 'day') : valueFormatter([n])(n));
+  // Under a day, in hours (a task of two hours never reads "0 days").
+  const days = (n: number) => (!calendar ? valueFormatter([n])(n) : n >= 1 ? count(Math.round(n * 10) / 10, 'day') : count(Math.round(n * 240) / 10, 'hour'));
   const span = lengthOf({ ...first, end: last.end }, calendar);
   const what = `Gantt chart of ${count(tasks.length, 'task')}${dependencies ? `, with ${count(dependencies, 'dependency', 'dependencies')}` : ''}, from ${timeText(first.start)} (${first.label}) to ${timeText(last.end)} (${last.label}), ${days(span)} in all`;
   const longest = tasks.reduce((a, b) => (lengthOf(b, calendar) > lengthOf(a, calendar) ? b : a));

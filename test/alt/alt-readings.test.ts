@@ -33,6 +33,13 @@ describe('alt text readings', () => {
     expect(r.scene!.alt).not.toMatch(/\(0\)/);
   });
 
+  it('a schedule of hours reads its lengths in hours, never "0 days"', async () => {
+    const r = await renderRows({ intent: 'schedule', keys: 'task', start: 'start', end: 'end' }, [{ task: 'A', start: '2026-01-01T08:00:00Z', end: '2026-01-01T10:00:00Z' }, { task: 'B', start: '2026-01-01T10:00:00Z', end: '2026-01-01T11:30:00Z' }]);
+    // 08:00 to 11:30 is 3.5 hours; A, 08:00 to 10:00, is the longest at 2 hours.
+    expect(r.scene!.alt).toContain('3.5 hours in all: the longest task is A (2 hours)');
+    expect(r.scene!.alt).not.toContain('0 days');
+  });
+
   it('the brief\'s description replaces the generated alt text, in the scene and the SVG', async () => {
     const r = await renderRows({ intent: 'compare', keys: 'pier', values: 'crossings', description: 'Piers by crossings.', fields: { crossings: { unit: 'crossings' } } }, [{ pier: 'North', crossings: 5 }, { pier: 'South', crossings: 3 }]);
     expect(r.scene!.alt).toBe('Piers by crossings.');
