@@ -3,7 +3,9 @@ import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { RenderEnv } from '../pipeline/env.js';
 import { outlineSvg, renderBrief, type RenderResult, type StageTiming } from '../pipeline/render.js';
 import { rasterize } from '../raster/rasterize.js';
+import { drawnData } from '../scene/data-table.js';
 import { dumpScene } from '../scene/dump.js';
+import { tableCsv } from './data-csv.js';
 import type { Scene } from '../scene/types.js';
 import type { TextModeName } from '../style/types.js';
 import { readBriefFile, type BriefSource } from './briefs.js';
@@ -84,6 +86,8 @@ async function produceFiles(result: RenderResult & { svg: string; scene: Scene }
     // The SVG's text mode (--text, --outline-text) was applied by the render.
     if (p.kind === 'svg') files.push({ path: p.path, data: result.svg });
     if (p.kind === 'scene') files.push({ path: p.path, data: `${JSON.stringify(dumpScene(result.scene), null, 2)}\n` });
+    if (p.kind === 'alt') files.push({ path: p.path, data: `${result.scene.alt ?? result.scene.description}\n` });
+    if (p.kind === 'data') files.push({ path: p.path, data: tableCsv(drawnData(result.scene)) });
     if (p.kind !== 'png') continue;
     const started = opts.clock?.();
     files.push({ path: p.path, data: rasterize(outlined(), { scale: opts.scale, fontFiles: [] }) });

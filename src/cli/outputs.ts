@@ -5,7 +5,7 @@ import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 /** A file to write: where, and what. */
 export interface PlannedFile {
   path: string;
-  kind: 'svg' | 'png' | 'scene';
+  kind: 'svg' | 'png' | 'scene' | 'alt' | 'data';
 }
 
 /** Where a brief's outputs may go. */
@@ -16,6 +16,10 @@ export interface OutputRules {
   png: boolean;
   /** Let `output:` name files outside the brief's folder or -o, and absolute paths (--allow-outside). Default: false. */
   allowOutside?: boolean;
+  /** Add the alt text as a .txt beside every SVG (--alt). Default: false. */
+  alt?: boolean;
+  /** Add the numbers drawn as a .csv beside every SVG (--data). Default: false. */
+  data?: boolean;
 }
 
 /** The extensions an `output:` may have. */
@@ -71,29 +75,32 @@ function checkOutput(name: string, at: string, base: string, rules: OutputRules)
   return { path };
 }
 
-/** The SVG of an output name, and the PNG beside it when the name is .png or `png` is set. */
-function withPng(path: string, png: boolean): PlannedFile[] {
+/** The SVG of an output name, the PNG beside it when the name is .png or `png` is set, and the alt text and data beside it when asked for. */
+function filesFor(path: string, rules: OutputRules): PlannedFile[] {
   const stem = path.slice(0, path.length - extname(path).length);
-  const svg: PlannedFile = { path: `${stem}.svg`, kind: 'svg' };
-  return extname(path).toLowerCase() === '.png' || png ? [svg, { path: `${stem}.png`, kind: 'png' }] : [svg];
+  const files: PlannedFile[] = [{ path: `${stem}.svg`, kind: 'svg' }];
+  if (extname(path).toLowerCase() === '.png' || rules.png) files.push({ path: `${stem}.png`, kind: 'png' });
+  if (rules.alt) files.push({ path: `${stem}.txt`, kind: 'alt' });
+  if (rules.data) files.push({ path: `${stem}.csv`, kind: 'data' });
+  return files;
 }
 
 /**
  * The files one brief renders to, or the problems with its `output:` names. The brief's
  * `output` names them (relative to the brief, or to `outDir`); by default the brief's own name
  * with .svg. The SVG is always written; a .png output or `png` adds the PNG beside it under the
- * same name. Names must stay under the brief's folder (or `outDir`) unless `allowOutside`.
+ * same name, and `alt` and `data` a .txt and a .csv. Names must stay under the brief's folder (or `outDir`) unless `allowOutside`.
  */
 export function plannedOutputs(briefFile: string, outputs: string[], rules: OutputRules): { files: PlannedFile[]; problems: Diagnostic[] } {
   const base = resolve(rules.outDir ?? dirname(briefFile));
   // The default name comes from the brief's own file name, which needs no checking.
-  if (!outputs.length) return { files: withPng(join(base, `${basename(briefFile, extname(briefFile))}.svg`), rules.png), problems: [] };
+  if (!outputs.length) return { files: filesFor(join(base, `${basename(briefFile, extname(briefFile))}.svg`), rules), problems: [] };
   const files = new Map<string, PlannedFile>();
   const problems: Diagnostic[] = [];
   for (const [i, name] of outputs.entries()) {
     const checked = checkOutput(name, outputs.length > 1 ? `/output/${i}` : '/output', base, rules);
     if ('problem' in checked) { problems.push(checked.problem); continue; }
-    for (const f of withPng(checked.path, rules.png)) files.set(f.path, f);
+    for (const f of filesFor(checked.path, rules)) files.set(f.path, f);
   }
   return { files: problems.length ? [] : [...files.values()], problems };
 }

@@ -73,11 +73,11 @@ function styleFlag(style: string | undefined, io: CliIo): { style?: string } {
   if (style === undefined) return {};
   return { style: style.includes('/') || style.endsWith('.json') ? resolve(io.cwd, style) : style };
 }
-interface RenderFlags extends CommonFlags { outDir?: string; png?: boolean; outlineText?: boolean; text?: TextModeName; idPrefix?: string; scale: number; scene?: string; debug?: boolean; timings?: boolean; report?: string }
+interface RenderFlags extends CommonFlags { outDir?: string; png?: boolean; alt?: boolean; data?: boolean; outlineText?: boolean; text?: TextModeName; idPrefix?: string; scale: number; scene?: string; debug?: boolean; timings?: boolean; report?: string }
 
 function batchOptions(flags: RenderFlags, io: CliIo, deps: CliDeps): BatchOptions {
   return {
-    outDir: flags.outDir ? resolve(io.cwd, flags.outDir) : undefined, png: !!flags.png, scale: flags.scale, scene: flags.scene, allowOutside: !!flags.allowOutside,
+    outDir: flags.outDir ? resolve(io.cwd, flags.outDir) : undefined, png: !!flags.png, alt: !!flags.alt, data: !!flags.data, scale: flags.scale, scene: flags.scene, allowOutside: !!flags.allowOutside,
     strict: !!flags.strict, lenient: !!flags.lenient, debug: !!flags.debug, outlineText: !!flags.outlineText, tempTag: String(io.pid), ...(flags.locale ? { locale: flags.locale } : {}),
     ...(flags.text ? { textMode: flags.text } : {}), ...(flags.idPrefix !== undefined ? { idPrefix: flags.idPrefix } : {}),
     maxBriefBytes: inputLimit('brief', io.env), fs: deps.fs, ...styleFlag(flags.style, io),
@@ -130,7 +130,7 @@ async function runExplain(file: string, flags: { json?: boolean; lenient?: boole
   const result = await renderFile(resolve(io.cwd, file), env, { strict: false, lenient: !!flags.lenient, debug: false, maxBriefBytes: inputLimit('brief', io.env), ...styleFlag(flags.style, io), ...(flags.locale ? { locale: flags.locale } : {}) });
   const diagnostics = relativeFiles(result.diagnostics, io.cwd);
   if (flags.json) {
-    io.stdout(`${printable(JSON.stringify({ form: result.choice?.form ?? null, ok: result.ok, rationale: result.rationale, diagnostics }, null, 2), true)}\n`);
+    io.stdout(`${printable(JSON.stringify({ form: result.choice?.form ?? null, ok: result.ok, rationale: result.rationale, diagnostics, alt: result.scene ? result.scene.alt ?? result.scene.description : null }, null, 2), true)}\n`);
   } else {
     io.stdout(`form: ${result.choice?.form ?? '(none)'}\n`);
     for (const r of result.rationale) io.stdout(`- ${printable(r.decision)}\n    because ${printable(r.rule)}\n`);
@@ -172,6 +172,8 @@ const withCommonFlags = (c: Command) => c
 const withRenderFlags = (c: Command) => withCommonFlags(c)
   .option('-o, --out-dir <dir>', 'write outputs under this folder instead of beside each brief')
   .option('--png', 'also write a PNG beside each SVG')
+  .option('--alt', 'also write the alt text beside each SVG, as <output>.txt')
+  .option('--data', 'also write the numbers drawn beside each SVG, as <output>.csv')
   .option('--outline-text', 'the same as --text outline')
   .option('--text <mode>', 'how the SVG writes text: embed (default: live text, the glyphs used embedded), outline (glyph paths), live (the style\'s font family list)', parseTextMode)
   .option('--id-prefix <p>', 'start every id in each SVG with this, so charts inlined in one page never share an id', parseIdPrefix)
@@ -190,7 +192,7 @@ function program(io: CliIo, env: () => RenderEnv, deps: CliDeps, exit: { code: n
   withRenderFlags(cli.command('render').description('render briefs to SVG (and PNG)').argument('<brief...>', 'brief files (.yaml, .yml, .json), or folders of them'))
     .action(async (files: string[], flags: RenderFlags) => { exit.code = await runRender(expandBriefs(files, io.cwd, deps.listDir), flags, io, env, deps); });
   cli.command('explain').description('say which chart a brief gets and why').argument('<brief>', 'a brief file')
-    .option('--json', 'print JSON: { form, rationale, diagnostics }')
+    .option('--json', 'print JSON: { form, rationale, diagnostics, alt }')
     .option('--lenient', 'explain the lenient render')
     .option(...STYLE_OPTION)
     .addOption(localeOption())

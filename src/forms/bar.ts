@@ -12,6 +12,7 @@ import type { Datum, SceneNode, TextNode } from '../scene/types.js';
 import { barDescription, barNotes, barValueTitle, foldOf, tooltipText } from './bar-text.js';
 import { barGroups, planBar, readableBand, type BarPlan } from './bar-plan.js';
 import type { FormDef } from './types.js';
+import { barAlt, barData } from './bar-alt.js';
 import { inSentence } from '../fields/labels.js';
 
 /** The narrowest bar band drawn, in px; more bars than fit at this step are folded. */
@@ -141,6 +142,8 @@ export const BAR: FormDef<BarPlan, DerivedBars<BarPlan>> = {
   traits: { lengthCoded: true, connectsKey: false, radial: false, coloursCategories: false, axisPerValue: false },
   plan: planBar,
   derive: deriveBarChart,
+  alt: barAlt,
+  data: barData,
   domains: (derived) => domainsOf(derived, derived.query.orientation === 'vertical'),
   room: labelRoom,
   facets: { noun: 'total', value: (derived) => fsum(derived.bars, (b) => b.value), minBand: () => MIN_BAND_PX },

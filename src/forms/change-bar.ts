@@ -9,6 +9,7 @@ import type { SceneNode } from '../scene/types.js';
 import { lineDecisions, type LinePlan } from './line-plan.js';
 import { keyName } from './line-text.js';
 import type { FormDef } from './types.js';
+import { changeBarAlt } from './line-alt.js';
 import { inSentence } from '../fields/labels.js';
 
 /** The narrowest bar drawn, px (as for the bar chart). */
@@ -68,6 +69,7 @@ export const CHANGE_BAR: FormDef<LinePlan, DerivedChanges> = {
     return success({ query: plan, lines: lines.value, changes: changes.value }, lines.diagnostics);
   },
   domains: domainsOf,
+  alt: (d) => changeBarAlt(d.changes, `Bar chart of ${inSentence(title(d))} by ${inSentence(d.query.key.label)}`),
   layout(d, area, ctx) {
     const band = asBand(area.x);
     const value = asLinear(area.y);

@@ -13,6 +13,7 @@ import { noDataNote } from './bar-text.js';
 import { denseItems, planDense, type DenseItems, type DensePlan } from './dense-plan.js';
 import { classLegend } from './colour-classes.js';
 import type { FormDef } from './types.js';
+import { denseAlt, denseData } from './point-alt.js';
 import { inSentence } from '../fields/labels.js';
 
 /** A dense layout's items in drawing order, and the grid they fill. */
@@ -70,6 +71,8 @@ export const DENSE: FormDef<DensePlan, DerivedDense> = {
   plan: planDense,
   derive: deriveDense,
   legend: legendOf,
+  data: (d) => denseData(d.values, d.labels, d.query.key?.name ?? 'item', d.query.value.name),
+  alt: (d) => denseAlt(d.values, d.labels, `Dense pixel layout of ${inSentence(axisTitle(d.query.value, d.query.value.label))}, one cell per item`, d.query.value.format),
   words(d) {
     const value = axisTitle(d.query.value, d.query.value.label);
     const fmt = valueFormatter(Array.from(d.values), labelStyle(d.query.value));

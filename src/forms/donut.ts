@@ -1,4 +1,5 @@
 import { diagnostic, failure, success, type Outcome } from '../diagnostics/diagnostic.js';
+import { shareAlt } from './bar-alt.js';
 import { polar, shareAngles, wedgePath } from '../layout/arc.js';
 import type { BodyMarks } from '../layout/chart.js';
 import { inkOn } from '../layout/ink.js';
@@ -85,6 +86,7 @@ export const DONUT: FormDef<BarPlan, ShareBars> = {
   derive: deriveShares,
   legend,
   layoutBody: layoutDonut,
+  alt: (d) => shareAlt(d, 'Donut chart'),
   words(derived) {
     const name = inSentence(derived.query.key.label);
     const parts = derived.bars.map((b) => `${b.label} ${percentText(b.value, derived.query.key.locale)}`).join(', ');

@@ -9,6 +9,7 @@ import { polyline } from '../svg/path.js';
 import { planGantt, type GanttPlan } from './gantt-plan.js';
 import { thinnedNames } from './gantt-text.js';
 import type { FormDef } from './types.js';
+import { ganttAlt } from './change-alt.js';
 import { withPlan } from './with-plan.js';
 
 /** What a Gantt chart draws: its tasks in order, their dependencies, and its plan. */
@@ -129,4 +130,5 @@ export const GANTT: FormDef<GanttPlan, DerivedGantt> = {
   domains: domainsOf,
   layout: layoutGantt,
   words,
+  alt: (d) => ganttAlt(d.tasks, d.dependencies.length, d.plan.time === 'calendar', (t) => String(timeText(d.plan, t))),
 };

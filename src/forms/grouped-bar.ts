@@ -9,6 +9,7 @@ import { MIN_BAND_PX } from './bar.js';
 import { barValueTitle, noDataNote, tooltipText } from './bar-text.js';
 import { planGroupedBar, type GroupedBarPlan } from './grouped-bar-plan.js';
 import type { FormDef } from './types.js';
+import { groupedBarAlt } from './bar-alt.js';
 import { inSentence } from '../fields/labels.js';
 
 type Derived = DerivedGroupedBars<GroupedBarPlan>;
@@ -53,11 +54,17 @@ function barRect(derived: Derived, bar: GroupedBar, area: PlotArea, ctx: LayoutC
     : { kind: 'rect', id, role: 'bar', datum, tooltip, x: low, y: b0, width: length, height: thickness, fill };
 }
 
+/** What a grouped bar chart compares: value, key and group, and how many keys and groups. */
+function groupedWhat(derived: Derived): string {
+  const plan = derived.query;
+  return `Grouped bar chart of ${inSentence(barValueTitle(plan))} by ${inSentence(plan.key.label)} and ${inSentence(plan.group.label)}, ${derived.keys.length} keys × ${plan.groups.length} groups`;
+}
+
 /** One sentence for screen readers: what is compared, how many keys and groups, and the largest bar. */
 function describe(derived: Derived): string {
   const plan = derived.query;
   const fmt = valueFormatter(derived.bars.map((b) => b.value), labelStyle(plan.value, plan.key));
-  const what = `Grouped bar chart of ${inSentence(barValueTitle(plan))} by ${inSentence(plan.key.label)} and ${inSentence(plan.group.label)}, ${derived.keys.length} keys × ${plan.groups.length} groups`;
+  const what = groupedWhat(derived);
   const top = derived.bars.reduce<GroupedBar | undefined>((a, b) => (!a || b.value > a.value ? b : a), undefined);
   return top ? `${what}: largest ${top.key}, ${top.group} (${fmt(top.value)}).` : `${what}.`;
 }
@@ -73,6 +80,7 @@ export const GROUPED_BAR: FormDef<GroupedBarPlan, Derived> = {
   traits: { lengthCoded: true, connectsKey: false, radial: false, coloursCategories: true, axisPerValue: false },
   plan: planGroupedBar,
   derive: (table, plan, ctx) => deriveGroupedBars(table, plan, (keys) => capacity(plan, keys, ctx)),
+  alt: (derived) => groupedBarAlt(derived.bars, groupedWhat(derived), derived.query.value?.format),
   domains: (derived) => domainsOf(derived.query, derived.keys, extentOf(derived.bars)),
   facets: { noun: 'total', value: (derived) => fsum(derived.bars, (b) => b.value), minBand: (derived) => derived.query.groups.length * MIN_BAND_PX },
   layout(derived, area, ctx) {

@@ -12,6 +12,7 @@ import type { Decision } from '../choose/types.js';
 import type { SceneNode } from '../scene/types.js';
 import { planGroups, type GroupsPlan } from './distribution-plan.js';
 import type { FormDef } from './types.js';
+import { groupsAlt } from './distribution-alt.js';
 import { inSentence } from '../fields/labels.js';
 
 /** The numbers a strip or box chart draws: each group's sorted values and box numbers, in order. */
@@ -94,5 +95,6 @@ export function groupsForm(spec: GroupsFormSpec): FormDef<GroupsPlan, DerivedGro
     domains: groupDomains,
     layout: (d, area, ctx) => ({ marks: d.groups.flatMap((g) => spec.marksOf(d, g, area, ctx)), labels: [], diagnostics: [] }),
     words: (d) => groupWords(d, spec.title, spec.how),
+    alt: (d) => groupsAlt(d, spec.title),
   };
 }

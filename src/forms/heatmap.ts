@@ -14,6 +14,7 @@ import { dendrogramPaths, rasterCells, vectorCells } from './heatmap-marks.js';
 import { matrixOf, planHeatmap, type HeatmapPlan } from './heatmap-plan.js';
 import { classLegend } from './colour-classes.js';
 import type { FormDef } from './types.js';
+import { heatmapAlt, heatmapData } from './heatmap-alt.js';
 import { inSentence } from '../fields/labels.js';
 
 const byCodePoint = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
@@ -94,6 +95,8 @@ export const HEATMAP: FormDef<HeatmapPlan, DerivedHeatmap> = {
   plan: planHeatmap,
   derive: deriveHeatmap,
   legend: legendOf,
+  data: heatmapData,
+  alt: heatmapAlt,
   words(d, ctx) {
     const value = axisTitle(d.query.value, d.query.value.label);
     const [nr, nc] = [d.matrix.rows.length, d.matrix.columns.length];

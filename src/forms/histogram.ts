@@ -8,7 +8,9 @@ import { labelStyle, numberFormatIn, valueFormatter } from '../layout/number-for
 import { asLinear } from '../layout/scales.js';
 import type { SceneNode } from '../scene/types.js';
 import { histogramBins, histogramValues, planHistogram, type HistogramPlan } from './histogram-plan.js';
+import { boxStats, type BoxStats } from '../derive/quantile.js';
 import type { FormDef } from './types.js';
+import { histogramAlt } from './distribution-alt.js';
 import { inSentence } from '../fields/labels.js';
 
 /** The numbers a histogram draws: its bins, how many values they hold, and how many were left out. */
@@ -19,6 +21,8 @@ export interface DerivedHistogram {
   n: number;
   /** Rows with a missing or non-finite value, left out. */
   missing: number;
+  /** Median and quartiles of the values binned (for the alt text). Default: none. */
+  stats?: BoxStats;
 }
 
 const count = format(',d');
@@ -81,7 +85,7 @@ export const HISTOGRAM: FormDef<HistogramPlan, DerivedHistogram> = {
         field: plan.value.name, found: `${sorted[0]} to ${sorted[sorted.length - 1]}`, hint: 'rescale the values (e.g. to thousands, or as differences from a reference), or use `intent: compare` to show them one by one',
       })]);
     }
-    return success({ query: plan, bins, n: sorted.length, missing }, diagnostics);
+    return success({ query: plan, bins, n: sorted.length, missing, stats: boxStats(sorted) }, diagnostics);
   },
   domains: domainsOf,
   layout(d, area, ctx: LayoutContext) {
@@ -97,4 +101,5 @@ export const HISTOGRAM: FormDef<HistogramPlan, DerivedHistogram> = {
     return { marks, labels: [], diagnostics: [] };
   },
   words,
+  alt: histogramAlt,
 };

@@ -9,6 +9,7 @@ import { planIndex, type IndexPlan } from './index-plan.js';
 import { lineChart } from './line-chart.js';
 import { keyName, lastPresent } from './line-text.js';
 import type { FormDef } from './types.js';
+import { lineAlt } from './line-alt.js';
 
 type Derived = DerivedIndex<IndexPlan>;
 
@@ -56,6 +57,7 @@ export const INDEX_LINE: FormDef<IndexPlan, Derived> = {
     const indexed = indexLines(lines.value, table, plan.base, plan.as, (x) => keyName(lines.value, x));
     return indexed.ok ? { ...indexed, diagnostics: [...lines.diagnostics, ...indexed.diagnostics] } : failure([...lines.diagnostics, ...indexed.diagnostics]);
   },
+  alt: (d) => lineAlt(d, 'Index line chart', indexTitle(d)),
   ...lineChart<Derived>('index-line', {
     noun: 'Index line chart',
     valueTitle: indexTitle,

@@ -3,6 +3,7 @@ import { lineChart } from './line-chart.js';
 import { planLine, type LinePlan } from './line-plan.js';
 import { lineValueTitle } from './line-text.js';
 import type { FormDef } from './types.js';
+import { lineAlt } from './line-alt.js';
 
 /** The value extent a line's axis covers: the data's, widened to zero unless the plan leaves zero out. */
 function valueExtent(derived: DerivedLines<LinePlan>): [number, number] {
@@ -22,6 +23,7 @@ export const LINE: FormDef<LinePlan, DerivedLines<LinePlan>> = {
   traits: { lengthCoded: false, connectsKey: true, radial: false, coloursCategories: false, axisPerValue: false },
   plan: planLine,
   derive: (table, plan) => deriveLines(table, plan),
+  alt: (d) => lineAlt(d, 'Line chart', lineValueTitle(d.query)),
   ...lineChart<DerivedLines<LinePlan>>('line', { noun: 'Line chart', valueTitle: (d) => lineValueTitle(d.query), valueExtent }),
   name: 'line',
 };

@@ -1,4 +1,5 @@
 import { success, type Outcome } from '../diagnostics/diagnostic.js';
+import { shareAlt, stackAlt } from './bar-alt.js';
 import { deriveStacks } from '../derive/stacks.js';
 import type { CartesianDomains, FormMarks, FormWords, LabelRoom, LayoutContext, PlotArea, ScaleProbe } from '../layout/kit-types.js';
 import type { BarPlan } from './bar-plan.js';
@@ -50,5 +51,6 @@ export const NORMALIZED_BAR: FormDef<NormalizedPlan, NormalizedDerived> = {
   domains: (d, ctx): CartesianDomains => (d.kind === 'stacks' ? stackDomains(d.stacks, ctx) : BARS.domains(d.shares, ctx)),
   room: (d, probe: ScaleProbe, ctx) => (d.kind === 'stacks' ? NO_ROOM : BARS.room!(d.shares, probe, ctx)),
   layout: (d, area: PlotArea, ctx): FormMarks => (d.kind === 'stacks' ? layoutStacks(d.stacks, area, ctx) : layoutShares(d.shares, area, ctx)),
+  alt: (d) => (d.kind === 'stacks' ? stackAlt(d.stacks) : shareAlt(d.shares, 'Bar chart of shares')),
   words: (d, ctx): FormWords => (d.kind === 'stacks' ? stackWords(d.stacks) : BARS.words(d.shares, ctx)),
 };

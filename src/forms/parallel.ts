@@ -11,6 +11,7 @@ import type { AxisInfo, Box, SceneNode, TextNode } from '../scene/types.js';
 import { polyline } from '../svg/path.js';
 import { completeItems, planParallel, type ParallelPlan } from './parallel-plan.js';
 import type { FormDef } from './types.js';
+import { parallelAlt } from './relation-alt.js';
 
 /** The items and each drawn axis's extent, attributes in drawn order. */
 export interface DerivedParallel {
@@ -132,6 +133,7 @@ export const PARALLEL: FormDef<ParallelPlan, DerivedParallel> = {
     return items.ok ? success({ plan, items: items.value, extents: extentsOf(plan, items.value) }, items.diagnostics) : items;
   },
   layoutBody: layoutParallel,
+  alt: (derived) => parallelAlt(derived.plan.attributes, derived.plan.pairs, derived.items.length),
   words(derived) {
     const { plan, items } = derived;
     const strongest = plan.pairs.reduce<ParallelPlan['pairs'][number] | undefined>((a, p) => (a === undefined || Math.abs(p.r) > Math.abs(a.r) ? p : a), undefined);

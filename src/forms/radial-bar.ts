@@ -12,6 +12,7 @@ import { barValueTitle, noDataNote, tooltipText } from './bar-text.js';
 import { barGroups } from './bar-plan.js';
 import { planRadialBar, type RadialBarPlan } from './radial-bar-plan.js';
 import type { FormDef } from './types.js';
+import { radialBarAlt } from './bar-alt.js';
 import { inSentence } from '../fields/labels.js';
 
 /** Inner ring radius as a share of the outer: keeps the narrow inner ends of short bars apart (common practice). */
@@ -160,6 +161,7 @@ export const RADIAL_BAR: FormDef<RadialBarPlan, DerivedBars<RadialBarPlan>> = {
   // A cycle is never folded: every key keeps its place around the circle.
   derive: (table, plan, ctx) => deriveBars(table, plan, () => Number.MAX_SAFE_INTEGER, barGroups(table, plan.key, plan.value, ctx)),
   layoutBody: layoutRadial,
+  alt: radialBarAlt,
   words(derived) {
     const valueTitle = barValueTitle(derived.query);
     const fmt = valueFormatter(derived.bars.map((b) => b.value), labelStyle(derived.query.value, derived.query.key));

@@ -15,6 +15,7 @@ import { completeItems } from './parallel-plan.js';
 import { planScatterMatrix, type ScatterMatrixPlan } from './scatter-matrix-plan.js';
 import { clearAlong, tickRow } from './scatter-matrix-ticks.js';
 import type { FormDef } from './types.js';
+import { scatterMatrixAlt } from './relation-alt.js';
 
 /** The items, each one's class (when coloured), and each attribute's extent. */
 export interface DerivedMatrix {
@@ -152,6 +153,7 @@ export const SCATTER_MATRIX: FormDef<ScatterMatrixPlan, DerivedMatrix> = {
     return { kind: 'categorical', field: derived.plan.color.name, title: derived.plan.color.label, entries: derived.levels.map((l) => ({ label: l, fill: fills.get(l)! })) };
   },
   layoutBody: layoutMatrix,
+  alt: (derived) => scatterMatrixAlt(derived.plan.attributes, derived.items),
   words(derived) {
     const p = derived.plan.attributes.length;
     return {

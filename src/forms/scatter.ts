@@ -6,6 +6,7 @@ import { binMarks, fitMark, pointMarks } from './scatter-marks.js';
 import { planScatter, scatterDomains, type ScatterPlan } from './scatter-plan.js';
 import { scatterWords } from './scatter-text.js';
 import type { FormDef } from './types.js';
+import { scatterAlt } from './relation-alt.js';
 
 /** The legends of a derived scatter: the density's count classes, or the points' colours, shapes and sizes. */
 function legendsOf(derived: DerivedScatter, style: Parameters<typeof pointLegends>[1]): LegendSpec[] {
@@ -35,4 +36,5 @@ export const SCATTER: FormDef<ScatterPlan, DerivedScatter> = {
     return { marks: [...marks, ...fitMark(derived, area, ctx)], labels: [], diagnostics: [] };
   },
   words: scatterWords,
+  alt: scatterAlt,
 };

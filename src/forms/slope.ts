@@ -9,6 +9,7 @@ import { segment } from '../svg/path.js';
 import { endLabels, type EndSpec } from './slope-labels.js';
 import { planSlope, type SlopePlan } from './slope-plan.js';
 import type { FormDef } from './types.js';
+import { slopeAlt } from './change-alt.js';
 import { withPlan } from './with-plan.js';
 import { inSentence } from '../fields/labels.js';
 
@@ -159,4 +160,5 @@ export const SLOPE: FormDef<SlopePlan, DerivedSlope> = {
   domains: domainsOf,
   layout: layoutSlope,
   words,
+  alt: (d) => slopeAlt(d.items, d.ends, d.plan.query.item.label, valueTitle(d.plan.query), valueField(d.plan.query).format),
 };

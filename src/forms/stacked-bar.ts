@@ -4,6 +4,7 @@ import { layoutStacks, stackDomains } from './stack-layout.js';
 import { planStacks, type StackPlan } from './stack-plan.js';
 import { stackWords, type StackDerived } from './stack-text.js';
 import type { FormDef } from './types.js';
+import { stackAlt } from './bar-alt.js';
 
 /**
  * Stacked bars of absolute values: one bar per group from a shared zero, its parts end to end
@@ -19,4 +20,5 @@ export const STACKED_BAR: FormDef<StackPlan, StackDerived> = {
   domains: stackDomains,
   layout: layoutStacks,
   words: stackWords,
+  alt: stackAlt,
 };

@@ -13,6 +13,7 @@ import { layerCommands, streamBoundaries } from './stream-geometry.js';
 import { layerLabels } from './stream-labels.js';
 import { planStream, streamGroups, type StreamPlan } from './stream-plan.js';
 import type { FormDef } from './types.js';
+import { streamAlt } from './change-alt.js';
 import { inSentence } from '../fields/labels.js';
 
 type Derived = DerivedStream<StreamPlan>;
@@ -113,6 +114,7 @@ export const STREAM: FormDef<StreamPlan, Derived> = {
   derive: (table, plan, ctx) => deriveStream(table, plan, streamGroups(table, plan.time, plan.series, plan.value, ctx)),
   legend: legendOf,
   layoutBody: layoutStream,
+  alt: streamAlt,
   words(derived) {
     const { time, series, value } = derived.query;
     const valueTitle = axisTitle(value, value.label);

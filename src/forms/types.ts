@@ -4,6 +4,8 @@ import type { Outcome } from '../diagnostics/diagnostic.js';
 import type { ChartForm } from '../layout/chart.js';
 import type { LayoutContext } from '../layout/kit-types.js';
 import type { Table } from '../table/types.js';
+import type { AltText } from './alt-words.js';
+import type { DataTable } from '../scene/types.js';
 
 /** What every form has: its name, traits, plan and derivation. */
 export interface FormCore<Plan, Derived> {
@@ -13,6 +15,14 @@ export interface FormCore<Plan, Derived> {
   traits: FormTraits;
   plan(input: PlanInput): Outcome<Planned<Plan>>;
   derive(table: Table, plan: Plan, ctx: LayoutContext): Outcome<Derived>;
+  /**
+   * The chart's alt text: what it is and its main reading, numbers written as its labels write
+   * them. Optional in the type so a form can be drafted without it; every registered form has one
+   * (test/forms/alt-text.test.ts).
+   */
+  alt?(derived: Derived, ctx: LayoutContext): AltText;
+  /** The numbers drawn, as a table, for a form whose marks may carry no datum (a raster). Default: read from the scene's marks. */
+  data?(derived: Derived): DataTable;
 }
 
 /**

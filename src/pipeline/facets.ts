@@ -7,6 +7,7 @@ import type { LayoutContext } from '../layout/kit-types.js';
 import type { Scene } from '../scene/types.js';
 import type { Table } from '../table/types.js';
 import { PanelMemo } from './panel-memo.js';
+import { facetAlt } from './alt.js';
 
 /** A small-multiples render: its scene (when it could be drawn), diagnostics, and the decisions made while laying it out. */
 export interface FacetedChart {
@@ -65,5 +66,6 @@ export function renderFacets(form: AnyForm, table: Table, choice: Choice, ctx: L
   }
   const ordered = orderPanels(panels, facet.order);
   const laid = layoutFacets(form, whole.value, ordered, { field: facet.field.name, label: facet.field.label, context: facet.context }, ctx);
-  return { scene: laid.scene, diagnostics: once([...diagnostics, ...laid.diagnostics]), decisions: gridDecisions(laid.scene, ordered.length) };
+  const scene = facetAlt(laid.scene, form, whole.value, ordered, { field: facet.field.name, label: facet.field.label }, ctx);
+  return { scene, diagnostics: once([...diagnostics, ...laid.diagnostics]), decisions: gridDecisions(laid.scene, ordered.length) };
 }

@@ -22,6 +22,7 @@ import { readTable } from '../table/load.js';
 import type { Table } from '../table/types.js';
 import type { RenderEnv } from './env.js';
 import { renderFacets } from './facets.js';
+import { chartAlt } from './alt.js';
 import { smallestFrame, withSmallestFrame, type FrameSize } from './smallest-frame.js';
 import { VOCABULARY } from './vocabulary.js';
 
@@ -201,7 +202,7 @@ function renderCore(inputs: RenderInputs, measure: TextMeasurer, opts: { lenient
   const laid = layoutChart(form, derived.value, ctx);
   all.push(...locate(laid.diagnostics));
   lap('layout');
-  return { brief, choice: choice.value, rationale, scene: laid.scene, diagnostics: all };
+  return { brief, choice: choice.value, rationale, scene: chartAlt(laid.scene, form, derived.value, ctx), diagnostics: all };
 }
 
 /** The text mode of a render: the request's, else the style's, else embed. */

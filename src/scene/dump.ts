@@ -44,6 +44,8 @@ export interface DumpText extends Box {
  * project: extend it, never rename its keys.
  */
 export interface SceneDump extends Pick<Scene, 'form' | 'width' | 'height' | 'background' | 'title' | 'description' | 'plot' | 'axes' | 'panels' | 'legends'> {
+  /** The alt text (the SVG's <desc>): the scene's alt, or its description when it has none. */
+  alt: string;
   marks: DumpMark[];
   texts: DumpText[];
 }
@@ -102,7 +104,7 @@ export function dumpScene(scene: Scene): SceneDump {
   flatten(scene.root, marks, texts);
   return {
     form: scene.form, width: scene.width, height: scene.height, background: scene.background,
-    title: scene.title, description: scene.description, plot: roundBox(scene.plot), marks,
+    title: scene.title, description: scene.description, alt: scene.alt ?? scene.description, plot: roundBox(scene.plot), marks,
     axes: scene.axes.map(roundAxis),
     texts,
     panels: scene.panels.map(roundPanel),

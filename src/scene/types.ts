@@ -182,6 +182,12 @@ export interface LegendInfo {
   box: Box;
 }
 
+/** The numbers a chart draws as a table: columns in first-seen order, one row per drawn datum. */
+export interface DataTable {
+  columns: string[];
+  rows: Datum[];
+}
+
 /** A finished chart in pixels: everything the SVG writer needs and nothing it must decide. */
 export interface Scene {
   form: string;
@@ -191,6 +197,10 @@ export interface Scene {
   /** Accessible name (the brief title) and generated one-sentence description. */
   title: string;
   description: string;
+  /** Alt text: what the chart is and its main reading, with its notes (the SVG's <desc>); the brief's `description` when given. Default: none (the description stands in). */
+  alt?: string;
+  /** The numbers drawn, for a form whose marks carry no datum of their own (a raster). Default: read from the marks. */
+  data?: DataTable;
   root: GroupNode;
   /** The first panel's axes (every panel's are in `panels`). */
   axes: AxisInfo[];

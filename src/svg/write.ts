@@ -125,7 +125,7 @@ export function writeSvg(scene: Scene, mode: TextMode, options: SvgOptions = {})
   const w = fmt(scene.width);
   const h = fmt(scene.height);
   const title = escapeXml(scene.title);
-  const desc = escapeXml(scene.description);
+  const desc = escapeXml(scene.alt ?? scene.description);
   // The ids that elements refer to are the title, the description and (with outlines) glyphs,
   // whose ids name their weight and code point. Hashing those texts and the font family means
   // two charts whose prefixes collide point at identical content.
