@@ -81,7 +81,8 @@ function filesFor(path: string, rules: OutputRules): PlannedFile[] {
   const files: PlannedFile[] = [{ path: `${stem}.svg`, kind: 'svg' }];
   if (extname(path).toLowerCase() === '.png' || rules.png) files.push({ path: `${stem}.png`, kind: 'png' });
   if (rules.alt) files.push({ path: `${stem}.txt`, kind: 'alt' });
-  if (rules.data) files.push({ path: `${stem}.csv`, kind: 'data' });
+  // .data.csv, not .csv: a brief's own data file is usually named like the brief (piers.yaml reads piers.csv).
+  if (rules.data) files.push({ path: `${stem}.data.csv`, kind: 'data' });
   return files;
 }
 
@@ -89,7 +90,7 @@ function filesFor(path: string, rules: OutputRules): PlannedFile[] {
  * The files one brief renders to, or the problems with its `output:` names. The brief's
  * `output` names them (relative to the brief, or to `outDir`); by default the brief's own name
  * with .svg. The SVG is always written; a .png output or `png` adds the PNG beside it under the
- * same name, and `alt` and `data` a .txt and a .csv. Names must stay under the brief's folder (or `outDir`) unless `allowOutside`.
+ * same name, and `alt` and `data` a .txt and a .data.csv. Names must stay under the brief's folder (or `outDir`) unless `allowOutside`.
  */
 export function plannedOutputs(briefFile: string, outputs: string[], rules: OutputRules): { files: PlannedFile[]; problems: Diagnostic[] } {
   const base = resolve(rules.outDir ?? dirname(briefFile));

@@ -15,15 +15,15 @@ describe('--alt and --data', () => {
     const dir = workspace();
     const cli = io(dir);
     expect(await runCli(['render', 'piers.yaml', '-o', 'out', '--alt', '--data', '--report', 'run.json'], cli.io)).toBe(EXIT.OK);
-    expect(files(join(dir, 'out'))).toEqual(['piers.csv', 'piers.svg', 'piers.txt']);
+    expect(files(join(dir, 'out'))).toEqual(['piers.data.csv', 'piers.svg', 'piers.txt']);
     expect(files(dir)).toEqual(['gaps.csv', 'out', 'piers.csv', 'piers.yaml', 'run.json', 'typo.yaml', 'warn.yaml']);
-    expect(cli.out().trim().split('\n')).toEqual(['out/piers.svg', 'out/piers.txt', 'out/piers.csv']);
+    expect(cli.out().trim().split('\n')).toEqual(['out/piers.svg', 'out/piers.txt', 'out/piers.data.csv']);
     const report = readFileSync(join(dir, 'run.json'), 'utf8');
-    for (const f of ['piers.svg', 'piers.txt', 'piers.csv']) expect(report).toContain(join('out', f));
+    for (const f of ['piers.svg', 'piers.txt', 'piers.data.csv']) expect(report).toContain(join('out', f));
     const alt = readFileSync(join(dir, 'out', 'piers.txt'), 'utf8');
     expect(alt).toBe('Bar chart of crossings by pier, 3 bars: largest North (212), smallest South (64).\n');
     expect(readFileSync(join(dir, 'out', 'piers.svg'), 'utf8')).toContain(`>${alt.trim()}</desc>`);
-    expect(readFileSync(join(dir, 'out', 'piers.csv'), 'utf8')).toBe('pier,crossings,rows_combined\r\nNorth,212,1\r\nEast,131,1\r\nSouth,64,1\r\n');
+    expect(readFileSync(join(dir, 'out', 'piers.data.csv'), 'utf8')).toBe('pier,crossings,rows_combined\r\nNorth,212,1\r\nEast,131,1\r\nSouth,64,1\r\n');
   });
 
   it('follow the brief\'s output names under -o, for every output, and only there', async () => {
@@ -32,7 +32,7 @@ describe('--alt and --data', () => {
     const out = join(dir, 'out');
     mkdirSync(out);
     expect(await runCli(['render', 'named.yaml', '-o', 'out', '--alt', '--data'], io(dir).io)).toBe(EXIT.OK);
-    expect(files(join(out, 'figs'))).toEqual(['a.csv', 'a.svg', 'a.txt', 'b.csv', 'b.png', 'b.svg', 'b.txt']);
+    expect(files(join(out, 'figs'))).toEqual(['a.data.csv', 'a.svg', 'a.txt', 'b.data.csv', 'b.png', 'b.svg', 'b.txt']);
     expect(files(dir)).not.toContain('named.txt');
   });
 
@@ -42,13 +42,12 @@ describe('--alt and --data', () => {
     expect(files(dir).filter((f) => f.startsWith('piers.'))).toEqual(['piers.csv', 'piers.svg', 'piers.yaml']);
   });
 
-  it('a --data file that would overwrite the brief\'s own data file is refused, and nothing is written', async () => {
+  it('a --data file beside the brief never overwrites the brief\'s own data file of the same name (it is named .data.csv)', async () => {
     const dir = workspace();
-    // piers.yaml's output piers.svg puts its data beside it as piers.csv: the input it reads.
     const cli = io(dir);
-    expect(await runCli(['render', 'piers.yaml', '--data'], cli.io)).toBe(EXIT.FAILED);
-    expect(cli.err()).toContain('output.overwrites-input');
+    expect(await runCli(['render', 'piers.yaml', '--data'], cli.io)).toBe(EXIT.OK);
     expect(readFileSync(join(dir, 'piers.csv'), 'utf8')).toBe('pier,crossings\nNorth,212\nSouth,64\nEast,131\n');
+    expect(readFileSync(join(dir, 'piers.data.csv'), 'utf8')).toMatch(/^pier,crossings/);
   });
 
   it('explain --json carries the alt text', async () => {
@@ -99,7 +98,7 @@ describe('the data CSV', () => {
     const out = join(dir, 'out');
     const cli = io(dir);
     expect(await runCli(['render', 'many.yaml', '-o', 'out', '--data'], cli.io), cli.err()).toBe(EXIT.OK);
-    const parsed = csvParse(readFileSync(join(out, 'many.csv'), 'utf8').replaceAll('\r\n', '\n'));
+    const parsed = csvParse(readFileSync(join(out, 'many.data.csv'), 'utf8').replaceAll('\r\n', '\n'));
     expect(parsed.columns).toEqual(['key', 'value', 'rows_combined', 'folded_keys']);
     const others = parsed.filter((r) => r.folded_keys !== '');
     expect(others).toHaveLength(1);
