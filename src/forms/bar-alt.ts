@@ -1,7 +1,7 @@
 import { fsum } from 'd3-array';
 import type { DerivedBars } from '../derive/bars.js';
 import { inSentence } from '../fields/labels.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, type NumberStyle, valueFormatter } from '../layout/number-format.js';
 import type { DataTable } from '../scene/types.js';
 import { count, extremes, extremesReading, type AltText } from './alt-words.js';
 import { barValueTitle } from './bar-text.js';
@@ -24,7 +24,7 @@ export function barAlt(derived: DerivedBars<BarPlan>): AltText {
 /** Radial bar chart: the cycle's peak and trough, in cycle order. */
 export function radialBarAlt(derived: DerivedBars): AltText {
   const valueTitle = barValueTitle(derived.query);
-  const fmt = valueFormatter(derived.bars.map((b) => b.value), derived.query.value?.format);
+  const fmt = valueFormatter(derived.bars.map((b) => b.value), labelStyle(derived.query.value));
   const what = `Radial bar chart of ${inSentence(valueTitle)} by ${inSentence(derived.query.key.label)}, ${count(derived.bars.length, 'bar')} around a circle in cycle order`;
   return { what, reading: extremesReading(derived.bars, fmt, ['peak at', 'lowest at']) };
 }
@@ -41,7 +41,7 @@ export function shareAlt(derived: DerivedBars, noun: string): AltText {
 interface GroupedBarLike { key: string; group: string; value: number }
 
 /** Grouped bar chart: the largest and smallest bar, each named by key and group. */
-export function groupedBarAlt(bars: readonly GroupedBarLike[], what: string, format: string | undefined): AltText {
+export function groupedBarAlt(bars: readonly GroupedBarLike[], what: string, format: NumberStyle | undefined): AltText {
   const fmt = valueFormatter(bars.map((b) => b.value), format);
   return { what, reading: extremesReading(bars.map((b) => ({ label: `${b.key}, ${b.group}`, value: b.value })), fmt) };
 }
@@ -60,7 +60,7 @@ export function stackAlt(derived: StackDerived): AltText {
     const most = stacks.reduce((a, b) => (shareOf(b) > shareOf(a) ? b : a));
     return { what, reading: `the largest part overall is ${strongest.label} (${percentText(all ? strongest.value / all : 0)} of all), its share greatest in ${most.group} (${percentText(shareOf(most))})` };
   }
-  const fmt = valueFormatter([...stacks.map((s) => s.total), strongest.value], query.value?.format);
+  const fmt = valueFormatter([...stacks.map((s) => s.total), strongest.value], labelStyle(query.value));
   const bars = extremesReading(stacks.map((s) => ({ label: s.group, value: s.total })), fmt, ['largest total', 'smallest']);
   return { what, reading: `the largest part overall is ${strongest.label} (${fmt(strongest.value)}, ${percentText(all ? strongest.value / all : 0)} of all); ${bars}` };
 }

@@ -4,7 +4,7 @@ import type { SlopeItem } from '../derive/slopes.js';
 import type { Task } from '../derive/tasks.js';
 import { inSentence } from '../fields/labels.js';
 import { axisTitle } from '../layout/axis.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, type NumberStyle, valueFormatter } from '../layout/number-format.js';
 import { count, extremes, percentChange, someNames, type AltText } from './alt-words.js';
 import { percentText } from './stack-text.js';
 
@@ -15,7 +15,7 @@ function move(item: SlopeItem, fmt: (n: number) => string): string {
 }
 
 /** Slope chart: how many went up and down, the biggest riser and the biggest faller (by the change in value). */
-export function slopeAlt(items: readonly SlopeItem[], ends: [string, string], itemLabel: string, valueTitle: string, format: string | undefined): AltText {
+export function slopeAlt(items: readonly SlopeItem[], ends: [string, string], itemLabel: string, valueTitle: string, format: NumberStyle | undefined): AltText {
   const fmt = valueFormatter(items.flatMap((i) => [i.before, i.after]), format);
   const up = items.filter((i) => i.after > i.before).length;
   const down = items.filter((i) => i.after < i.before).length;
@@ -41,7 +41,7 @@ export function streamAlt(d: DerivedStream): AltText {
   const top = extremes(totals)?.top;
   const thickness = d.keys.map((k, i) => ({ label: k.label, value: fsum(d.layers, (l) => l.values[i] ?? 0) }));
   const thickest = extremes(thickness)?.top;
-  const fmt = valueFormatter(thickness.map((t) => t.value), value.format);
+  const fmt = valueFormatter(thickness.map((t) => t.value), labelStyle(value));
   const reading = [top && `the strongest in total is ${top.label} (${percentText(all ? top.value / all : 0)} of all)`, thickest && `the stream is thickest at ${thickest.label} (${fmt(thickest.value)} in all)`].filter(Boolean).join('; ');
   return { what, reading };
 }

@@ -72,7 +72,7 @@ export const DENSE: FormDef<DensePlan, DerivedDense> = {
   derive: deriveDense,
   legend: legendOf,
   data: (d) => denseData(d.values, d.labels, d.query.key?.name ?? 'item', d.query.value.name),
-  alt: (d) => denseAlt(d.values, d.labels, `Dense pixel layout of ${inSentence(axisTitle(d.query.value, d.query.value.label))}, one cell per item`, d.query.value.format),
+  alt: (d) => denseAlt(d.values, d.labels, `Dense pixel layout of ${inSentence(axisTitle(d.query.value, d.query.value.label))}, one cell per item`, labelStyle(d.query.value)),
   words(d) {
     const value = axisTitle(d.query.value, d.query.value.label);
     const fmt = valueFormatter(Array.from(d.values), labelStyle(d.query.value));

@@ -1,7 +1,7 @@
 import { max } from 'd3-array';
 import type { BoxStats } from '../derive/quantile.js';
 import { inSentence } from '../fields/labels.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, type NumberStyle, valueFormatter } from '../layout/number-format.js';
 import { count, type AltText } from './alt-words.js';
 import type { DerivedGroups } from './groups.js';
 import type { DerivedHistogram } from './histogram.js';
@@ -12,7 +12,7 @@ function centreAndSpread(stats: BoxStats, fmt: (n: number) => string, unit: stri
 }
 
 /** The numbers a distribution's alt text writes, written alike. */
-function statsFormatter(stats: readonly BoxStats[], format: string | undefined): (n: number) => string {
+function statsFormatter(stats: readonly BoxStats[], format: NumberStyle | undefined): (n: number) => string {
   return valueFormatter(stats.flatMap((s) => [s.median, s.q1, s.q3, s.q3 - s.q1]), format);
 }
 
@@ -21,10 +21,10 @@ export function histogramAlt(d: DerivedHistogram): AltText {
   const value = d.query.value;
   const unit = value.unit ? ` ${value.unit}` : '';
   const { edges, counts } = d.bins;
-  const edgeFmt = valueFormatter([d.bins.width, ...edges], value.format);
+  const edgeFmt = valueFormatter([d.bins.width, ...edges], labelStyle(value));
   const top = counts.indexOf(max(counts) ?? 0);
   const what = `Histogram of ${inSentence(value.label)}, ${count(d.n, 'value')} in ${count(counts.length, 'bin')} of ${edgeFmt(d.bins.width)}${unit} from ${edgeFmt(edges[0]!)} to ${edgeFmt(edges[edges.length - 1]!)}${unit}`;
-  const centre = d.stats ? `${centreAndSpread(d.stats, statsFormatter([d.stats], value.format), unit)}; ` : '';
+  const centre = d.stats ? `${centreAndSpread(d.stats, statsFormatter([d.stats], labelStyle(value)), unit)}; ` : '';
   return { what, reading: `${centre}the fullest bin, ${edgeFmt(edges[top]!)} to ${edgeFmt(edges[top + 1]!)}, holds ${count(counts[top]!, 'value')}` };
 }
 
@@ -32,7 +32,7 @@ export function histogramAlt(d: DerivedHistogram): AltText {
 export function groupsAlt(d: DerivedGroups, noun: string): AltText {
   const { key, value } = d.query;
   const unit = value.unit ? ` ${value.unit}` : '';
-  const fmt = statsFormatter(d.groups.map((g) => g.stats), value.format);
+  const fmt = statsFormatter(d.groups.map((g) => g.stats), labelStyle(value));
   const what = `${noun} of ${inSentence(value.label)} by ${inSentence(key.label)}, ${count(d.groups.length, 'group')}, ${count(d.n, 'value')}`;
   if (d.groups.length === 1) return { what, reading: centreAndSpread(d.groups[0]!.stats, fmt, unit) };
   const byMedian = [...d.groups].sort((a, b) => b.stats.median - a.stats.median);

@@ -117,7 +117,7 @@ export const DOT: FormDef<DotPlan, DerivedDots> = {
   traits: { lengthCoded: false, connectsKey: false, radial: false, coloursCategories: false, axisPerValue: false, sharedAxisValues: 2 },
   plan: planDot,
   derive: deriveDots,
-  alt: (d) => dotAlt(d.rows, `${d.plan.values.length === 2 ? 'Dumbbell' : 'Dot'} plot of ${inSentence(valueTitle(d.plan))} by ${inSentence(d.plan.key.label)}, ${d.rows.length} key${d.rows.length === 1 ? '' : 's'}`, d.plan.values.map((v) => v.label), d.plan.values[0]!.format),
+  alt: (d) => dotAlt(d.rows, `${d.plan.values.length === 2 ? 'Dumbbell' : 'Dot'} plot of ${inSentence(valueTitle(d.plan))} by ${inSentence(d.plan.key.label)}, ${d.rows.length} key${d.rows.length === 1 ? '' : 's'}`, d.plan.values.map((v) => v.label), labelStyle(d.plan.values[0])),
   domains: domainsOf,
   layout: (derived, area, ctx) => ({ marks: derived.rows.flatMap((r) => rowMarks(derived, r, area, ctx)), labels: [], diagnostics: [] }),
   words(derived) {

@@ -80,7 +80,7 @@ export const GROUPED_BAR: FormDef<GroupedBarPlan, Derived> = {
   traits: { lengthCoded: true, connectsKey: false, radial: false, coloursCategories: true, axisPerValue: false },
   plan: planGroupedBar,
   derive: (table, plan, ctx) => deriveGroupedBars(table, plan, (keys) => capacity(plan, keys, ctx)),
-  alt: (derived) => groupedBarAlt(derived.bars, groupedWhat(derived), derived.query.value?.format),
+  alt: (derived) => groupedBarAlt(derived.bars, groupedWhat(derived), labelStyle(derived.query.value)),
   domains: (derived) => domainsOf(derived.query, derived.keys, extentOf(derived.bars)),
   facets: { noun: 'total', value: (derived) => fsum(derived.bars, (b) => b.value), minBand: (derived) => derived.query.groups.length * MIN_BAND_PX },
   layout(derived, area, ctx) {

@@ -1,7 +1,7 @@
 import { clustersAtLargestGap, cutInto } from '../derive/cut-tree.js';
 import { inSentence } from '../fields/labels.js';
 import { axisTitle } from '../layout/axis.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import { count, extremesReading, someNames, type AltText } from './alt-words.js';
 import type { DerivedHeatmap } from './heatmap-layout.js';
 import type { DataTable } from '../scene/types.js';
@@ -43,7 +43,7 @@ export function heatmapAlt(d: DerivedHeatmap): AltText {
   // Every cell tied with an end, so that ties are named (or counted) as such.
   const ends = lo < 0 ? [] : [...cells.keys()].filter((i) => cells[i] === cells[hi] || cells[i] === cells[lo]);
   const labelled = ends.map(cell);
-  const fmt = valueFormatter(labelled.map((c) => c.value), d.query.value.format);
+  const fmt = valueFormatter(labelled.map((c) => c.value), labelStyle(d.query.value));
   const clusters = clusterSentence(d);
   return { what, reading: extremesReading(labelled, fmt, ['highest', 'lowest']), more: clusters ? [clusters] : [] };
 }

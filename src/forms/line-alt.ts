@@ -1,7 +1,7 @@
 import type { DerivedLines, LineSeries } from '../derive/lines.js';
 import type { PeriodChange } from '../derive/period-change.js';
 import { inSentence } from '../fields/labels.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { labelStyle, valueFormatter } from '../layout/number-format.js';
 import { count, extremes, someNames, trendReading, type AltText, type TrendPoint } from './alt-words.js';
 import { keyName } from './line-text.js';
 
@@ -32,7 +32,7 @@ function seriesTrend(derived: DerivedLines, s: LineSeries): SeriesTrend | undefi
 function trends(derived: DerivedLines): { label: string | undefined; text: string }[] {
   const all = derived.series.flatMap((s) => seriesTrend(derived, s) ?? []);
   all.sort((a, b) => b.last.value - a.last.value);
-  const fmt = valueFormatter(all.flatMap((t) => [t.first.value, t.last.value, t.peak.value]), derived.query.value?.format);
+  const fmt = valueFormatter(all.flatMap((t) => [t.first.value, t.last.value, t.peak.value]), labelStyle(derived.query.value));
   // One line needs no name (a panel of small multiples is named by its level).
   const named = all.length > 1;
   return all.map((t) => ({ label: t.label, text: `${named && t.label !== undefined ? `${t.label} ` : ''}${trendReading(t.first, t.last, t.peak, fmt)}` }));

@@ -1,6 +1,6 @@
 import { quantileSorted7 } from '../derive/quantile.js';
 import type { DotRow } from '../derive/dots.js';
-import { valueFormatter } from '../layout/number-format.js';
+import { type NumberStyle, valueFormatter } from '../layout/number-format.js';
 import type { DataTable } from '../scene/types.js';
 import { count, extremes, extremesReading, type AltText } from './alt-words.js';
 
@@ -8,7 +8,7 @@ import { count, extremes, extremesReading, type AltText } from './alt-words.js';
  * Dot plot: the largest and smallest value; a dumbbell (two values per key) also names the
  * widest gap between its two ends.
  */
-export function dotAlt(rows: readonly DotRow[], what: string, names: readonly string[], format: string | undefined): AltText {
+export function dotAlt(rows: readonly DotRow[], what: string, names: readonly string[], format: NumberStyle | undefined): AltText {
   const fmt = valueFormatter(rows.flatMap((r) => r.values.filter((v) => !Number.isNaN(v))), format);
   if (names.length < 2) return { what, reading: extremesReading(rows.map((r) => ({ label: r.label, value: r.values[0]! })), fmt) };
   const ends = rows.flatMap((r) => r.values.map((v, i) => ({ label: `${r.label} (${names[i]})`, value: v })));
@@ -19,7 +19,7 @@ export function dotAlt(rows: readonly DotRow[], what: string, names: readonly st
 }
 
 /** Dense pixel layout: the range (with the items at its ends, when named) and the median. */
-export function denseAlt(values: Float64Array, labels: readonly string[] | undefined, what: string, format: string | undefined): AltText {
+export function denseAlt(values: Float64Array, labels: readonly string[] | undefined, what: string, format: NumberStyle | undefined): AltText {
   const sorted = values.filter((v) => !Number.isNaN(v)).sort();
   const head = `${what}, ${count(values.length, 'item')}`;
   if (sorted.length === 0) return { what: head, reading: '' };

@@ -160,5 +160,5 @@ export const SLOPE: FormDef<SlopePlan, DerivedSlope> = {
   domains: domainsOf,
   layout: layoutSlope,
   words,
-  alt: (d) => slopeAlt(d.items, d.ends, d.plan.query.item.label, valueTitle(d.plan.query), valueField(d.plan.query).format),
+  alt: (d) => slopeAlt(d.items, d.ends, d.plan.query.item.label, valueTitle(d.plan.query), labelStyle(valueField(d.plan.query))),
 };
