@@ -66,7 +66,7 @@ const breathe = () => new Promise<void>((r) => setImmediate(r));
 /** The bytes of each planned file; a PNG is drawn from the outline SVG, made once and reused. */
 async function produceFiles(result: RenderResult & { svg: string; scene: Scene }, plan: BriefPlan, env: RenderEnv, opts: BatchOptions, report: BriefReport): Promise<FileContent[]> {
   let outlines: string | undefined;
-  const outlined = () => (outlines ??= outlineSvg(result.scene, env));
+  const outlined = () => (outlines ??= outlineSvg(result.scene, env, result.style));
   const files: FileContent[] = [];
   for (const p of plan.files) {
     if (p.kind === 'svg') files.push({ path: p.path, data: opts.outlineText ? outlined() : result.svg });

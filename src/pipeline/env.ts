@@ -6,7 +6,10 @@ import type { TableEnv } from '../table/load.js';
 
 /** Everything environmental a render needs, passed in explicitly. */
 export interface RenderEnv {
+  /** The bundled face's measurer (with the fallback faces for characters it lacks). */
   measure: TextMeasurer;
+  /** The measurer for a style: `measure`, unless the style names its own font files or fallbacks. */
+  measureFor(style: Style): TextMeasurer;
   table: TableEnv;
   /** A style preset by name, or a style file relative to the brief. */
   style(name: string, briefFile: string | undefined): Outcome<Style>;

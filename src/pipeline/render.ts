@@ -64,6 +64,8 @@ export interface RenderResult {
   diagnostics: Diagnostic[];
   /** Per-stage times, when the request gave a clock. */
   timings?: StageTiming[];
+  /** The style the chart was drawn in (its fonts draw the outline SVG and the PNG). */
+  style?: Style;
 }
 
 /** Everything a render reads from outside: the brief, its style and its table. */
@@ -206,7 +208,7 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
   if (!loaded.inputs) return finish({ ...(loaded.brief ? { brief: loaded.brief } : {}), rationale: [], diagnostics: loaded.diagnostics });
   let result: Omit<RenderResult, 'ok' | 'timings'>;
   try {
-    result = renderInputs(loaded.inputs, env.measure, { lenient: req.lenient }, watch.lap);
+    result = { ...renderInputs(loaded.inputs, env.measureFor(loaded.inputs.style), { lenient: req.lenient }, watch.lap), style: loaded.inputs.style };
   } catch (e) {
     // Bad input never throws (it is a diagnostic); what does is a defect, reported as one, never a crash.
     return finish({ brief: loaded.inputs.brief, rationale: [], diagnostics: [...loaded.diagnostics, diagnostic('render.internal', `chartwright failed unexpectedly while drawing: ${(e as Error).message}; this is a defect in chartwright`, { file: req.file, hint: 'please report it with the brief and data' })] });
@@ -218,7 +220,7 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
   return finish({ ...result, ...(svg.svg !== undefined ? { svg: svg.svg } : {}), diagnostics: [...diagnostics, ...svg.diagnostics] });
 }
 
-/** The SVG of a scene with text as glyph outlines, as the raster stage draws it. */
-export function outlineSvg(scene: Scene, env: RenderEnv): string {
-  return writeSvg(scene, { kind: 'outlines', set: env.outlines(), measure: env.measure });
+/** The SVG of a scene with text as glyph outlines, as the raster stage draws it, in the faces of the style it was laid out in. */
+export function outlineSvg(scene: Scene, env: RenderEnv, style?: Style): string {
+  return writeSvg(scene, { kind: 'outlines', set: env.outlines(), measure: style ? env.measureFor(style) : env.measure });
 }

@@ -1,0 +1,65 @@
+import type { Weight } from '../style/types.js';
+import { WIDTH_CACHE_MAX_TEXT, type TextMeasurer, type TextRuler } from './measurer.js';
+import { missingCharacters } from './metrics.js';
+import { layoutStackLine, unitsPerEm, type FaceSource, type StackFace, type StackLine } from './stack-layout.js';
+
+/** Lines remembered per weight before the memory starts over. */
+const LINE_CACHE_LIMIT = 20_000;
+
+/** A ruler that measures each asked-for piece again: for the rare lines set from several faces. */
+function sliceRuler(text: string, width: (t: string) => number): TextRuler {
+  const chars = [...text];
+  return {
+    length: chars.length,
+    width: (start, end, suffix) => width(chars.slice(start, end).join('') + (suffix ?? '')),
+    codePoint: (i) => chars[i]!.codePointAt(0)!,
+    slice: (start, end) => chars.slice(start, end).join(''),
+  };
+}
+
+/** The stack's first face for each weight, and for a bundled first face its own (fast) measurer. */
+export interface StackPrimary {
+  faces: Record<Weight, StackFace>;
+  /** The bundled face's measurer: used alone for every line the bundled face draws whole. */
+  bundled?: TextMeasurer;
+}
+
+/** A face's ascender and descender (negative) in its units. */
+function verticalMetrics(f: StackFace): { ascent: number; descent: number } {
+  return f.kind === 'bundled' ? f.face.metrics : f.face;
+}
+
+/**
+ * A measurer over a stack of faces: the first face, then the sources in order, character by
+ * character. A line the bundled first face draws whole is measured exactly as before (no
+ * fontkit, no bidi); any other line is laid out over the stack once and remembered.
+ */
+export function createStackMeasurer(primary: StackPrimary, sources: readonly FaceSource[]): TextMeasurer {
+  const memo: Record<Weight, Map<string, StackLine>> = { regular: new Map(), semibold: new Map() };
+  const line = (text: string, weight: Weight): StackLine => {
+    const cached = memo[weight].get(text);
+    if (cached) return cached;
+    const laid = layoutStackLine(text, primary.faces[weight], sources, weight);
+    if (text.length <= WIDTH_CACHE_MAX_TEXT) {
+      if (memo[weight].size >= LINE_CACHE_LIMIT) memo[weight].clear();
+      memo[weight].set(text, laid);
+    }
+    return laid;
+  };
+  const first = primary.faces;
+  const bundledWhole = (text: string, weight: Weight): boolean => {
+    const f = first[weight];
+    return primary.bundled !== undefined && f.kind === 'bundled' && missingCharacters(f.face, text).length === 0;
+  };
+  const upem = (weight: Weight) => unitsPerEm(first[weight]);
+  const width = (text: string, size: number, weight: Weight) => (bundledWhole(text, weight) ? primary.bundled!.width(text, size, weight) : (line(text, weight).advance * size) / upem(weight));
+  return {
+    width,
+    ruler: (text, size, weight) => (bundledWhole(text, weight) ? primary.bundled!.ruler(text, size, weight) : sliceRuler(text, (t) => width(t, size, weight))),
+    ascent: (size, weight) => (verticalMetrics(first[weight]).ascent * size) / upem(weight),
+    descent: (size, weight) => (-verticalMetrics(first[weight]).descent * size) / upem(weight),
+    missing: (text, weight) => (bundledWhole(text, weight) ? [] : line(text, weight).missing),
+    run: (text, weight) => (bundledWhole(text, weight) ? primary.bundled!.run(text, weight) : { glyphs: line(text, weight).glyphs, unitsPerEm: upem(weight) }),
+    segments: (text, weight) => (bundledWhole(text, weight) ? [{ face: first[weight].ref, text }] : line(text, weight).segments),
+  };
+}
