@@ -1,5 +1,5 @@
 import type { Weight } from '../style/types.js';
-import { WIDTH_CACHE_MAX_TEXT, type TextMeasurer, type TextRuler } from './measurer.js';
+import { createTextMemo, WIDTH_CACHE_MAX_TEXT, type TextMeasurer, type TextMemo, type TextRuler } from './measurer.js';
 import { missingCharacters } from './metrics.js';
 import { layoutStackLine, unitsPerEm, type FaceSource, type StackFace, type StackLine } from './stack-layout.js';
 
@@ -52,7 +52,10 @@ export function createStackMeasurer(primary: StackPrimary, sources: readonly Fac
     return primary.bundled !== undefined && f.kind === 'bundled' && missingCharacters(f.face, text).length === 0;
   };
   const upem = (weight: Weight) => unitsPerEm(first[weight]);
-  const width = (text: string, size: number, weight: Weight) => (bundledWhole(text, weight) ? primary.bundled!.width(text, size, weight) : (line(text, weight).advance * size) / upem(weight));
+  // Advances in the first face's units, remembered per text: the bundled check runs once per label, not per measurement.
+  const units = (weight: Weight) => createTextMemo((text) => (bundledWhole(text, weight) ? primary.bundled!.width(text, upem(weight), weight) : line(text, weight).advance));
+  const advance: Record<Weight, TextMemo> = { regular: units('regular'), semibold: units('semibold') };
+  const width = (text: string, size: number, weight: Weight) => (advance[weight].get(text) * size) / upem(weight);
   return {
     width,
     ruler: (text, size, weight) => (bundledWhole(text, weight) ? primary.bundled!.ruler(text, size, weight) : sliceRuler(text, (t) => width(t, size, weight))),
