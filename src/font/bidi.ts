@@ -8,7 +8,8 @@ let bidi: Bidi | undefined;
 
 /** bidi-js (the Unicode Bidirectional Algorithm, UAX #9), loaded only when a label holds right-to-left letters. */
 function loadBidi(): Bidi {
-  bidi ??= (createRequire(import.meta.url)('bidi-js') as () => Bidi)();
+  const require = createRequire(import.meta.url);
+  bidi ??= (require('bidi-js') as () => Bidi)();
   return bidi;
 }
 

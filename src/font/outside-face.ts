@@ -37,10 +37,11 @@ let fontkit: Fontkit | undefined;
 
 /**
  * fontkit, loaded on first use only: the bundled face never needs it, and loading it costs a
- * cold process tens of milliseconds. Loaded through createRequire so the bundler leaves it out.
+ * cold process about 110 ms. External to the bundle (scripts/build.js), like resvg.
  */
 function loadFontkit(): Fontkit {
-  fontkit ??= createRequire(import.meta.url)('fontkit') as Fontkit;
+  const require = createRequire(import.meta.url);
+  fontkit ??= require('fontkit') as Fontkit;
   return fontkit;
 }
 
