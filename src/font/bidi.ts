@@ -34,8 +34,13 @@ export function mirroredReversed(text: string): string {
 export function visualOrder(levels: readonly number[]): number[] {
   const order = levels.map((_, i) => i);
   if (levels.length === 0) return order;
-  const highest = Math.max(...levels);
-  const lowestOdd = Math.min(...levels.map((l) => (l % 2 ? l : l + 1)));
+  // Loops, not Math.max(...levels): a long line has more runs than a call can take arguments.
+  let highest = 0;
+  let lowestOdd = Infinity;
+  for (const l of levels) {
+    highest = Math.max(highest, l);
+    lowestOdd = Math.min(lowestOdd, l % 2 ? l : l + 1);
+  }
   for (let level = highest; level >= lowestOdd; level--) {
     for (let i = 0; i < order.length; i++) {
       if (levels[order[i]!]! < level) continue;

@@ -11,7 +11,8 @@ export interface TextRuler {
   readonly length: number;
   /**
    * Width in px of the code points [start, end) set on their own, followed by `suffix` if
-   * given: exactly `width()` of that string.
+   * given: exactly `width()` of that string (for a line longer than WIDTH_CACHE_MAX_TEXT that
+   * needs fallback faces, the sum of its code points measured alone: see additiveRuler).
    */
   width(start: number, end: number, suffix?: string): number;
   /** The code point at index i (in code points). */

@@ -50,17 +50,15 @@ function badFont(path: string, file: string, font: string, why: string): Diagnos
   });
 }
 
-/**
- * The fonts of a Node environment. Font files are read and opened with fontkit once per
- * environment, and only when a style names them or a label needs a fallback face.
- */
-export function createFontEnv(root: string, metrics: Record<Weight, FontMetrics>, bundledFiles: string[], options: FontEnvOptions = {}): FontEnv {
-  const find = options.findPackage ?? ((name: string) => packageFolder(name, [join(root, 'package.json'), join(process.cwd(), 'package.json')]));
-  const opened = new Map<string, OutsideFace | { problem: string }>();
-  const open = (file: string, weight: Weight, family?: string): OutsideFace | { problem: string } => {
+type Opened = OutsideFace | { problem: string };
+
+/** Opens font files once each (per weight), remembering the face or why it cannot be one. */
+function fontOpener(): (file: string, weight: Weight, family?: string) => Opened {
+  const opened = new Map<string, Opened>();
+  return (file, weight, family) => {
     const key = `${weight}\u0000${file}`;
     if (!opened.has(key)) {
-      let face: OutsideFace | { problem: string };
+      let face: Opened;
       try {
         face = faceFromBytes(readFileSync(file), { key: fileKey(file), weight, file, ...(family ? { family } : {}) });
       } catch (e) {
@@ -71,6 +69,15 @@ export function createFontEnv(root: string, metrics: Record<Weight, FontMetrics>
     }
     return opened.get(key)!;
   };
+}
+
+/**
+ * The fonts of a Node environment. Font files are read and opened with fontkit once per
+ * environment, and only when a style names them or a label needs a fallback face.
+ */
+export function createFontEnv(root: string, metrics: Record<Weight, FontMetrics>, bundledFiles: string[], options: FontEnvOptions = {}): FontEnv {
+  const find = options.findPackage ?? ((name: string) => packageFolder(name, [join(root, 'package.json'), join(process.cwd(), 'package.json')]));
+  const open = fontOpener();
   const outside = (f: OutsideFace | { problem: string }): StackFace | undefined => ('problem' in f ? undefined : { kind: 'outside', ref: f.ref, face: f });
   const packageSource = (p: FallbackPackage, everyScript: boolean): FaceSource => ({
     serves: (script) => everyScript || p.scripts.includes(script),
@@ -88,10 +95,7 @@ export function createFontEnv(root: string, metrics: Record<Weight, FontMetrics>
   };
   const measure = createStackMeasurer({ faces: bundledFaces, bundled }, tableSources);
   const styled = new Map<string, TextMeasurer>();
-  const styleSource = (entry: string): FaceSource => {
-    const p = FALLBACK_PACKAGES.find((q) => q.package === entry);
-    return p ? packageSource(p, true) : { serves: () => true, face: (weight) => outside(open(entry, weight)) };
-  };
+  const faces: StyleFaces = { open: (file, weight) => outside(open(file, weight)), packageSource, tableSources, bundledFaces, bundled };
   return {
     measure,
     checkStyle: (style, styleFile) => checkStyleFonts(style, styleFile, open),
@@ -99,16 +103,32 @@ export function createFontEnv(root: string, metrics: Record<Weight, FontMetrics>
       const { files, fallback } = style.font;
       if (!files && !fallback) return measure;
       const key = JSON.stringify([files, fallback]);
-      let m = styled.get(key);
-      if (!m) {
-        const own = (weight: Weight, file: string | undefined) => (file ? outside(open(file, weight)) : undefined);
-        const first = files ? { regular: own('regular', files.regular)!, semibold: own('semibold', files.bold ?? files.regular)! } : bundledFaces;
-        m = createStackMeasurer({ faces: first, ...(files ? {} : { bundled }) }, [...(fallback ?? []).map(styleSource), ...tableSources]);
-        styled.set(key, m);
-      }
-      return m;
+      if (!styled.has(key)) styled.set(key, styleMeasurer(style, faces));
+      return styled.get(key)!;
     },
   };
+}
+
+/** What a style's measurer is built from. */
+interface StyleFaces {
+  open(file: string, weight: Weight): StackFace | undefined;
+  packageSource(p: FallbackPackage, everyScript: boolean): FaceSource;
+  tableSources: FaceSource[];
+  bundledFaces: Record<Weight, StackFace>;
+  bundled: TextMeasurer;
+}
+
+/** A checked style's stack: its files (or the bundled face), its fallbacks, then the packages by script. */
+function styleMeasurer(style: Style, f: StyleFaces): TextMeasurer {
+  const { files, fallback } = style.font;
+  const source = (entry: string): FaceSource => {
+    const p = FALLBACK_PACKAGES.find((q) => q.package === entry);
+    return p ? f.packageSource(p, true) : { serves: () => true, face: (weight) => f.open(entry, weight) };
+  };
+  const sources = [...(fallback ?? []).map(source), ...f.tableSources];
+  if (!files) return createStackMeasurer({ faces: f.bundledFaces, bundled: f.bundled }, sources);
+  // checkStyle opened both files before the style reached here, so neither is missing.
+  return createStackMeasurer({ faces: { regular: f.open(files.regular, 'regular')!, semibold: f.open(files.bold ?? files.regular, 'semibold')! } }, sources);
 }
 
 /** Makes the style's font paths absolute and opens each file once, refusing those that are not fonts. */
