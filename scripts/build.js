@@ -20,7 +20,8 @@ const common = {
   bundle: true,
   platform: 'node',
   target: 'node20',
-  external: ['@resvg/resvg-js', 'subset-font'],
+  // Loaded at run time, and only when needed: resvg for a PNG, subset-font for rare glyphs in embedded fonts, fontkit and bidi-js for labels the bundled face cannot draw.
+  external: ['@resvg/resvg-js', 'subset-font', 'fontkit', 'bidi-js'],
   legalComments: 'linked',
   logLevel: 'warning',
 };

@@ -17,6 +17,6 @@ for (const name of briefs) {
   const id = basename(name, '.yaml');
   mkdirSync(join('golden', id), { recursive: true });
   writeFileSync(join('golden', id, `${id}.svg`), result.svg);
-  writeFileSync(join('golden', id, `${id}.png`), rasterize(outlineSvg(result.scene, env), { scale: 2, fontFiles: [] }));
+  writeFileSync(join('golden', id, `${id}.png`), rasterize(outlineSvg(result.scene, env, result.style), { scale: 2, fontFiles: [] }));
   console.log(`golden/${id}/${id}.svg, .png`);
 }

@@ -67,7 +67,7 @@ export async function render(brief: string | Record<string, unknown>, rows?: Rec
   const env = options.env ?? createNodeEnv();
   const result = await renderBrief({ brief, rows, file: options.file, lenient: options.lenient, strict: options.strict, textMode: options.textMode, idPrefix: options.idPrefix }, env);
   if (!result.ok || !result.svg || !result.scene) throw new RenderError(result.diagnostics);
-  const png = options.pngScale ? rasterize(outlineSvg(result.scene, env), { scale: options.pngScale, fontFiles: [] }) : undefined;
+  const png = options.pngScale ? rasterize(outlineSvg(result.scene, env, result.style), { scale: options.pngScale, fontFiles: [] }) : undefined;
   // Yield once after a raster: resvg's native memory is reclaimed only when the event loop turns,
   // and a caller's tight loop of renders would otherwise grow it fast.
   if (png) await new Promise<void>((resolve) => setImmediate(resolve));

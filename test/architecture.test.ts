@@ -36,7 +36,7 @@ const ALLOWED: Record<string, RegExp> = {
   derive: /^(derive|fields\/(labels|locales))/,
   scene: /^(scene|svg\/path)/,
   svg: /^(svg|scene\/(ids|walk)|font\/measurer|font\/metrics)/,
-  layout: /^(layout|svg\/path|scene\/(ids|walk)|font\/measurer|fields\/(notation|labels|locales)$|color\/wcag$|raster\/png-encode$)/,
+  layout: /^(layout|svg\/path|scene\/(ids|walk)|font\/(measurer|missing-report)$|fields\/(notation|labels|locales)$|color\/wcag$|raster\/png-encode$)/,
   // A form: the layout kit, the scene, derive operations, field helpers and types.
   forms: /^(forms\/|layout\/|scene\/|derive\/|svg\/path$|fields\/(labels|notation|locales)$|color\/(wcag|srgb)$)/,
   raster: /^raster\//,

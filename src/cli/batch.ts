@@ -80,7 +80,7 @@ const breathe = () => new Promise<void>((r) => setImmediate(r));
 /** The bytes of each planned file; a PNG is drawn from an outline SVG (whatever the SVG file's text mode), made once and reused. */
 async function produceFiles(result: RenderResult & { svg: string; scene: Scene }, plan: BriefPlan, env: RenderEnv, opts: BatchOptions, report: BriefReport): Promise<FileContent[]> {
   let outlines: string | undefined;
-  const outlined = () => (outlines ??= outlineSvg(result.scene, env));
+  const outlined = () => (outlines ??= outlineSvg(result.scene, env, result.style));
   const files: FileContent[] = [];
   for (const p of plan.files) {
     // The SVG's text mode (--text, --outline-text) was applied by the render.

@@ -22,6 +22,7 @@ export const CATALOGUE = {
   'brief.bad-alias': 'error',
   'brief.bad-format': 'error',
   'brief.too-many-problems': 'error',
+  'brief.bad-font-file': 'error',
   // table: reading and typing the data
   'table.not-found': 'error',
   'table.unreadable': 'error',

@@ -1,4 +1,5 @@
 import type { Weight } from '../style/types.js';
+import type { FaceRef } from './outside-face.js';
 import { compileFace, layoutRun, missingCharacters, runAdvance, runPositions, runPrevious, type CompiledFace, type FontMetrics, type PlacedGlyph } from './metrics.js';
 
 /**
@@ -10,7 +11,8 @@ export interface TextRuler {
   readonly length: number;
   /**
    * Width in px of the code points [start, end) set on their own, followed by `suffix` if
-   * given: exactly `width()` of that string.
+   * given: exactly `width()` of that string (for a line longer than WIDTH_CACHE_MAX_TEXT that
+   * needs fallback faces, the sum of its code points measured alone: see additiveRuler).
    */
   width(start: number, end: number, suffix?: string): number;
   /** The code point at index i (in code points). */
@@ -33,6 +35,12 @@ export interface TextMeasurer {
   missing(text: string, weight: Weight): string[];
   /** Glyphs and their x offsets in font units, and the font's units per em. */
   run(text: string, weight: Weight): { glyphs: PlacedGlyph[]; unitsPerEm: number };
+  /**
+   * The runs of the text in logical order with the face that draws each (per-character
+   * fallback): what an SVG that embeds its fonts needs a subset of. Characters no face has go
+   * with the first face, which draws them as empty boxes.
+   */
+  segments(text: string, weight: Weight): Array<{ face: FaceRef; text: string }>;
 }
 
 /** Widths remembered per weight before the memory is cleared (a batch of charts reuses labels). */
@@ -88,11 +96,17 @@ function createRuler(face: CompiledFace, text: string, size: number): TextRuler 
   };
 }
 
+/** Face references for bundled metrics with no font file known (file ''). */
+export function bundledRefs(metrics: Record<Weight, FontMetrics>, files: Partial<Record<Weight, string>> = {}): Record<Weight, FaceRef> {
+  const ref = (weight: Weight): FaceRef => ({ key: `${metrics[weight].family}-${weight}`.toLowerCase().replace(/[^a-z0-9]+/g, '-'), family: metrics[weight].family, weight, file: files[weight] ?? '' });
+  return { regular: ref('regular'), semibold: ref('semibold') };
+}
+
 /**
  * A measurer over regular and semibold metrics. Pure: the same text always measures the same;
  * the width cache only saves repeated work.
  */
-export function createMeasurer(metrics: Record<Weight, FontMetrics>): TextMeasurer {
+export function createMeasurer(metrics: Record<Weight, FontMetrics>, refs: Record<Weight, FaceRef> = bundledRefs(metrics)): TextMeasurer {
   const faces: Record<Weight, CompiledFace> = { regular: compileFace(metrics.regular), semibold: compileFace(metrics.semibold) };
   const cache: Record<Weight, TextMemo> = {
     regular: createTextMemo((text) => runAdvance(faces.regular, text)),
@@ -105,5 +119,6 @@ export function createMeasurer(metrics: Record<Weight, FontMetrics>): TextMeasur
     descent: (size, weight) => (-faces[weight].metrics.descent * size) / faces[weight].metrics.unitsPerEm,
     missing: (text, weight) => missingCharacters(faces[weight], text),
     run: (text, weight) => ({ glyphs: layoutRun(faces[weight], text), unitsPerEm: faces[weight].metrics.unitsPerEm }),
+    segments: (text, weight) => [{ face: refs[weight], text }],
   };
 }

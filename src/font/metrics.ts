@@ -19,10 +19,18 @@ export interface FontMetrics {
 /** Glyph outlines as SVG path data in font units (y up), keyed by code point. */
 export type GlyphOutlines = Record<string, string>;
 
-/** One glyph placed in a run: its code point (or -1 for .notdef) and x offset in font units. */
+/**
+ * One glyph placed in a run: its code point (or -1 for .notdef) and x offset in font units. A
+ * glyph from a face other than the bundled one also names that face (`face`, a FaceRef key),
+ * its glyph id there, its y offset (marks, Arabic joining) and its outline in the run's units.
+ */
 export interface PlacedGlyph {
   codePoint: number;
   x: number;
+  face?: string;
+  glyph?: number;
+  y?: number;
+  d?: string;
 }
 
 /** A face's metrics in lookup form: numeric keys, built once per face. */

@@ -46,12 +46,29 @@ function bundledFaces(fonts: string, index: SubsetIndex): Record<Weight, EmbedFa
   return { regular: face('regular'), semibold: face('semibold') };
 }
 
-/** One face per weight, with the characters it has (the measure knows which: it is cut from the same font). */
-function bundledProvider(faces: Record<Weight, EmbedFace>, measure: TextMeasurer): FaceProvider {
+/** A CSS family name of our own for a face other than the bundled one (its file's own name may be reserved by its licence). */
+const fallbackFamily = (key: string) => `chartwright-${key.replace(/[^a-z0-9-]/gi, '-')}`;
+
+/**
+ * Which face draws which characters, as the measurer decided when it laid the text out: the
+ * bundled face's runs go to chartwright sans (prebuilt blocks), every other face's runs (a
+ * style's own files, fallback faces for other scripts) to a run-time subset of its file, in a
+ * family of its own, so the SVG's family list falls back per character as the measurer did.
+ * A face without a file (the bundled face where its package is absent) is left to the blocks.
+ */
+export function stackProvider(bundled: Record<Weight, EmbedFace>, bundledFamily: string, measure: TextMeasurer): FaceProvider {
   return (text, weight) => {
-    const missing = new Set(measure.missing(text, weight));
-    const has = [...text].filter((ch) => !missing.has(ch)).join('');
-    return has ? [{ face: faces[weight], text: has }] : [];
+    const out: Array<{ face: EmbedFace; text: string }> = [];
+    for (const s of measure.segments(text, weight)) {
+      if (s.face.family === bundledFamily || s.face.file === '') {
+        const missing = new Set(measure.missing(s.text, weight));
+        const has = [...s.text].filter((ch) => !missing.has(ch)).join('');
+        if (has) out.push({ face: bundled[weight], text: has });
+      } else {
+        out.push({ face: { key: s.face.key, family: fallbackFamily(s.face.key), weight: bundled[weight].weight, file: s.face.file }, text: s.text });
+      }
+    }
+    return out;
   };
 }
 
@@ -64,7 +81,7 @@ function bundledProvider(faces: Record<Weight, EmbedFace>, measure: TextMeasurer
  * bytes to every reader of every page, and pays the time once per build (once per glyph set,
  * with the cache), so bytes win.
  */
-export function nodeEmbedFonts(root: string, measure: TextMeasurer, provider?: FaceProvider): EmbedFonts {
+export function nodeEmbedFonts(root: string, measure: TextMeasurer, bundledFamily: string, provider?: FaceProvider): EmbedFonts & { faces: FaceProvider; forMeasure(m: TextMeasurer): EmbedFonts } {
   const fonts = join(root, 'templates', 'fonts');
   const index = JSON.parse(readFileSync(join(fonts, 'subsets', 'index.json'), 'utf8')) as SubsetIndex;
   const faces = bundledFaces(fonts, index);
@@ -83,9 +100,10 @@ export function nodeEmbedFonts(root: string, measure: TextMeasurer, provider?: F
     return require('subset-font') as SubsetFont;
   }));
   const cache = boundedCache<Uint8Array>(SUBSET_CACHE_LIMIT);
-  return {
-    faces: provider ?? bundledProvider(faces, measure),
+  const embed: EmbedFonts = {
+    faces: provider ?? stackProvider(faces, bundledFamily, measure),
     blocks: (face) => blocks.get(face.key) ?? [],
     subset: (face, text) => cache(`${face.key}\u0000${face.file}\u0000${text}`, async () => new Uint8Array(await (await load())(read(face.file), text, { ...index.options, targetFormat: 'woff2' }))),
   };
+  return { ...embed, forMeasure: (m: TextMeasurer) => ({ ...embed, faces: stackProvider(faces, bundledFamily, m) }) };
 }

@@ -1,19 +1,18 @@
 import { closeSync, constants, createReadStream, fstatSync, openSync, readdirSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, isAbsolute, join, resolve } from 'node:path';
-import { diagnostic, failure, type Outcome } from '../diagnostics/diagnostic.js';
+import { diagnostic, failure, success, type Outcome } from '../diagnostics/diagnostic.js';
 import { suggestionHint } from '../diagnostics/suggest.js';
-import { createMeasurer, type TextMeasurer } from '../font/measurer.js';
 import type { FontMetrics, GlyphOutlines } from '../font/metrics.js';
 import type { RenderEnv } from '../pipeline/env.js';
 import type { PaletteFile } from '../color/palette.js';
 import { resolveStyle } from '../style/resolve.js';
 import type { Style, Weight } from '../style/types.js';
-import type { EmbedFonts } from '../svg/embed.js';
 import type { OutlineSet } from '../svg/glyphs.js';
 import { nodeEmbedFonts } from './embed-fonts.js';
 import { DEFAULT_MAX_DATA_BYTES, type TableEnv } from '../table/load.js';
 import { describeBytes, INPUT_LIMITS, readBounded, readUpTo } from './bounded-read.js';
+import { createFontEnv, type FontEnvOptions } from './font-env.js';
 import { packageRoot } from './package-root.js';
 
 /** Style presets shipped in templates/styles. */
@@ -79,7 +78,7 @@ function styleTooLarge(name: string, file: string, limit: number) {
   })]);
 }
 
-function loadStyle(root: string, name: string, briefFile: string | undefined, maxBytes: number): Outcome<Style> {
+function loadStyle(root: string, name: string, briefFile: string | undefined, maxBytes: number, checkFonts: StyleFontCheck): Outcome<Style> {
   const isPath = name.includes('/') || name.endsWith('.json');
   const file = isPath ? (isAbsolute(name) || !briefFile ? resolve(name) : resolve(dirname(briefFile), name)) : join(root, 'templates', 'styles', `${name}.json`);
   if (!isPath && !(STYLE_PRESETS as readonly string[]).includes(name)) {
@@ -96,7 +95,7 @@ function loadStyle(root: string, name: string, briefFile: string | undefined, ma
     return failure([diagnostic(code === 'ENOENT' ? 'brief.style-not-found' : 'brief.bad-style', code === 'ENOENT' ? `the style file \`${name}\` does not exist` : `the style file \`${name}\` is not valid JSON`, { path: '/style', found: file, hint: 'style paths are relative to the brief; presets are named without .json' })]);
   }
   // The presets' colours are checked by the test suite (test/cli/styles-and-output.test.ts), not at every start.
-  return resolveStyle(value, file, readPalettes(root), { trusted: !isPath });
+  return withFonts(resolveStyle(value, file, readPalettes(root), { trusted: !isPath }), file, checkFonts);
 }
 
 /** The palette files shipped in templates/palettes. */
@@ -120,8 +119,17 @@ function sourceSansFiles(require: NodeJS.Require): string[] {
   return [join(dir, 'TTF', 'SourceSans3-Regular.ttf'), join(dir, 'TTF', 'SourceSans3-Semibold.ttf')];
 }
 
+type StyleFontCheck = (style: Style, file: string) => Outcome<Style>;
+
+/** A loaded style with its font files checked (paths made absolute), keeping its warnings. */
+function withFonts(loaded: Outcome<Style>, file: string, check: StyleFontCheck): Outcome<Style> {
+  if (!loaded.ok) return loaded;
+  const checked = check(loaded.value, file);
+  return checked.ok ? success(checked.value, loaded.diagnostics) : failure([...loaded.diagnostics, ...checked.diagnostics]);
+}
+
 /** Options of a Node environment. */
-export interface NodeEnvOptions {
+export interface NodeEnvOptions extends FontEnvOptions {
   /** The largest style file read, in bytes. Default: 256 KiB (`INPUT_LIMITS.style`). */
   maxStyleBytes?: number;
 }
@@ -136,18 +144,22 @@ export function createNodeEnv(root: string = packageRoot(), options: NodeEnvOpti
     regular: readJson(join(fonts, 'source-sans-3-regular.metrics.json')),
     semibold: readJson(join(fonts, 'source-sans-3-semibold.metrics.json')),
   };
-  const measure: TextMeasurer = createMeasurer(faces);
   const styles = new Map<string, Outcome<Style>>();
   let outlines: OutlineSet | undefined;
-  let embed: EmbedFonts | undefined;
+  let embed: ReturnType<typeof nodeEmbedFonts> | undefined;
   const require = createRequire(join(root, 'package.json'));
+  const fontEnv = createFontEnv(root, faces, sourceSansFiles(require), options);
   const table = nodeTableEnv();
   return {
-    measure,
+    measure: fontEnv.measure,
+    // `this.measure`, so an environment copied with its measurer replaced measures with that one.
+    measureFor(style) {
+      return style.font.files || style.font.fallback ? fontEnv.measureFor(style) : this.measure;
+    },
     table,
     style(name, briefFile) {
       const key = `${name}\u0000${briefFile ?? ''}`;
-      if (!styles.has(key)) styles.set(key, loadStyle(root, name, briefFile, options.maxStyleBytes ?? INPUT_LIMITS.style.bytes));
+      if (!styles.has(key)) styles.set(key, loadStyle(root, name, briefFile, options.maxStyleBytes ?? INPUT_LIMITS.style.bytes, fontEnv.checkStyle));
       return styles.get(key)!;
     },
     outlines() {
@@ -159,6 +171,9 @@ export function createNodeEnv(root: string = packageRoot(), options: NodeEnvOpti
       return outlines;
     },
     fontFiles: () => sourceSansFiles(require),
-    embedFonts: () => (embed ??= nodeEmbedFonts(root, measure)),
+    embedFonts(measure) {
+      embed ??= nodeEmbedFonts(root, this.measure, faces.regular.family);
+      return measure && measure !== this.measure ? embed.forMeasure(measure) : embed;
+    },
   };
 }

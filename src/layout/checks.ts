@@ -1,7 +1,8 @@
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { TextMeasurer } from '../font/measurer.js';
 import type { Box, SceneNode, TextNode } from '../scene/types.js';
-import { agree, count } from '../diagnostics/words.js';
+import { count } from '../diagnostics/words.js';
+import { missingGlyphsWarning } from '../font/missing-report.js';
 
 /** Smallest plot, in px either way, in which marks and ticks can still be read. */
 export const MIN_PLOT_PX = 40;
@@ -17,15 +18,11 @@ export function frameTooSmall(plot: Box, size: { width: number; height: number }
   })];
 }
 
-/** Characters of the chart's text that the font cannot draw (they would come out as empty boxes). */
+/** Characters of the chart's text that no font can draw (they would come out as empty boxes), with the labels and scripts. */
 export function missingGlyphs(nodes: readonly SceneNode[], measure: TextMeasurer): Diagnostic[] {
-  const missing = new Set<string>();
-  for (const n of nodes) if (n.kind === 'text') for (const ch of measure.missing(n.text, n.weight)) missing.add(ch);
-  if (missing.size === 0) return [];
-  const list = [...missing].slice(0, 8).map((ch) => `U+${ch.codePointAt(0)!.toString(16).toUpperCase().padStart(4, '0')}`).join(', ');
-  return [diagnostic('layout.missing-glyphs', `the bundled font cannot draw ${count(missing.size, 'character')} in the chart's text (${list}); ${agree(missing.size, 'it is', 'they are')} drawn as empty boxes`, {
-    hint: 'use Latin, Greek or Cyrillic text, or transliterate those labels',
-  })];
+  const found: { text: string; missing: string[] }[] = [];
+  for (const n of nodes) if (n.kind === 'text') found.push({ text: n.full ?? n.text, missing: measure.missing(n.text, n.weight) });
+  return missingGlyphsWarning(found);
 }
 
 /** Texts whose box leaves the canvas (a layout defect the reader would see as cut-off words). */

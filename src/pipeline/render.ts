@@ -87,6 +87,8 @@ export interface RenderResult {
   diagnostics: Diagnostic[];
   /** Per-stage times, when the request gave a clock. */
   timings?: StageTiming[];
+  /** The style the chart was drawn in (its fonts draw the outline SVG and the PNG). */
+  style?: Style;
 }
 
 /** Everything a render reads from outside: the brief, its style and its table. */
@@ -208,8 +210,9 @@ function renderCore(inputs: RenderInputs, measure: TextMeasurer, opts: { lenient
 /** The text mode of a render: the request's, else the style's, else embed. */
 async function textModeOf(name: TextModeName, scene: Scene, style: Style, env: RenderEnv): Promise<TextMode> {
   if (name === 'live') return { kind: 'live', family: style.font.family };
-  if (name === 'outline') return { kind: 'outlines', set: env.outlines(), measure: env.measure };
-  return { kind: 'embed', fonts: await embeddedFonts(scene, env.embedFonts()) };
+  const measure = env.measureFor(style);
+  if (name === 'outline') return { kind: 'outlines', set: env.outlines(), measure };
+  return { kind: 'embed', fonts: await embeddedFonts(scene, env.embedFonts(measure)) };
 }
 
 /** The SVG of a finished scene, or the coded defect that stopped it (a bad coordinate is never written). */
@@ -250,7 +253,7 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
   if (!loaded.inputs) return finish({ ...(loaded.brief ? { brief: loaded.brief } : {}), rationale: [], diagnostics: loaded.diagnostics });
   let result: Omit<RenderResult, 'ok' | 'timings'>;
   try {
-    result = renderInputs(loaded.inputs, env.measure, { lenient: req.lenient }, watch.lap);
+    result = { ...renderInputs(loaded.inputs, env.measureFor(loaded.inputs.style), { lenient: req.lenient }, watch.lap), style: loaded.inputs.style };
   } catch (e) {
     // Bad input never throws (it is a diagnostic); what does is a defect, reported as one, never a crash.
     return finish({ brief: loaded.inputs.brief, rationale: [], diagnostics: [...loaded.diagnostics, diagnostic('render.internal', `chartwright failed unexpectedly while drawing: ${(e as Error).message}; this is a defect in chartwright`, { file: req.file, hint: 'please report it with the brief and data' })] });
@@ -262,7 +265,7 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
   return finish({ ...result, ...(svg.svg !== undefined ? { svg: svg.svg } : {}), diagnostics: [...diagnostics, ...svg.diagnostics] });
 }
 
-/** The SVG of a scene with text as glyph outlines, as the raster stage draws it. */
-export function outlineSvg(scene: Scene, env: RenderEnv, options: SvgOptions = {}): string {
-  return writeSvg(scene, { kind: 'outlines', set: env.outlines(), measure: env.measure }, options);
+/** The SVG of a scene with text as glyph outlines, as the raster stage draws it, in the faces of the style it was laid out in. */
+export function outlineSvg(scene: Scene, env: RenderEnv, style?: Style, options: SvgOptions = {}): string {
+  return writeSvg(scene, { kind: 'outlines', set: env.outlines(), measure: style ? env.measureFor(style) : env.measure }, options);
 }

@@ -33,7 +33,14 @@ export const STYLE_SCHEMA: SchemaNode = {
     background: colour,
     font: {
       type: 'object', additionalProperties: false, required: ['family', 'regular', 'semibold'],
-      properties: { family: { type: 'string', minLength: 1 }, regular: { type: 'string', minLength: 1 }, semibold: { type: 'string', minLength: 1 } },
+      properties: {
+        family: { type: 'string', minLength: 1 }, regular: { type: 'string', minLength: 1 }, semibold: { type: 'string', minLength: 1 },
+        files: {
+          type: 'object', additionalProperties: false, required: ['regular'], description: 'Font files (TTF/OTF) drawn instead of the bundled face, relative to the style file.',
+          properties: { regular: { type: 'string', minLength: 1 }, bold: { type: 'string', minLength: 1 } },
+        },
+        fallback: { type: 'array', items: { type: 'string', minLength: 1 }, description: 'Faces for characters the first lacks, in order: font files relative to the style file, or fallback package names.' },
+      },
     },
     text: {
       type: 'object', additionalProperties: false, required: ['title', 'subtitle', 'source', 'tick', 'axisTitle', 'label', 'note'],

@@ -13,7 +13,13 @@ export interface Style {
   name: string;
   description?: string;
   background: string;
-  font: { family: string; regular: string; semibold: string };
+  font: {
+    family: string; regular: string; semibold: string;
+    /** The style's own font files (TTF/OTF, relative to the style file), drawn instead of the bundled face. Default: none. */
+    files?: { regular: string; bold?: string };
+    /** Further faces for characters the first lacks, tried in order: font files, or packages from FALLBACK_PACKAGES. Default: none. */
+    fallback?: string[];
+  };
   text: Record<'title' | 'subtitle' | 'source' | 'tick' | 'axisTitle' | 'label' | 'note', TextStyle>;
   palette: {
     name: string;

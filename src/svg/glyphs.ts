@@ -1,5 +1,5 @@
 import type { TextMeasurer } from '../font/measurer.js';
-import type { GlyphOutlines } from '../font/metrics.js';
+import type { GlyphOutlines, PlacedGlyph } from '../font/metrics.js';
 import type { TextNode } from '../scene/types.js';
 import type { Weight } from '../style/types.js';
 import { fmt, fmtPath } from './fmt.js';
@@ -17,11 +17,17 @@ export class GlyphDefs {
   private readonly used = new Map<string, string>();
   constructor(private readonly prefix: string, private readonly set: OutlineSet) {}
 
-  /** The id of a glyph's definition, defining it on first use; undefined for blank glyphs (spaces). */
-  ref(codePoint: number, weight: Weight): string | undefined {
-    const id = `${this.prefix}-g${weight === 'regular' ? 'r' : 's'}${codePoint < 0 ? 'x' : codePoint.toString(16)}`;
+  /**
+   * The id of a glyph's definition, defining it on first use; undefined for blank glyphs
+   * (spaces). A glyph of the bundled face is named by weight and code point; one of another
+   * face by that face's key and its glyph id (keys differ per face and weight, so two faces in
+   * one SVG never share an id).
+   */
+  ref(glyph: PlacedGlyph, weight: Weight): string | undefined {
+    const { codePoint } = glyph;
+    const id = glyph.face !== undefined ? `${this.prefix}-${glyph.face}-${glyph.glyph}` : `${this.prefix}-g${weight === 'regular' ? 'r' : 's'}${codePoint < 0 ? 'x' : codePoint.toString(16)}`;
     if (this.used.has(id)) return id;
-    const d = codePoint < 0 ? this.set.notdef[weight] : this.set.outlines[weight][codePoint];
+    const d = glyph.face !== undefined ? glyph.d : codePoint < 0 ? this.set.notdef[weight] : this.set.outlines[weight][codePoint];
     if (!d) return undefined;
     this.used.set(id, d);
     return id;
@@ -47,8 +53,8 @@ export function outlineText(node: TextNode, measure: TextMeasurer, defs: GlyphDe
   const { glyphs, unitsPerEm } = measure.run(node.text, node.weight);
   const scale = node.size / unitsPerEm;
   const uses = glyphs.flatMap((g) => {
-    const id = defs.ref(g.codePoint, node.weight);
-    return id ? [`<use href="#${id}"${g.x ? ` x="${fmt(g.x)}"` : ''}/>`] : [];
+    const id = defs.ref(g, node.weight);
+    return id ? [`<use href="#${id}"${g.x ? ` x="${fmt(g.x)}"` : ''}${g.y ? ` y="${fmt(g.y)}"` : ''}/>`] : [];
   });
   const transform = `translate(${fmt(startX(node, measure))} ${fmt(node.y)}) scale(${Number(scale.toPrecision(6))} ${-Number(scale.toPrecision(6))})`;
   const glyphGroup = `<g${aria} fill="${node.fill}" transform="${transform}">${title}${uses.join('')}</g>`;

@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { renderBatch } from '../../src/cli/batch.js';
 import { renderBrief } from '../../src/pipeline/render.js';
+import { createNodeEnv } from '../../src/io/node-env.js';
 import { env, root, tempDir } from '../helpers.js';
 
 const rows = [{ pier: 'North', n: 5 }, { pier: 'South', n: 3 }];
@@ -76,11 +77,13 @@ describe('layout refusals and warnings', () => {
     expect(r.diagnostics).toMatchObject([{ code: 'layout.frame-too-small', path: '/size' }]);
   });
 
-  it('warns about characters the bundled font cannot draw', async () => {
-    const r = await renderBrief({ brief: brief({ rows: [{ pier: '北埠头', n: 2 }, { pier: 'South', n: 3 }] }) }, env);
+  it('warns about characters no font can draw, naming the labels, the script and the package to install', async () => {
+    const bare = createNodeEnv(undefined, { findPackage: () => undefined });
+    const r = await renderBrief({ brief: brief({ rows: [{ pier: '北埠头', n: 2 }, { pier: 'South', n: 3 }] }) }, bare);
     expect(r.ok).toBe(true);
-    expect(r.diagnostics).toMatchObject([{ code: 'layout.missing-glyphs', severity: 'warning' }]);
+    expect(r.diagnostics).toMatchObject([{ code: 'layout.missing-glyphs', severity: 'warning', found: '北埠头', expected: 'fonts for Han' }]);
     expect(r.diagnostics[0]!.message).toContain('U+5317');
+    expect(r.diagnostics[0]!.hint).toContain('@embedpdf/fonts-jp');
   });
 });
 

@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { FontMetrics } from '../../src/font/metrics.js';
+import { createNodeEnv } from '../../src/io/node-env.js';
 import { env, root } from '../helpers.js';
 
 // fontkit (a general-purpose font engine from npm) reads the TTF that resvg draws with; the
@@ -42,7 +43,8 @@ describe('font metrics extracted from the bundled TTF', () => {
     }
   });
 
-  it('knows which characters the font cannot draw', () => {
-    expect(env.measure.missing('Hafen 港', 'regular')).toEqual(['港']);
+  it('knows which characters the font cannot draw (no fallback package installed)', () => {
+    const bare = createNodeEnv(undefined, { findPackage: () => undefined });
+    expect(bare.measure.missing('Hafen 港', 'regular')).toEqual(['港']);
   });
 });

@@ -21,7 +21,7 @@ describe('golden gallery', () => {
 
     it(`${id}: PNG is pixel for pixel the golden (pixelmatch, threshold 0)`, async () => {
       const { result } = await renderDemo(file);
-      const actual = PNG.sync.read(rasterize(outlineSvg(result.scene!, env), { scale: 2, fontFiles: [] }));
+      const actual = PNG.sync.read(rasterize(outlineSvg(result.scene!, env, result.style), { scale: 2, fontFiles: [] }));
       const expected = PNG.sync.read(readFileSync(join(dir, `${id}.png`)));
       expect([actual.width, actual.height]).toEqual([expected.width, expected.height]);
       const diff = new PNG({ width: expected.width, height: expected.height });
