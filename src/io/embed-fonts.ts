@@ -56,11 +56,11 @@ const fallbackFamily = (key: string) => `chartwright-${key.replace(/[^a-z0-9-]/g
  * family of its own, so the SVG's family list falls back per character as the measurer did.
  * A face without a file (the bundled face where its package is absent) is left to the blocks.
  */
-export function stackProvider(bundled: Record<Weight, EmbedFace>, bundledFamily: string, measure: TextMeasurer): FaceProvider {
+export function stackProvider(bundled: Record<Weight, EmbedFace>, bundledFamilies: ReadonlySet<string>, measure: TextMeasurer): FaceProvider {
   return (text, weight) => {
     const out: Array<{ face: EmbedFace; text: string }> = [];
     for (const s of measure.segments(text, weight)) {
-      if (s.face.family === bundledFamily || s.face.file === '') {
+      if (bundledFamilies.has(s.face.family) || s.face.file === '') {
         const missing = new Set(measure.missing(s.text, weight));
         const has = [...s.text].filter((ch) => !missing.has(ch)).join('');
         if (has) out.push({ face: bundled[weight], text: has });
@@ -81,7 +81,7 @@ export function stackProvider(bundled: Record<Weight, EmbedFace>, bundledFamily:
  * bytes to every reader of every page, and pays the time once per build (once per glyph set,
  * with the cache), so bytes win.
  */
-export function nodeEmbedFonts(root: string, measure: TextMeasurer, bundledFamily: string, provider?: FaceProvider): EmbedFonts & { faces: FaceProvider; forMeasure(m: TextMeasurer): EmbedFonts } {
+export function nodeEmbedFonts(root: string, measure: TextMeasurer, bundledFamilies: ReadonlySet<string>, provider?: FaceProvider): EmbedFonts & { faces: FaceProvider; forMeasure(m: TextMeasurer): EmbedFonts } {
   const fonts = join(root, 'templates', 'fonts');
   const index = JSON.parse(readFileSync(join(fonts, 'subsets', 'index.json'), 'utf8')) as SubsetIndex;
   const faces = bundledFaces(fonts, index);
@@ -101,9 +101,9 @@ export function nodeEmbedFonts(root: string, measure: TextMeasurer, bundledFamil
   }));
   const cache = boundedCache<Uint8Array>(SUBSET_CACHE_LIMIT);
   const embed: EmbedFonts = {
-    faces: provider ?? stackProvider(faces, bundledFamily, measure),
+    faces: provider ?? stackProvider(faces, bundledFamilies, measure),
     blocks: (face) => blocks.get(face.key) ?? [],
     subset: (face, text) => cache(`${face.key}\u0000${face.file}\u0000${text}`, async () => new Uint8Array(await (await load())(read(face.file), text, { ...index.options, targetFormat: 'woff2' }))),
   };
-  return { ...embed, forMeasure: (m: TextMeasurer) => ({ ...embed, faces: stackProvider(faces, bundledFamily, m) }) };
+  return { ...embed, forMeasure: (m: TextMeasurer) => ({ ...embed, faces: stackProvider(faces, bundledFamilies, m) }) };
 }

@@ -172,7 +172,7 @@ export function createNodeEnv(root: string = packageRoot(), options: NodeEnvOpti
     },
     fontFiles: () => sourceSansFiles(require),
     embedFonts(measure) {
-      embed ??= nodeEmbedFonts(root, this.measure, faces.regular.family);
+      embed ??= nodeEmbedFonts(root, this.measure, new Set([faces.regular.family, faces.semibold.family]));
       return measure && measure !== this.measure ? embed.forMeasure(measure) : embed;
     },
   };
