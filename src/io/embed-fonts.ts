@@ -100,10 +100,15 @@ export function nodeEmbedFonts(root: string, measure: TextMeasurer, bundledFamil
     return require('subset-font') as SubsetFont;
   }));
   const cache = boundedCache<Uint8Array>(SUBSET_CACHE_LIMIT);
+  // The bundled faces keep only kerning and marks (the measurer applies nothing else); another
+  // face keeps harfbuzz's default layout features, since its text was shaped with them (Arabic
+  // joining forms, Indic conjuncts): without them a browser draws isolated, wider letters.
+  const { keepFeatures: _bundledOnly, ...shaped } = index.options;
+  const optionsFor = (face: EmbedFace) => (blocks.has(face.key) ? index.options : shaped);
   const embed: EmbedFonts = {
     faces: provider ?? stackProvider(faces, bundledFamilies, measure),
     blocks: (face) => blocks.get(face.key) ?? [],
-    subset: (face, text) => cache(`${face.key}\u0000${face.file}\u0000${text}`, async () => new Uint8Array(await (await load())(read(face.file), text, { ...index.options, targetFormat: 'woff2' }))),
+    subset: (face, text) => cache(`${face.key}\u0000${face.file}\u0000${text}`, async () => new Uint8Array(await (await load())(read(face.file), text, { ...optionsFor(face), targetFormat: 'woff2' }))),
   };
   return { ...embed, forMeasure: (m: TextMeasurer) => ({ ...embed, faces: stackProvider(faces, bundledFamilies, m) }) };
 }
