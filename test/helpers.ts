@@ -60,9 +60,9 @@ export function demoBriefs(): string[] {
 }
 
 /** Renders a demo brief file and dumps its scene. */
-export async function renderDemo(file: string): Promise<{ result: RenderResult; dump: SceneDump }> {
+export async function renderDemo(file: string, opts: { data?: boolean } = {}): Promise<{ result: RenderResult; dump: SceneDump }> {
   const { readFileSync } = await import('node:fs');
-  const result = await renderBrief({ brief: readFileSync(file, 'utf8'), file }, env);
+  const result = await renderBrief({ brief: readFileSync(file, 'utf8'), file, ...opts }, env);
   if (!result.ok || !result.scene) throw new Error(`demo ${file} failed: ${JSON.stringify(result.diagnostics)}`);
   return { result, dump: dumpScene(result.scene) };
 }

@@ -48,7 +48,7 @@ export interface BriefReport {
 }
 
 /** What rendering one brief file needs of the batch options. */
-type RenderFileOptions = Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style' | 'locale'> & Partial<Pick<BatchOptions, 'outlineText' | 'textMode' | 'idPrefix'>>;
+type RenderFileOptions = Pick<BatchOptions, 'strict' | 'lenient' | 'debug' | 'clock' | 'maxBriefBytes' | 'style' | 'locale'> & Partial<Pick<BatchOptions, 'outlineText' | 'textMode' | 'idPrefix' | 'data'>>;
 
 /**
  * Reads a brief file and renders it; a missing file or unexpected failure becomes a diagnostic.
@@ -59,7 +59,7 @@ export async function renderFile(file: string, env: RenderEnv, opts: RenderFileO
   if ('problem' in read) return { ok: false, rationale: [], diagnostics: [read.problem] };
   const textMode = opts.textMode ?? (opts.outlineText ? 'outline' : undefined);
   try {
-    return await renderBrief({ brief: read.text, ...(source ? { parsed: source.parsed } : {}), file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock, ...(textMode ? { textMode } : {}), ...(opts.idPrefix !== undefined ? { idPrefix: opts.idPrefix } : {}), ...(opts.style !== undefined ? { style: opts.style } : {}), ...(opts.locale ? { locale: opts.locale } : {}) }, env);
+    return await renderBrief({ brief: read.text, ...(source ? { parsed: source.parsed } : {}), file, strict: opts.strict, lenient: opts.lenient, clock: opts.clock, ...(textMode ? { textMode } : {}), ...(opts.idPrefix !== undefined ? { idPrefix: opts.idPrefix } : {}), ...(opts.style !== undefined ? { style: opts.style } : {}), ...(opts.locale ? { locale: opts.locale } : {}), ...(opts.data ? { data: true } : {}) }, env);
   } catch (e) {
     const detail = opts.debug ? `\n${(e as Error).stack}` : '';
     return { ok: false, rationale: [], diagnostics: [diagnostic('render.internal', `chartwright failed unexpectedly: ${(e as Error).message}${detail}`, { file, hint: 'rerun with --debug and report it with the brief and data' })] };

@@ -18,9 +18,9 @@ function withAlt(scene: Scene, alt: string | undefined, brief: ResolvedBrief): S
 }
 
 /** The alt text of a single chart (what it is, its main reading, and its notes, at most MAX_ALT_CHARS), and the form's own table of what it draws, if it gives one. */
-export function chartAlt(scene: Scene, form: AnyForm, derived: unknown, ctx: LayoutContext): Scene {
+export function chartAlt(scene: Scene, form: AnyForm, derived: unknown, ctx: LayoutContext, withData = false): Scene {
   const s = sentencesOf(form, derived, ctx);
-  const data = form.data?.(derived);
+  const data = withData ? form.data?.(derived) : undefined;
   return withAlt(data ? { ...scene, data } : scene, s && capSentences([...s.head, ...s.notes]), ctx.brief);
 }
 

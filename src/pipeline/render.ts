@@ -48,6 +48,8 @@ export interface RenderRequest {
   lenient?: boolean;
   /** Treat warnings as errors. Default: false. */
   strict?: boolean;
+  /** Keep the form's own table of the numbers it draws on the scene (`scene.data`, for --data). Default: false. */
+  data?: boolean;
   /** Write the chart's numbers and dates in this locale instead of the brief's `locale:` (the CLI's --locale). Default: the brief's. */
   locale?: Locale;
   /**
@@ -155,12 +157,18 @@ export async function loadInputs(req: RenderRequest, env: RenderEnv, lap: (stage
   return { inputs: { brief, parsed, style: style.value, table: table.value, file: req.file }, brief, diagnostics };
 }
 
+/** How the core stages run: `lenient` draws the nearest honest form; `data` also keeps the form's own table of what it draws (for --data; a million-cell heat map's table costs a second). */
+export interface RenderOptions {
+  lenient?: boolean;
+  data?: boolean;
+}
+
 /**
  * The pure core of a render: inputs → fields → choice → derived → scene → SVG, synchronous, with
  * output that depends on its inputs alone. Never throws for bad input: every problem is a
  * diagnostic on the result.
  */
-export function renderInputs(inputs: RenderInputs, measure: TextMeasurer, opts: { lenient?: boolean } = {}, lap: (stage: string) => void = () => {}): Omit<RenderResult, 'ok' | 'timings'> {
+export function renderInputs(inputs: RenderInputs, measure: TextMeasurer, opts: RenderOptions = {}, lap: (stage: string) => void = () => {}): Omit<RenderResult, 'ok' | 'timings'> {
   const result = renderCore(inputs, measure, opts, lap);
   if (!result.diagnostics.some((d) => d.code === 'layout.frame-too-small')) return result;
   // A frame too small says which frame would do: found by rendering at larger sizes, as the user would set them.
@@ -168,7 +176,7 @@ export function renderInputs(inputs: RenderInputs, measure: TextMeasurer, opts: 
   return { ...result, diagnostics: withSmallestFrame(result.diagnostics, smallestFrame(inputs.brief.size, renders)) };
 }
 
-function renderCore(inputs: RenderInputs, measure: TextMeasurer, opts: { lenient?: boolean }, lap: (stage: string) => void): Omit<RenderResult, 'ok' | 'timings'> {
+function renderCore(inputs: RenderInputs, measure: TextMeasurer, opts: RenderOptions, lap: (stage: string) => void): Omit<RenderResult, 'ok' | 'timings'> {
   const { brief, parsed, style, table, file } = inputs;
   const all: Diagnostic[] = [];
   const locate = (ds: Diagnostic[]) => inFile(withPositions(ds, parsed), file);
@@ -204,7 +212,7 @@ function renderCore(inputs: RenderInputs, measure: TextMeasurer, opts: { lenient
   const laid = layoutChart(form, derived.value, ctx);
   all.push(...locate(laid.diagnostics));
   lap('layout');
-  return { brief, choice: choice.value, rationale, scene: chartAlt(laid.scene, form, derived.value, ctx), diagnostics: all };
+  return { brief, choice: choice.value, rationale, scene: chartAlt(laid.scene, form, derived.value, ctx, !!opts.data), diagnostics: all };
 }
 
 /** The text mode of a render: the request's, else the style's, else embed. */
@@ -253,7 +261,7 @@ export async function renderBrief(req: RenderRequest, env: RenderEnv): Promise<R
   if (!loaded.inputs) return finish({ ...(loaded.brief ? { brief: loaded.brief } : {}), rationale: [], diagnostics: loaded.diagnostics });
   let result: Omit<RenderResult, 'ok' | 'timings'>;
   try {
-    result = { ...renderInputs(loaded.inputs, env.measureFor(loaded.inputs.style), { lenient: req.lenient }, watch.lap), style: loaded.inputs.style };
+    result = { ...renderInputs(loaded.inputs, env.measureFor(loaded.inputs.style), { lenient: req.lenient, data: req.data }, watch.lap), style: loaded.inputs.style };
   } catch (e) {
     // Bad input never throws (it is a diagnostic); what does is a defect, reported as one, never a crash.
     return finish({ brief: loaded.inputs.brief, rationale: [], diagnostics: [...loaded.diagnostics, diagnostic('render.internal', `chartwright failed unexpectedly while drawing: ${(e as Error).message}; this is a defect in chartwright`, { file: req.file, hint: 'please report it with the brief and data' })] });

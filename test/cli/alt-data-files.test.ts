@@ -50,6 +50,12 @@ describe('--alt and --data', () => {
     expect(readFileSync(join(dir, 'piers.data.csv'), 'utf8')).toMatch(/^pier,crossings/);
   });
 
+  it('a render not asked for its data keeps no data table on the scene (a million-cell heat map built one in a second on every render)', async () => {
+    const heat = demoBriefs().find((f) => f.includes('marsh-birds.yaml'))!;
+    expect((await renderDemo(heat)).result.scene!.data).toBeUndefined();
+    expect((await renderDemo(heat, { data: true })).result.scene!.data!.rows.length).toBeGreaterThan(0);
+  });
+
   it('explain --json carries the alt text', async () => {
     const dir = workspace();
     const cli = io(dir);
@@ -61,7 +67,7 @@ describe('--alt and --data', () => {
 describe('the data CSV', () => {
   it('round-trips: parsed with d3-dsv, every gallery chart\'s CSV holds the data of its drawn marks', async () => {
     for (const file of demoBriefs()) {
-      const { result } = await renderDemo(file);
+      const { result } = await renderDemo(file, { data: true });
       const scene = result.scene!;
       const text = tableCsv(drawnData(scene));
       const parsed = csvParse(text.replaceAll('\r\n', '\n'));
