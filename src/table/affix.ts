@@ -19,9 +19,14 @@ export interface Affixed {
   unit?: string;
 }
 
+/** A cell of digits, signs, points and commas only: no affix to split. */
+const BARE = /^[+-]?[\d.,]*$/;
+
 /** Splits a cell into its number text and its unit sign; a cell with two unit signs or two minus signs is left as it is. */
 export function splitAffix(text: string): Affixed {
   const t = text.trim();
+  // Digits, signs and marks alone carry no affix: the common cell skips the long pattern.
+  if (BARE.test(t)) return { core: t };
   const m = AFFIXED.exec(t);
   if (!m) return { core: t };
   const [, before = '', lead, after = '', body = '', trail] = m;

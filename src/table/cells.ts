@@ -6,6 +6,9 @@ const MISSING_TOKENS = new Set(['', 'na', 'n/a', 'null', 'nan', 'none', '#n/a', 
 
 /** True for a cell that means "no value". */
 export function isMissingText(text: string): boolean {
+  // No token starts with a digit: the numbers of a large table skip the copying.
+  const first = text.charCodeAt(0);
+  if (first >= 48 && first <= 57) return false;
   return MISSING_TOKENS.has(text.trim().toLowerCase());
 }
 
@@ -40,6 +43,8 @@ const INFINITE = /^[+-]?(inf|infinity)$/i;
  * or percent sign and thousands grouped by spaces are read past (see affix.ts).
  */
 export function parseNumberText(text: string, decimal: DecimalMark = '.'): number | undefined {
+  // Most cells of a large table are plain numbers: read them before the affix and grouping rules.
+  if (decimal === '.' && PLAIN_NUMBER.test(text)) return Number(text);
   const t = splitAffix(text).core.replace(/^\u2212/, '-');
   if (decimal === '.') {
     if (PLAIN_NUMBER.test(t)) return Number(t);
