@@ -20,12 +20,15 @@ export function maxAreaRadius(plot: { width: number; height: number }): number {
   return Math.max(8, Math.min(24, Math.min(plot.width, plot.height) / 16));
 }
 
-/** The span [lo, hi] of some values, widened by `pad` of its length at each end (a lone value gets ±10 %, or ±1 at zero). */
+/** The span [lo, hi] of some values, widened by `pad` of its length at each end but not across zero (a lone value gets ±10 %, or ±1 at zero). */
 function padded(values: Iterable<number>, pad: number): [number, number] {
   const [lo, hi] = extent(values) as [number | undefined, number | undefined];
   if (lo === undefined || hi === undefined) return [0, 1];
   if (hi === lo) { const d = Math.abs(lo) * 0.1 || 1; return [lo - d, hi + d]; }
-  return [lo - (hi - lo) * pad, hi + (hi - lo) * pad];
+  // Room for the marks never carries an axis across zero: all-positive values (a distance, a
+  // count) get no negative ticks, all-negative ones no positive ticks.
+  const [a, b] = [lo - (hi - lo) * pad, hi + (hi - lo) * pad];
+  return [lo >= 0 ? Math.max(0, a) : a, hi <= 0 ? Math.min(0, b) : b];
 }
 
 /**

@@ -26,6 +26,19 @@ describe('perceptual contracts on the gallery\'s scatter and dot charts', () => 
 });
 
 describe('scatter contracts on edge cases', () => {
+  it('values that are all zero or more get no negative ticks, and all zero or less no positive ones (regression: −250 ly on a distance axis)', async () => {
+    const rows = [[4.2, 1.5], [8.6, 25], [11.4, 0.0017], [310, 120000], [860, 60000], [2600, 350000]].map(([d, l], i) => ({ star: `S${i}`, d, l, neg: -l! }));
+    for (const values of [['d', 'l'], ['d', 'neg']]) {
+      const r = await renderRows({ intent: 'correlation', values, fields: { d: { unit: 'ly' }, l: { unit: 'units' }, neg: { unit: 'units' } } }, rows);
+      expect(r.ok).toBe(true);
+      const [x, y] = [r.scene!.axes.find((a) => a.orient === 'bottom')!, r.scene!.axes.find((a) => a.orient === 'left')!];
+      expect(Math.min(...(x.ticks as number[]))).toBeGreaterThanOrEqual(0);
+      const yTicks = y.ticks as number[];
+      if (values[1] === 'l') expect(Math.min(...yTicks)).toBeGreaterThanOrEqual(0);
+      else expect(Math.max(...yTicks)).toBeLessThanOrEqual(0);
+    }
+  });
+
   it('circle area is proportional to the area value: a 4× value gets a 2× radius, r² ratio within 1 %', async () => {
     const rows = [{ x: 1, y: 1, a: 1 }, { x: 2, y: 3, a: 4 }, { x: 3, y: 2, a: 16 }, { x: 4, y: 5, a: 9 }];
     const r = await renderRows({ intent: 'correlation', values: ['x', 'y'], area: 'a' }, rows);
