@@ -19,6 +19,22 @@ function codePoint(ch: string): string {
   return `U+${ch.codePointAt(0)!.toString(16).toUpperCase().padStart(4, '0')}`;
 }
 
+/** How the warning's `expected` names the scripts no face could draw. */
+const FONTS_FOR = 'fonts for ';
+
+/**
+ * The note a figure carries when the missing-glyph warning is among its diagnostics: the
+ * scripts whose characters are drawn as boxes (never the characters themselves: they would be
+ * boxes too), so a reader of the PNG knows the boxes stand for text, not what the data holds.
+ */
+export function missingGlyphsNote(diagnostics: readonly Diagnostic[]): string | undefined {
+  const d = diagnostics.find((x) => x.code === 'layout.missing-glyphs');
+  if (!d?.expected?.startsWith(FONTS_FOR)) return undefined;
+  const scripts = d.expected.slice(FONTS_FOR.length).split(', ');
+  const named = scripts.length === 1 ? scripts[0]! : `${scripts.slice(0, -1).join(', ')} and ${scripts.at(-1)!}`;
+  return `Empty boxes stand for ${named} characters: no font for them was installed where this chart was made.`;
+}
+
 /**
  * The warning for characters no face can draw: the labels affected (a few quoted, shortened),
  * the scripts of the characters (e.g. Han, Arabic) and their first code points, with the
@@ -39,7 +55,7 @@ export function missingGlyphsWarning(missingByText: ReadonlyArray<{ text: string
   const packages = [...new Set(scripts.flatMap((s) => packagesFor(s).slice(0, 1).map((p) => p.package)))];
   const install = packages.length ? `install the fallback font ${agree(packages.length, 'package', 'packages')} (npm install ${packages.join(' ')}), or ` : '';
   return [diagnostic('layout.missing-glyphs', `no font can draw ${count(chars.size, 'character')} (${scripts.join(', ')}: ${points}) in ${count(labels.length, 'label')}: ${quoted}; ${agree(chars.size, 'it is', 'they are')} drawn as empty boxes`, {
-    found: labels.slice(0, MAX_LABELS).map(shortened).join(' | '), expected: `fonts for ${scripts.join(', ')}`,
+    found: labels.slice(0, MAX_LABELS).map(shortened).join(' | '), expected: `${FONTS_FOR}${scripts.join(', ')}`,
     hint: `${install}name a font file that has them in the style's font.fallback`,
   })];
 }

@@ -17,6 +17,7 @@ import { timeScale } from './time-scale.js';
 import type { FacetHooks } from './facet-types.js';
 import { NO_ROOM, bottomRange, bottomTime } from './bottom-axis.js';
 import { agree, count } from '../diagnostics/words.js';
+import { missingGlyphsNote } from '../font/missing-report.js';
 
 export { placeFormLabels };
 
@@ -243,21 +244,34 @@ export function layoutCartesian<D>(form: CartesianForm<D>, derived: D, ctx: Layo
 /** One composition of a chart: with extra notes, leaving out the labels of `drop` (by id). */
 export type Composition = (ctx: LayoutContext, extraNotes: string[], drop: ReadonlySet<string>) => Composed;
 
+/** The notes of a second composition: what the first left out, and why some text is boxes. */
+function notesFor(dropped: readonly Composed['dropped'][number][], glyphs: string | undefined): string[] {
+  const n = dropped.length;
+  const left = n ? [`${n} label${n === 1 ? ' is' : 's are'} left out where ${n === 1 ? 'it' : 'they'} would overlap other text (${dropped.slice(0, 3).map((l) => l.text).join(', ')}${n > 3 ? ', …' : ''}).`] : [];
+  return [...(glyphs ? [glyphs] : []), ...left];
+}
+
 /**
- * Runs a composition, and when it had to leave labels out, runs it again with a note that says
- * so (the note takes room from the plot). The second run starts its ids afresh (the same ids in
- * the same order) and keeps the labels left out the first time out, so the note stays true.
+ * Runs a composition, and when it had to leave labels out, or drew characters no font has as
+ * boxes, runs it again with notes that say so (a note takes room from the plot). A later run
+ * starts its ids afresh (the same ids in the same order) and keeps the labels left out before,
+ * so the note stays true; when only the glyph note made labels fall out, a third run names them.
  */
 export function withUnplacedNote(composition: Composition, ctx: LayoutContext): { scene: Scene; diagnostics: Diagnostic[] } {
   const first = composition(ctx, [], new Set());
-  // A frame too small for its words says so; a note about labels would only crowd it more.
-  if (first.dropped.length === 0 || first.diagnostics.some((d) => d.code === 'layout.frame-too-small')) return first;
-  const n = first.dropped.length;
-  const note = `${n} label${n === 1 ? ' is' : 's are'} left out where ${n === 1 ? 'it' : 'they'} would overlap other text (${first.dropped.slice(0, 3).map((l) => l.text).join(', ')}${n > 3 ? ', …' : ''}).`;
-  const second = composition({ ...ctx, id: idMaker() }, [note], new Set(first.dropped.map((l) => l.id)));
-  const m = second.dropped.length;
+  const glyphs = missingGlyphsNote(first.diagnostics);
+  // A frame too small for its words says so; a note would only crowd it more.
+  if ((first.dropped.length === 0 && !glyphs) || first.diagnostics.some((d) => d.code === 'layout.frame-too-small')) return first;
+  let dropped = first.dropped;
+  let run = composition({ ...ctx, id: idMaker() }, notesFor(dropped, glyphs), new Set(dropped.map((l) => l.id)));
+  if (dropped.length === 0 && run.dropped.length > 0) {
+    dropped = run.dropped;
+    run = composition({ ...ctx, id: idMaker() }, notesFor(dropped, glyphs), new Set(dropped.map((l) => l.id)));
+  }
+  if (dropped.length === 0) return run;
+  const [n, m] = [dropped.length, run.dropped.length];
   const unplaced = diagnostic('layout.labels-unplaced', `${count(m, 'label')} would overlap other text and ${agree(m, 'is', 'are')} left out; the chart's note names ${n === m ? 'them' : `${n} of them`}`, {
-    found: first.dropped[0]!.text, hint: 'make the chart larger with `size:`, or use fewer or shorter labels',
+    found: dropped[0]!.text, hint: 'make the chart larger with `size:`, or use fewer or shorter labels',
   });
-  return { scene: second.scene, diagnostics: [...second.diagnostics, unplaced] };
+  return { scene: run.scene, diagnostics: [...run.diagnostics, unplaced] };
 }

@@ -6,6 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { createNodeEnv } from '../../src/io/node-env.js';
 import { outlineSvg, renderBrief } from '../../src/pipeline/render.js';
 import { env, root, tempDir } from '../helpers.js';
+import { dumpScene } from '../../src/scene/dump.js';
 
 const arabicFile = join(root, 'node_modules', '@embedpdf', 'fonts-arabic', 'fonts', 'NotoNaskhArabic-Regular.ttf');
 const hebrewFile = join(root, 'node_modules', '@embedpdf', 'fonts-hebrew', 'fonts', 'NotoSansHebrew-Regular.ttf');
@@ -49,6 +50,15 @@ describe('fallback faces for other scripts', () => {
     expect(warning!.message).not.toContain('São Paulo');
     expect(warning!.hint).toContain('@embedpdf/fonts-jp');
     expect(warning!.hint).toContain('@embedpdf/fonts-arabic');
+    // The figure says so too, in words its own font can draw (a PNG reader sees no terminal).
+    const notes = dumpScene(r.scene!).texts.filter((t) => t.role === 'note').map((t) => t.text).join(' ');
+    expect(notes).toContain('Empty boxes stand for Han, Arabic, Katakana and Hiragana characters');
+    expect(bare.measure.missing(notes, 'regular')).toEqual([]);
+  });
+
+  it('puts no glyph note in a figure whose every character has a font', async () => {
+    const r = await renderBrief({ brief: multilingual }, env);
+    expect(dumpScene(r.scene!).texts.some((t) => t.role === 'note' && t.text.startsWith('Empty boxes'))).toBe(false);
   });
 });
 
