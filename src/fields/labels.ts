@@ -1,6 +1,6 @@
 import type { Locale } from '../brief/types.js';
 import type { Column, DateGrain } from '../table/types.js';
-import { localeDef } from './locales.js';
+import { LOCALE_DEFS, localeDef } from './locales.js';
 
 /**
  * Writes a UTC time at a grain, in a locale's names (default English): "2026", "Oct 2026",
@@ -35,13 +35,21 @@ export function keyText(column: Column, row: number, locale?: Locale): string | 
   return column.text[row] ?? String(value);
 }
 
-/** Whether a word is a month or weekday name written with its capital ("May", "Sept", "Mon"), which keeps its capital inside a sentence. */
+/**
+ * Month and weekday names, lower case: the calendar cycles below (English) and the month names
+ * of every locale's table, full and abbreviated ("Sept.", "Okt." without their point), so a date
+ * label of `locale: de` keeps its capital too.
+ */
+let calendarWords: ReadonlySet<string> | undefined;
+
+/** Whether a word is a month or weekday name written with its capital ("May", "Sept", "Mon", "Okt"), which keeps its capital inside a sentence. */
 function calendarName(word: string): boolean {
-  const lower = word.toLowerCase();
-  return /^\p{Lu}\p{Ll}+$/u.test(word) && (lower === 'sept' || CYCLES.slice(0, CALENDAR_CYCLES).some((c) => c.includes(lower)) || PROPER_DE.test(word));
+  calendarWords ??= new Set([
+    ...CYCLES.slice(0, CALENDAR_CYCLES).flat(),
+    ...Object.values(LOCALE_DEFS).flatMap((d) => [...d.months, ...d.shortMonths]).map((m) => m.replace(/\.$/, '').toLowerCase()),
+  ]);
+  return /^\p{Lu}\p{Ll}+$/u.test(word) && calendarWords.has(word.toLowerCase());
 }
-// So do the German month names a date label of `locale: de` starts with (only in sentences: column names are read as before).
-const PROPER_DE = /^(Januar|Februar|März|April|Mai|Juni|Juli|August|September|Oktober|November|Dezember|Jan|Feb|Apr|Aug|Sept|Okt|Nov|Dez)$/;
 
 /**
  * A label as it reads inside a sentence ("Bar chart of crossings per day"): only a first word

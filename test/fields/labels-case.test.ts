@@ -15,6 +15,8 @@ describe('labels keep the case they were written in', () => {
     ['Water Temperature', 'water Temperature'],
     ['Sept rainfall', 'Sept rainfall'],
     ['Mon to Fri crossings', 'Mon to Fri crossings'],
+    ['Okt. 2026 takings', 'Okt. 2026 takings'], // a German date label (locale: de) keeps its capital too
+    ['März to Mai', 'März to Mai'],
   ])('in a sentence, %j reads %j', (label, sentence) => {
     expect(inSentence(label)).toBe(sentence);
   });
