@@ -20,10 +20,10 @@ export function oneLine(text: string): string {
   // Tested first: a table of a million cells has almost none, and replace() would copy each.
   return CONTROL.test(text) ? text.replace(CONTROL_RUN, ' ').trim() : text.trim();
 }
-// eslint-disable-next-line no-control-regex
-const CONTROL = /[\u0000-\u001f\u007f-\u009f\u2028\u2029]/;
-// eslint-disable-next-line no-control-regex
-const CONTROL_RUN = / *[\u0000-\u001f\u007f-\u009f\u2028\u2029]+ */g;
+/** C0 and C1 controls and the Unicode line and paragraph separators. */
+const CONTROLS = '[\\u0000-\\u001f\\u007f-\\u009f\\u2028\\u2029]';
+const CONTROL = new RegExp(CONTROLS);
+const CONTROL_RUN = new RegExp(` *${CONTROLS}+ *`, 'g');
 
 /** The mark between a number's whole and fractional parts. */
 export type DecimalMark = '.' | ',';
