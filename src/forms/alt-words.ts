@@ -1,4 +1,5 @@
 import { format } from 'd3-format';
+import { agree } from '../diagnostics/words.js';
 
 /**
  * A chart's alt text in parts: what it is ("Bar chart of crossings per day by pier, 8 bars"),
@@ -15,7 +16,7 @@ export interface AltText {
 
 /** "1 bar", "2,630 values": a count with its digits grouped, as the chart writes counts, and its noun agreeing. */
 export function count(n: number, noun: string, plural = `${noun}s`): string {
-  return `${format(',')(n)} ${n === 1 ? noun : plural}`;
+  return `${format(',')(n)} ${agree(n, noun, plural)}`;
 }
 
 /** The longest alt text written, in characters: past it, sentences are left out and the text says how many (common practice: screen-reader descriptions are read whole, so they stay short). */
